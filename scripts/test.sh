@@ -10,13 +10,17 @@ PG_PORT="${TACKLINE_TEST_PG_PORT:-54718}"
 PG_BASE="$PWD/.tmp/pg-test-$PG_PORT"
 
 ensure_node_modules
-if [ ! -x /usr/bin/chromium ]; then
+# Debian packages the browser and PDF tests need: Chromium, and pdftoppm (poppler-utils).
+need=()
+[ -x /usr/bin/chromium ] || need+=(chromium)
+command -v pdftoppm >/dev/null || need+=(poppler-utils)
+if [ ${#need[@]} -gt 0 ]; then
   if [ "$(id -u)" -eq 0 ]; then
-    pg_log "installing Debian's chromium for the browser tests (first run only)…"
+    pg_log "installing Debian packages for the tests (first run only): ${need[*]}"
     export DEBIAN_FRONTEND=noninteractive
-    apt-get install -y -q chromium >/dev/null 2>&1 || { apt-get update -q >/dev/null && apt-get install -y -q chromium >/dev/null; }
+    apt-get install -y -q "${need[@]}" >/dev/null 2>&1 || { apt-get update -q >/dev/null && apt-get install -y -q "${need[@]}" >/dev/null; }
   else
-    pg_log "Chromium missing: sudo apt-get install -y chromium"; exit 1
+    pg_log "missing Debian packages: sudo apt-get install -y ${need[*]}"; exit 1
   fi
 fi
 
