@@ -1,0 +1,332 @@
+/**
+ * Result types of `computeSpool` (shared/engine/compute-spool.ts).
+ *
+ * Conventions for every field below:
+ * - lengths and coordinates in millimetres, masses in kg, angles in degrees;
+ * - points and directions in plant coordinates: x = east, y = north, z = up;
+ * - directions are unit vectors;
+ * - a length that cannot be computed (bad geometry, missing table data) is `null`,
+ *   never negative, never NaN; the reason is in `issues`.
+ */
+import type { Vec3 } from '../schemas/spool-design-primitives.schema';
+import type { SpoolNodeKind } from '../schemas/spool-design-node.schema';
+import type { RunLengthKind } from '../schemas/spool-design-run.schema';
+import type { Nps } from '../standards/nps';
+import type { Schedule } from '../standards/pipe-schedules';
+import type { IssueCode } from './issue-codes';
+
+export type { Vec3 };
+
+/** Spec values after defaults and overrides are applied (all present). Lengths in mm. */
+export type ResolvedSpec = {
+  nps: Nps | null;
+  material: string;
+  fittingMaterial: string;
+  flangeMaterial: string;
+  schedule: Schedule;
+  flangeClass: 150 | 300;
+  rootGapMm: number;
+  sawKerfMm: number;
+  minPieceLengthMm: number;
+  socketGapMm: number;
+  boltHoleToleranceMm: number;
+};
+
+/** One problem found in the design. `componentId` is a node id or a run id. */
+export type Issue = {
+  severity: 'error' | 'warning';
+  code: IssueCode;
+  message: string;
+  componentId?: string;
+};
+
+/** An axis-aligned box in plant coordinates, mm. */
+export type Box = { min: Vec3; max: Vec3; sizeMm: Vec3 };
+
+/** How one end of a component (or the pipe) is joined. */
+export type JointKind = 'butt' | 'socket' | 'slip-on' | 'set-on' | 'flange-face' | 'open';
+
+/** One connection end of a component: where the pipe (or the next fitting) meets it. */
+export type ComponentEnd = {
+  /** The run that leaves or enters here; null for an open end (flange face, open socket). */
+  runId: string | null;
+  /** Centre of the end (weld end, socket mouth or face), mm plant. */
+  point: Vec3;
+  /** Unit vector pointing out of the component through this end. */
+  outward: Vec3;
+  nps: Nps;
+  odMm: number | null;
+  joint: JointKind;
+  /**
+   * Distance from the component's work point to where the pipe end sits, along the run
+   * (centre-to-end for butt welds, to the pipe end for sockets and slip-ons), mm.
+   * null when the standards table has no data.
+   */
+  takeOffMm: number | null;
+};
+
+/** Shape data for drawing a component in 3D or on an isometric. */
+export type ComponentShape =
+  | {
+      type: 'elbow';
+      /** Centre of curvature, mm plant. */
+      arcCentre: Vec3;
+      bendRadiusMm: number;
+      angleDeg: number;
+      /** 'fitting' or 'mitre' (mitre: `mitreWelds` welds, each deflecting angleDeg / mitreWelds). */
+      construction: 'fitting' | 'mitre';
+      mitreWelds: number | null;
+      /** Unit normal of the bend plane (incoming × outgoing). */
+      planeNormal: Vec3;
+    }
+  | { type: 'return'; arcCentre: Vec3; bendRadiusMm: number; centreToCentreMm: number; planeNormal: Vec3 }
+  | { type: 'tee'; runAxis: Vec3; branchAxis: Vec3; branchNps: Nps }
+  | { type: 'set-on-branch'; headerAxis: Vec3; branchAxis: Vec3; branchNps: Nps; angleDeg: number; orientationDeg: number | null }
+  | { type: 'branch-connection'; headerAxis: Vec3; branchAxis: Vec3; branchNps: Nps; orientationDeg: number | null; heightMm: number | null }
+  | { type: 'reducer'; largeEnd: Vec3; smallEnd: Vec3; largeOdMm: number | null; smallOdMm: number | null; eccentric: boolean; lengthMm: number | null }
+  | {
+      type: 'flange';
+      /** Centre of the raised face, mm plant. */
+      faceCentre: Vec3;
+      /** Unit normal out of the face, away from the pipe. */
+      outward: Vec3;
+      odMm: number | null;
+      thicknessMm: number | null;
+      hubLengthMm: number | null;
+      boltCircleMm: number | null;
+      boltCount: number | null;
+      blind: boolean;
+    }
+  | { type: 'cap'; axis: Vec3; lengthMm: number | null }
+  | { type: 'open-end'; axis: Vec3 }
+  | { type: 'socket-fitting'; fitting: 'elbow90' | 'elbow45' | 'tee' | 'coupling' | 'cap' | null };
+
+/** A component at a node, placed in 3D. */
+export type ComponentResult = {
+  nodeId: string;
+  kind: SpoolNodeKind;
+  /** Sheet description, e.g. `Elbow 90° LR NPS 14 STD, ASME B16.9`. */
+  description: string;
+  nps: Nps | null;
+  /** The node's work point, mm plant. */
+  position: Vec3;
+  ends: ComponentEnd[];
+  shape: ComponentShape;
+  /** The standards table (and row) the dimensions came from; null if none. */
+  source: string | null;
+  massKg: number | null;
+};
+
+/** A run, placed and resolved. */
+export type RunResult = {
+  runId: string;
+  from: string;
+  to: string;
+  nps: Nps | null;
+  schedule: Schedule;
+  /** Unit direction from `from` to `to`. */
+  direction: Vec3;
+  /** Where the run leaves `from` (its work point, or a return/eccentric port), mm plant. */
+  start: Vec3;
+  /** Where the run reaches `to`, mm plant. */
+  end: Vec3;
+  lengthKind: RunLengthKind;
+  /** Stated length, mm. */
+  statedMm: number;
+  /** Start-to-end distance along the run, mm (derived when the length is a cut length). */
+  workPointDistanceMm: number;
+  takeOffFromMm: number | null;
+  takeOffToMm: number | null;
+  /** Root gaps (and socket gaps are inside the take-offs) counted on this run, mm. */
+  gapsMm: number;
+  /** Pipe length that lies in this run, mm; 0 for close-coupled fittings, null when impossible. */
+  pipeLengthMm: number | null;
+  /** Fittings welded straight together (no pipe). */
+  closeCoupled: boolean;
+  pieceMark: string | null;
+};
+
+/** End preparation of a pipe-piece end (ASME B16.25 for bevels). */
+export type EndPrep = {
+  /** 'bevel' 37.5°, 'compound-bevel' (wall over 22 mm), 'square', 'saddle' (set-on branch), 'mitre'. */
+  type: 'bevel' | 'compound-bevel' | 'square' | 'saddle' | 'mitre';
+  /** As printed: `bevel 37.5°`, `square`, `saddle (set-on NPS 14)`, `mitre 22.5°`. */
+  label: string;
+  /** The node this end meets. */
+  nodeId: string;
+};
+
+/** One pipe piece of the cut list. */
+export type PipePiece = {
+  /** P1, P2, … in tree order. */
+  mark: string;
+  /** Runs this piece lies in (several when a header passes a branch connection). */
+  runIds: string[];
+  nps: Nps;
+  schedule: Schedule;
+  material: string;
+  heat: string | null;
+  odMm: number | null;
+  wallMm: number | null;
+  /** Saw length, mm (field-fit allowance included); null when the geometry is impossible. */
+  cutLengthMm: number | null;
+  /** For a saddle-cut end: the cut length to the long point; this is the shortest generator, mm. */
+  shortPointLengthMm: number | null;
+  fieldFitAllowanceMm: number;
+  /** Cut + one saw kerf, mm: what the piece takes from stock. */
+  stockLengthMm: number | null;
+  /** Centre of the pipe's own start and end faces, mm plant. */
+  start: Vec3;
+  end: Vec3;
+  ends: [EndPrep, EndPrep];
+  massKg: number | null;
+};
+
+/** Weld type for the weld map. */
+export type WeldType = 'butt' | 'socket' | 'branch' | 'flange' | 'slip-on-fillet';
+
+/** One numbered joint. */
+export type WeldResult = {
+  /** W1, W2, … in tree order. */
+  mark: string;
+  type: WeldType;
+  nps: Nps;
+  /** Nominal size in inches, counted in diameter-inches. */
+  diameterInches: number;
+  location: 'shop' | 'field';
+  /** Weld centre, mm plant. */
+  position: Vec3;
+  nodeId: string;
+  runId: string | null;
+  /** What the weld joins, e.g. `P3 to elbow n2`. */
+  joins: string;
+};
+
+/** Bolt-hole orientation of one flange. */
+export type FlangeOrientation = {
+  nodeId: string;
+  type: 'weld-neck-flange' | 'slip-on-flange';
+  nps: Nps;
+  flangeClass: 150 | 300;
+  boltCount: number | null;
+  boltCircleMm: number | null;
+  faceCentre: Vec3;
+  /** Unit normal out of the face. */
+  outward: Vec3;
+  /** What angles are measured from: the plant vertical, or plant north for a face looking up or down. */
+  reference: 'plant-vertical' | 'plant-north';
+  /** First hole, degrees clockwise seen facing the flange, from the reference, in [0, 360). */
+  rotationDeg: number;
+  /** Unit vector from the flange centre to the first hole. */
+  firstHoleDirection: Vec3;
+  /** Holes straddle the principal centrelines (first hole 180/n° off). */
+  straddles: boolean;
+  mustTwoHole: boolean;
+  /** First hole measured the same way from the plane of the nearest bend (bench reference); null if none. */
+  bendPlaneRotationDeg: number | null;
+  bendPlaneNodeId: string | null;
+  /** Rotation that makes the holes straddle, when they must and do not. */
+  correction: RotationCorrection | null;
+};
+
+/** Rotate `flangeId` by `rotateDeg` (positive) in `sense`, seen facing its face. */
+export type RotationCorrection = {
+  flangeId: string;
+  rotateDeg: number;
+  sense: 'clockwise' | 'counter-clockwise';
+  /** The same correction as arc length at the bolt circle, mm. */
+  atBoltCircleMm: number | null;
+};
+
+/**
+ * Two flanges compared: flange `a`'s first hole carried through the spool's bends to `b`
+ * (what a fitter gets by matching `b` to `a` along the spool) against `b`'s holes as designed.
+ */
+export type FlangePairCheck = {
+  a: string;
+  b: string;
+  /** Faces parallel (same or opposite direction). */
+  parallelFaces: boolean;
+  /** Signed rotation error, degrees, within ± half a hole pitch of `b`. */
+  errorDeg: number | null;
+  /** |error| as arc length at `b`'s bolt circle, mm. */
+  errorMm: number | null;
+  toleranceMm: number;
+  withinTolerance: boolean | null;
+  correction: RotationCorrection | null;
+};
+
+/** An open end of the spool and its centre-to-face dimension. */
+export type OpenEnd = {
+  nodeId: string;
+  endType: 'weld-neck-flange' | 'slip-on-flange' | 'bevel' | 'plain' | 'cap' | 'socket-cap';
+  /** Face (flange), pipe end (bevel/plain) or tip (cap), mm plant. */
+  facePoint: Vec3;
+  outward: Vec3;
+  /** Work point of the nearest fitting back along the run, and the distance to it, mm. */
+  fromNodeId: string | null;
+  centreToFaceMm: number | null;
+};
+
+/** Overall dimensions. */
+export type OverallDimensions = {
+  /** Box of all work points, faces and ends, mm plant. */
+  workPointBox: Box;
+  /** Box including the pipe and fitting outside radii: the shipping envelope, mm plant. */
+  envelopeBox: Box;
+};
+
+/** A bill-of-materials line. */
+export type BomItem = {
+  category: 'pipe' | 'fitting' | 'flange' | 'socket-fitting' | 'branch-outlet';
+  description: string;
+  nps: Nps;
+  count: number;
+  /** Pipe lines: total cut length and stock length (cut + kerf per cut), mm. */
+  totalCutMm: number | null;
+  totalStockMm: number | null;
+};
+
+/** Bill of materials. */
+export type BillOfMaterials = { items: BomItem[] };
+
+/** A weighed item. */
+export type WeightItem = { ref: string; description: string; massKg: number; waterKg: number; centroid: Vec3 };
+
+/** Weights and centres of gravity (estimates; see `caution`). */
+export type WeightResult = {
+  emptyKg: number;
+  waterKg: number;
+  waterFilledKg: number;
+  /** Centre of gravity empty, mm plant; null for a weightless design. */
+  centreOfGravity: Vec3 | null;
+  centreOfGravityFilled: Vec3 | null;
+  items: WeightItem[];
+  /** Components left out of the weight (no dimensions to weigh them by). */
+  notIncluded: string[];
+  caution: string;
+};
+
+/** Everything `computeSpool` returns. */
+export type SpoolResult = {
+  format: 'tackline.spool-result';
+  version: 1;
+  /** True when there is no error-severity issue: the numbers may be sawn by. */
+  ok: boolean;
+  spec: ResolvedSpec;
+  /** Work point of every node, mm plant. */
+  workPoints: { nodeId: string; position: Vec3 }[];
+  components: ComponentResult[];
+  runs: RunResult[];
+  pieces: PipePiece[];
+  welds: WeldResult[];
+  /** Sum of nominal sizes of all welds, inches. */
+  diameterInches: number;
+  flanges: FlangeOrientation[];
+  flangePairs: FlangePairCheck[];
+  openEnds: OpenEnd[];
+  overall: OverallDimensions | null;
+  bom: BillOfMaterials;
+  weights: WeightResult;
+  issues: Issue[];
+};

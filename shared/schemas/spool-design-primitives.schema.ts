@@ -1,0 +1,43 @@
+import { z } from 'zod';
+
+/**
+ * A 3D vector or point in plant coordinates, millimetres: x = east, y = north, z = up.
+ * Used for positions (mm) and for directions (any length; the engine normalises).
+ */
+export const vec3Schema = z
+  .object({
+    x: z.number().finite(),
+    y: z.number().finite(),
+    z: z.number().finite(),
+  })
+  .strict();
+/** A plant-coordinate vector (see {@link vec3Schema}). */
+export type Vec3 = z.infer<typeof vec3Schema>;
+
+/** A direction: a {@link vec3Schema} that is not the zero vector. Length is ignored. */
+export const directionSchema = vec3Schema.refine(
+  (v) => Math.hypot(v.x, v.y, v.z) > 1e-9,
+  { message: 'Direction must not be the zero vector' },
+);
+
+/**
+ * Id of a node or run inside one design: short, stable, chosen by the editor
+ * (e.g. `n1`, `r12`, a nanoid). Never reused for another component in the same design.
+ */
+export const elementIdSchema = z
+  .string()
+  .min(1, 'Id must not be empty')
+  .max(64, 'Id must be at most 64 characters')
+  .regex(/^[A-Za-z0-9_.:-]+$/, 'Id may use letters, digits, _ . : - only');
+/** A node or run id. */
+export type ElementId = z.infer<typeof elementIdSchema>;
+
+/** ASME B16.5 pressure class carried by Tackline's flange tables. */
+export const flangeClassSchema = z.union([z.literal(150), z.literal(300)], {
+  error: () => 'Flange class must be 150 or 300',
+});
+
+/** Elbow radius: long = 1.5 × NPS, short = 1.0 × NPS (ASME B16.9). */
+export const elbowRadiusSchema = z.enum(['long', 'short']);
+/** Elbow radius class. */
+export type ElbowRadius = z.infer<typeof elbowRadiusSchema>;

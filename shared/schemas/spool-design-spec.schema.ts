@@ -1,0 +1,37 @@
+import { z } from 'zod';
+import { npsSchema } from '../standards/nps';
+import { scheduleSchema } from '../standards/pipe-schedules';
+import { flangeClassSchema } from './spool-design-primitives.schema';
+
+/**
+ * Spec values a design, a run or a node may set. Every field is optional: what a
+ * component leaves out comes from its run, then the design's `spec`, then the job
+ * defaults, then Tackline's built-in defaults (see `resolveSpec` in shared/engine).
+ * Lengths in mm.
+ */
+export const specOverridesSchema = z
+  .object({
+    /** Main line size for runs that state none (the root run's size). */
+    nps: npsSchema.optional(),
+    /** Pipe material, as the sheet prints it (e.g. `ASTM A106 Gr B`). */
+    material: z.string().trim().min(1).max(80).optional(),
+    /** Butt-weld fitting material (e.g. `ASTM A234 WPB`). */
+    fittingMaterial: z.string().trim().min(1).max(80).optional(),
+    /** Flange and forged socket-fitting material (e.g. `ASTM A105`). */
+    flangeMaterial: z.string().trim().min(1).max(80).optional(),
+    schedule: scheduleSchema.optional(),
+    flangeClass: flangeClassSchema.optional(),
+    /** Root opening of every open-root butt and branch weld, mm. */
+    rootGapMm: z.number().finite().min(0).max(10).optional(),
+    /** Saw kerf lost per cut, mm (bill of materials stock lengths). */
+    sawKerfMm: z.number().finite().min(0).max(20).optional(),
+    /** Shortest pipe piece the shop will fit and weld, mm. */
+    minPieceLengthMm: z.number().finite().min(0).max(10_000).optional(),
+    /** Expansion gap left at the bottom of every socket before welding, mm. */
+    socketGapMm: z.number().finite().min(0).max(5).optional(),
+    /** Allowed bolt-hole rotation between flanges, mm at the bolt circle. */
+    boltHoleToleranceMm: z.number().finite().min(0).max(20).optional(),
+  })
+  .strict();
+/** Partial spec values (a design's, a run's or a node's overrides). */
+export type SpecOverrides = z.infer<typeof specOverridesSchema>;

@@ -1,0 +1,58 @@
+import { z } from 'zod';
+import { spoolNodeSchema } from './spool-design-node.schema';
+import { spoolRunSchema } from './spool-design-run.schema';
+import { specOverridesSchema } from './spool-design-spec.schema';
+import { vec3Schema } from './spool-design-primitives.schema';
+
+/** Format name carried by every design document. */
+export const SPOOL_DESIGN_FORMAT = 'tackline.spool';
+/** Current format version. Bump it (and add a migration) on any breaking change. */
+export const SPOOL_DESIGN_VERSION = 1;
+
+/**
+ * The spool design object without the cross-field checks, for editors that want to
+ * extend or pick from it. Use {@link spoolDesignSchema} to validate.
+ */
+export const spoolDesignObjectSchema = z
+  .object({
+    format: z.literal(SPOOL_DESIGN_FORMAT),
+    version: z.literal(SPOOL_DESIGN_VERSION),
+    /** Spool mark as drawn (e.g. `CW-201-S03`); the server's spool record is authoritative. */
+    mark: z.string().trim().max(60).optional(),
+    /** Free text (line number, service). */
+    description: z.string().max(500).optional(),
+    /** Design-wide spec values; omitted ones come from the job defaults. */
+    spec: specOverridesSchema.optional(),
+    /** Plant position of the root node's work point, mm (x east, y north, z up). */
+    origin: vec3Schema,
+    /** Work points with their components. The root is the node no run points `to`. */
+    nodes: z.array(spoolNodeSchema).min(1, 'A design needs at least one node').max(5000),
+    /** Straight runs between nodes; together they must form one tree. */
+    runs: z.array(spoolRunSchema).max(5000),
+  })
+  .strict();
+
+/**
+ * Zod schema of a spool design document (format `tackline.spool`, version 1): a tree of
+ * nodes (work points with components) joined by runs (direction + length). Only the
+ * root's position, each run's direction and each run's length are stored; every other
+ * position is derived by the engine. Shape errors carry paths (`nodes.2.end.type`);
+ * duplicate ids are rejected here; tree and geometry problems are engine issues.
+ */
+export const spoolDesignSchema = spoolDesignObjectSchema.superRefine((design, ctx) => {
+  const seen = new Map<string, string>();
+  design.nodes.forEach((node, i) => {
+    const prior = seen.get(node.id);
+    if (prior) {
+      ctx.addIssue({ code: 'custom', path: ['nodes', i, 'id'], message: `Duplicate id "${node.id}" (already used by ${prior})` });
+    } else seen.set(node.id, `nodes.${i}`);
+  });
+  design.runs.forEach((run, i) => {
+    const prior = seen.get(run.id);
+    if (prior) {
+      ctx.addIssue({ code: 'custom', path: ['runs', i, 'id'], message: `Duplicate id "${run.id}" (already used by ${prior})` });
+    } else seen.set(run.id, `runs.${i}`);
+  });
+});
+/** A validated spool design. */
+export type SpoolDesign = z.infer<typeof spoolDesignSchema>;
