@@ -1,0 +1,71 @@
+import { z } from 'zod';
+
+const DEV_SESSION_SECRET = 'tackline-dev-session-secret-change-me';
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  DATABASE_URL: z.url().default('postgres://postgres@127.0.0.1:54717/tackline'),
+  // TACKLINE_PORT is what the scripts export; PORT wins when both are set.
+  PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  TACKLINE_PORT: z.coerce.number().int().min(1).max(65535).default(4717),
+  HOST: z.string().min(1).default('127.0.0.1'),
+  SESSION_SECRET: z.string().min(16).optional(),
+  PUBLIC_URL: z.url().optional(),
+  SIGN_IN_MAX_ATTEMPTS: z.coerce.number().int().min(1).default(10),
+  SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+  BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(10),
+  JSON_BODY_LIMIT: z.string().default('2mb'),
+});
+
+/** Everything the server reads from its environment, parsed once. */
+export interface ServerConfig {
+  nodeEnv: 'development' | 'test' | 'production';
+  databaseUrl: string;
+  port: number;
+  host: string;
+  sessionSecret: string;
+  /** True when SESSION_SECRET was not set and the development value is in use. */
+  usingDevSessionSecret: boolean;
+  publicUrl: string;
+  /** Cookies get `Secure` when the public URL is https. */
+  secureCookies: boolean;
+  signIn: { maxAttemptsPerAccount: number; maxAttemptsPerIp: number; windowMs: number };
+  bcryptCost: number;
+  jsonBodyLimit: string;
+  /** Seconds between pruning expired sessions; false turns pruning off (tests). */
+  sessionPruneSeconds: number | false;
+}
+
+/** Parses `env` (default `process.env`) into the server config; exits on a bad value. */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
+  const parsed = envSchema.safeParse(env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+  }
+  const e = parsed.data;
+  const port = e.PORT ?? e.TACKLINE_PORT;
+  if (!e.SESSION_SECRET) {
+    if (e.NODE_ENV === 'production') throw new Error('SESSION_SECRET must be set in production');
+  }
+  const publicUrl = e.PUBLIC_URL ?? `http://${e.HOST}:${port}`;
+  return {
+    nodeEnv: e.NODE_ENV,
+    databaseUrl: e.DATABASE_URL,
+    port,
+    host: e.HOST,
+    sessionSecret: e.SESSION_SECRET ?? DEV_SESSION_SECRET,
+    usingDevSessionSecret: !e.SESSION_SECRET,
+    publicUrl,
+    secureCookies: publicUrl.startsWith('https:'),
+    signIn: {
+      maxAttemptsPerAccount: e.SIGN_IN_MAX_ATTEMPTS,
+      // A looser per-address cap stops one client spraying many e-mails.
+      maxAttemptsPerIp: e.SIGN_IN_MAX_ATTEMPTS * 5,
+      windowMs: e.SIGN_IN_WINDOW_MINUTES * 60_000,
+    },
+    bcryptCost: e.BCRYPT_COST,
+    jsonBodyLimit: e.JSON_BODY_LIMIT,
+    sessionPruneSeconds: e.NODE_ENV === 'test' ? false : 15 * 60,
+  };
+}

@@ -1,0 +1,28 @@
+import 'reflect-metadata';
+import { DataSource } from 'typeorm';
+import { AuditEventEntity } from '../modules/audit/audit-event.entity';
+import { JobEntity } from '../modules/jobs/job.entity';
+import { OrganisationEntity } from '../modules/organisations/organisation.entity';
+import { SpoolRevisionEntity } from '../modules/revisions/spool-revision.entity';
+import { SpoolEntity } from '../modules/spools/spool.entity';
+import { UserEntity } from '../modules/users/user.entity';
+import { InitialSchema1764626400000 } from './migrations/1764626400000-initial-schema';
+
+/** Every entity, listed (not globbed) so tsx and the bundler both find them. */
+export const ENTITIES = [OrganisationEntity, UserEntity, JobEntity, SpoolEntity, SpoolRevisionEntity, AuditEventEntity];
+/** Every migration in order. Add new ones at the end. */
+export const MIGRATIONS = [InitialSchema1764626400000];
+
+/** A DataSource on `url`. Schema changes only through migrations, never synchronize. */
+export function createDataSource(url: string, options: { poolSize?: number } = {}): DataSource {
+  return new DataSource({
+    type: 'postgres',
+    url,
+    entities: ENTITIES,
+    migrations: MIGRATIONS,
+    migrationsTableName: 'typeorm_migrations',
+    synchronize: false,
+    logging: ['error'],
+    extra: { max: options.poolSize ?? 10, connectionTimeoutMillis: 5000 },
+  });
+}
