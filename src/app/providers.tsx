@@ -1,0 +1,8 @@
+import { QueryClientProvider } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+import { queryClient } from '../lib/query-client';
+
+/** App-wide providers: server state lives in TanStack Query. */
+export function AppProviders({ children }: { children: ReactNode }) {
+  return <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>;
+}
