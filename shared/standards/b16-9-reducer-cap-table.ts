@@ -1,0 +1,55 @@
+import type { Cell } from './b16-9-elbow-table';
+import type { Nps } from './nps';
+
+/** Concentric/eccentric reducer length H (by large end) and the small ends B16.9 lists. */
+export type ReducerRow = { large: Nps; h: Cell; smallEnds: readonly Nps[] };
+
+/** Cap length E up to the limiting wall, E1 above it, mm. */
+export type CapRow = { nps: Nps; e: Cell; e1: Cell; limitingWallMm: Cell };
+
+/** Where the S values come from. */
+export const REDUCER_CAP_SOURCES = {
+  reducer:
+    'ASME B16.9 reducer H: enggcyclopedia "Standard reducer dimensions" (NPS 1–10) and wermac butt-weld fittings part 4 (NPS 6 × 2½ = 140 mm); the small-end lists are from memory of the B16.9 table',
+  cap: 'ASME B16.9 cap E / E1: wermac caps table (alloysteelfittings mirror, where the columns are headed H / H1); limiting walls from memory',
+} as const;
+
+/**
+ * ASME B16.9 reducers, mm. H depends only on the large end. Tolerance on H ±2 mm (from memory).
+ */
+export const REDUCER_TABLE: readonly ReducerRow[] = [
+  { large: '3/4', h: [38, 'M'], smallEnds: ['1/2'] },
+  { large: '1', h: [51, 'S'], smallEnds: ['3/4', '1/2'] },
+  { large: '1-1/4', h: [51, 'M'], smallEnds: ['1', '3/4', '1/2'] },
+  { large: '1-1/2', h: [64, 'M'], smallEnds: ['1-1/4', '1', '3/4', '1/2'] },
+  { large: '2', h: [76, 'S'], smallEnds: ['1-1/2', '1-1/4', '1', '3/4'] },
+  { large: '2-1/2', h: [89, 'M'], smallEnds: ['2', '1-1/2', '1-1/4', '1'] },
+  { large: '3', h: [89, 'S'], smallEnds: ['2-1/2', '2', '1-1/2', '1-1/4'] },
+  { large: '4', h: [102, 'S'], smallEnds: ['3', '2-1/2', '2', '1-1/2'] },
+  { large: '5', h: [127, 'M'], smallEnds: ['4', '3', '2-1/2', '2'] },
+  { large: '6', h: [140, 'S'], smallEnds: ['5', '4', '3', '2-1/2'] },
+  { large: '8', h: [152, 'S'], smallEnds: ['6', '5', '4'] },
+  { large: '10', h: [178, 'S'], smallEnds: ['8', '6', '5', '4'] },
+  { large: '12', h: [203, 'M'], smallEnds: ['10', '8', '6', '5'] },
+  { large: '14', h: [330, 'M'], smallEnds: ['12', '10', '8', '6'] },
+  { large: '16', h: [356, 'M'], smallEnds: ['14', '12', '10', '8'] },
+  { large: '18', h: [381, 'M'], smallEnds: ['16', '14', '12', '10'] },
+  { large: '20', h: [508, 'M'], smallEnds: ['18', '16', '14', '12'] },
+  { large: '24', h: [508, 'M'], smallEnds: ['20', '18', '16', '14'] },
+];
+
+/**
+ * ASME B16.9 caps, mm. E applies to walls up to the limiting wall, E1 above it.
+ * Tolerance on E: ±3 mm for NPS ≤ 4, ±6 mm for NPS 5–24.
+ */
+export const CAP_TABLE: readonly CapRow[] = (
+  [
+    ['1/2', 25, 25, 4.57, 'M'], ['3/4', 25, 25, 3.81, 'M'], ['1', 38, 38, 4.57, 'S'],
+    ['1-1/4', 38, 38, 4.83, 'M'], ['1-1/2', 38, 38, 5.08, 'M'], ['2', 38, 44, 5.59, 'S'],
+    ['2-1/2', 38, 51, 7.11, 'M'], ['3', 51, 64, 7.62, 'S'], ['4', 64, 76, 8.64, 'S'],
+    ['5', 76, 89, 9.65, 'M'], ['6', 89, 102, 10.92, 'S'], ['8', 102, 127, 12.7, 'S'],
+    ['10', 127, 152, 12.7, 'S'], ['12', 152, 178, 12.7, 'S'], ['14', 165, 191, 12.7, 'M'],
+    ['16', 178, 203, 12.7, 'S'], ['18', 203, 229, 12.7, 'M'], ['20', 229, 254, 12.7, 'M'],
+    ['24', 267, 305, 12.7, 'S'],
+  ] as const
+).map(([nps, e, e1, wall, status]) => ({ nps, e: [e, status], e1: [e1, status], limitingWallMm: [wall, 'M'] }));

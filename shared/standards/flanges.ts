@@ -1,0 +1,143 @@
+import { FLANGE_SOURCES, FLANGE_TABLE, type FlangeRow } from './b16-5-flange-table';
+import { weakestStatus, type DataStatus } from './data-status';
+import { found, missing, type Lookup } from './lookup-result';
+import type { Nps } from './nps';
+import { pipeDimensions } from './pipe-schedules';
+
+/** ASME B16.5 pressure classes carried here. */
+export type FlangeClass = 150 | 300;
+
+/** Flange types carried here. */
+export type FlangeType = 'weld-neck' | 'slip-on' | 'blind';
+
+/** Classes and types as arrays, for schemas and pickers. */
+export const FLANGE_CLASSES = [150, 300] as const satisfies readonly FlangeClass[];
+export const FLANGE_TYPES = ['weld-neck', 'slip-on', 'blind'] as const satisfies readonly FlangeType[];
+
+/**
+ * Raised-face height for Classes 150 and 300 in the B16.5 metric tables (2 mm; the inch
+ * tables say 0.06 in = 1.6 mm, the height most inch-made flanges actually have).
+ */
+export const RAISED_FACE_MM = 2;
+
+/**
+ * Which raised-face convention the flange data follows. Printed on sheets beside flange
+ * dimensions so a checker using an older table is not misled.
+ */
+export const RAISED_FACE_CONVENTION =
+  'ASME B16.5-2003 and later: flange thickness and length through hub exclude the raised face (2 mm for Classes 150 and 300), which is given separately. Older tables include a 1.6 mm face in both.';
+
+/** Allowance added to the pipe wall for the slip-on setback (common practice, no source). */
+export const SLIP_ON_SETBACK_ALLOWANCE_MM = 3;
+
+/**
+ * How far the pipe end of a slip-on flange sits back from the flange face, mm: pipe wall
+ * plus about 3 mm, so the bore fillet weld does not reach the gasket face.
+ * Common practice, no source: the shop's WPS or the client's spec may set another value.
+ */
+export function slipOnSetbackMm(wallMm: number): number {
+  return wallMm + SLIP_ON_SETBACK_ALLOWANCE_MM;
+}
+
+/** Flange dimensions, mm unless the name says otherwise. */
+export type FlangeDimensions = {
+  odMm: number;
+  boltCircleMm: number;
+  boltCount: number;
+  /** Hole diameter converted from B16.5's inch value (exact ×25.4). */
+  boltHoleDiaMm: number;
+  boltHoleDiaIn: string;
+  /** Bolt or stud size, inches ('5/8'). */
+  boltSizeIn: string;
+  /** Flange thickness tf, excluding the raised face. */
+  thicknessMm: number;
+  /**
+   * Length through hub Y excluding the raised face: weld neck from the back of the raised
+   * face to the weld end; slip-on hub length; blind = its thickness.
+   */
+  hubLengthMm: number;
+  /** Raised-face height, added to thickness and hub length to reach the gasket face. */
+  raisedFaceMm: number;
+  raisedFaceDiaMm: number;
+  /** Hub diameter at the base X; absent for a blind flange (no hub). */
+  hubDiaAtBaseMm?: number;
+  /**
+   * Slip-on only: pipe end set back from the gasket face (common practice, no source:
+   * wall + 3 mm, using the given wall or STD wall when none is given).
+   */
+  slipOnSetbackMm?: number;
+  /** Weakest status of the values returned. */
+  status: DataStatus;
+  source: string;
+};
+
+/** Optional inputs: the wall of the pipe a slip-on receives (for its setback). */
+export type FlangeOptions = { pipeWallMm?: number };
+
+const BY_CLASS = {
+  150: new Map<Nps, FlangeRow>(FLANGE_TABLE[150].map((r) => [r.nps, r])),
+  300: new Map<Nps, FlangeRow>(FLANGE_TABLE[300].map((r) => [r.nps, r])),
+};
+
+/** Inch fraction text ('1-1/8', '7/8', '1') to a number of inches. */
+export function inchFractionToNumber(text: string): number {
+  const m = /^(?:(\d+)-)?(\d+)(?:\/(\d+))?$/.exec(text);
+  if (!m) return Number.NaN;
+  const whole = m[1] ? Number(m[1]) : 0;
+  return m[3] ? whole + Number(m[2]) / Number(m[3]) : whole + Number(m[2]);
+}
+
+/**
+ * ASME B16.5 flange dimensions for one size, class and type (mm), 2003+ raised-face
+ * convention (see {@link RAISED_FACE_CONVENTION}).
+ */
+export function flangeDimensions(
+  nps: Nps,
+  flangeClass: FlangeClass,
+  type: FlangeType,
+  options: FlangeOptions = {},
+): Lookup<FlangeDimensions> {
+  const row = BY_CLASS[flangeClass]?.get(nps);
+  if (!row) return missing(`No ASME B16.5 Class ${String(flangeClass)} ${type} flange data for NPS ${nps}`);
+  const base = {
+    odMm: row.odMm,
+    boltCircleMm: row.boltCircleMm,
+    boltCount: row.boltCount,
+    boltHoleDiaMm: Math.round(inchFractionToNumber(row.holeIn) * 25.4 * 10) / 10,
+    boltHoleDiaIn: row.holeIn,
+    boltSizeIn: row.boltIn,
+    thicknessMm: row.tfMm,
+    raisedFaceMm: RAISED_FACE_MM,
+    raisedFaceDiaMm: row.raisedFaceDiaMm,
+    source: FLANGE_SOURCES[flangeClass] + (row.note ? ` (NPS ${nps}: ${row.note})` : ''),
+  };
+  switch (type) {
+    case 'weld-neck':
+      return found({
+        ...base,
+        hubLengthMm: row.yWeldNeckMm,
+        hubDiaAtBaseMm: row.hubBaseMm,
+        status: weakestStatus(row.drillingStatus, row.yWeldNeckStatus, row.bodyStatus),
+      });
+    case 'slip-on': {
+      const wall = options.pipeWallMm ?? stdWall(nps);
+      if (wall === undefined || !Number.isFinite(wall) || wall <= 0) {
+        return missing(`A slip-on flange setback needs the pipe wall as a positive number of mm for NPS ${nps}`);
+      }
+      return found({
+        ...base,
+        hubLengthMm: row.ySlipOnMm,
+        hubDiaAtBaseMm: row.hubBaseMm,
+        slipOnSetbackMm: slipOnSetbackMm(wall),
+        status: weakestStatus(row.drillingStatus, row.bodyStatus),
+      });
+    }
+    case 'blind':
+      return found({ ...base, hubLengthMm: row.tfMm, status: weakestStatus(row.drillingStatus, row.bodyStatus) });
+  }
+}
+
+function stdWall(nps: Nps): number | undefined {
+  const p = pipeDimensions(nps, 'STD');
+  return p.ok ? p.value.wallMm : undefined;
+}

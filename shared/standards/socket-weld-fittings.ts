@@ -1,0 +1,104 @@
+import { weakestStatus, type DataStatus } from './data-status';
+import { found, missing, type Lookup } from './lookup-result';
+import type { Nps } from './nps';
+
+/** ASME B16.11 socket-weld fitting kinds carried here. */
+export type SocketFittingKind = 'elbow90' | 'elbow45' | 'tee' | 'coupling' | 'half-coupling' | 'cap';
+
+/** All kinds, for schemas and pickers. */
+export const SOCKET_FITTING_KINDS = ['elbow90', 'elbow45', 'tee', 'coupling', 'half-coupling', 'cap'] as const satisfies readonly SocketFittingKind[];
+
+/**
+ * Gap left between the pipe end and the socket bottom before welding, mm.
+ * ASME B31.3 (socket-weld figures) asks for "approximately 1.5 mm" in its metric text and
+ * 1/16 in in its inch text; 1.6 mm is the usual conversion. It is a fit-up gap, not a
+ * finished dimension (B31.1 says about 2 mm). Shops may configure their own.
+ */
+export const SOCKET_EXPANSION_GAP_MM = 1.6;
+
+/** Socket-weld fitting dimensions, mm. */
+export type SocketWeldDimensions = {
+  /** Socket bore B, minimum (the tolerance is plus only). */
+  socketBoreMm: number;
+  /** Socket depth J, minimum. */
+  socketDepthMm: number;
+  /**
+   * Elbows and tees: A, centre to bottom of socket. Coupling: half the laying length
+   * (centre of the coupling to either socket bottom). Half coupling: outside face to
+   * socket bottom.
+   */
+  centreToBottomMm: number;
+  /** Coupling: laying length E (socket bottom to socket bottom). */
+  lengthMm?: number;
+  status: DataStatus;
+  source: string;
+};
+
+type Row = {
+  nps: Nps;
+  bore: number;
+  depth: number;
+  /** 90° elbow, tee and cross A. */
+  a90: number;
+  /** 45° elbow A (from memory). */
+  a45: number;
+};
+
+const SOURCE_2016 = 'ASME B16.11-2016 Class 3000 socket-weld table (vaibhavfitting reproduction)';
+
+/**
+ * ASME B16.11-2016 Class 3000 socket-weld dimensions, metric (mm). Older metric editions
+ * round J to 10 / 13 / 16 mm and give B as a mean (≈ 21.95 for NPS ½). NPS 2-1/2 and up
+ * are not carried: socket welds above NPS 2 are rare and no checked table is at hand.
+ */
+const ROWS: readonly Row[] = [
+  { nps: '1/2', bore: 21.8, depth: 9.5, a90: 15.5, a45: 11.0 },
+  { nps: '3/4', bore: 27.2, depth: 12.5, a90: 19.0, a45: 13.0 },
+  { nps: '1', bore: 33.9, depth: 12.5, a90: 22.5, a45: 14.0 },
+  { nps: '1-1/4', bore: 42.7, depth: 12.5, a90: 27.0, a45: 17.0 },
+  { nps: '1-1/2', bore: 48.8, depth: 12.5, a90: 32.0, a45: 20.5 },
+  { nps: '2', bore: 61.2, depth: 16.0, a90: 38.0, a45: 25.5 },
+];
+
+/** Coupling laying length E (socket bottom to socket bottom), NPS ½–2, from memory. */
+const COUPLING_LAYING_MM = 6.5;
+
+const BY_NPS = new Map<Nps, Row>(ROWS.map((r) => [r.nps, r]));
+
+/** ASME B16.11 Class 3000 socket-weld fitting dimensions for one size and kind, mm. */
+export function socketWeldDimensions(nps: Nps, kind: SocketFittingKind): Lookup<SocketWeldDimensions> {
+  const row = BY_NPS.get(nps);
+  if (!row) return missing(`No ASME B16.11 Class 3000 socket-weld ${kind} data for NPS ${nps}`);
+  const socket = { socketBoreMm: row.bore, socketDepthMm: row.depth };
+  switch (kind) {
+    case 'elbow90':
+    case 'tee':
+      return found({ ...socket, centreToBottomMm: row.a90, status: 'S', source: SOURCE_2016 });
+    case 'elbow45':
+      return found({
+        ...socket,
+        centreToBottomMm: row.a45,
+        status: weakestStatus('S', 'M'),
+        source: `${SOURCE_2016}; 45° elbow A from memory`,
+      });
+    case 'coupling':
+      return found({
+        ...socket,
+        centreToBottomMm: COUPLING_LAYING_MM / 2,
+        lengthMm: COUPLING_LAYING_MM,
+        status: 'M',
+        source: `${SOURCE_2016}; coupling laying length from memory`,
+      });
+    case 'half-coupling':
+    case 'cap':
+      return missing(`No ASME B16.11 Class 3000 socket-weld ${kind} data for NPS ${nps}: the lengths are not carried yet`);
+  }
+}
+
+/**
+ * How far a pipe end goes into a socket, mm: socket depth less the expansion gap.
+ * The cut length of a pipe between two sockets is C–C − (A₁ + gap) − (A₂ + gap).
+ */
+export function socketInsertionMm(socketDepthMm: number, gapMm: number = SOCKET_EXPANSION_GAP_MM): number {
+  return socketDepthMm - gapMm;
+}
