@@ -5,6 +5,7 @@ import { setUnauthorizedHandler } from '../lib/api-client';
 import { queryClient } from '../lib/query-client';
 import { authKeys } from '../features/auth/api/auth-keys';
 import { requireUser } from './require-user';
+import { NotFoundPage } from './routes/not-found';
 import { RouteError } from './routes/route-error';
 import { signInUrl } from './safe-next';
 
@@ -33,7 +34,7 @@ export const router = createBrowserRouter([
           { path: 'jobs/:jobId', lazy: () => import('./routes/job') },
           { path: 'spools/:spoolId', lazy: () => import('./routes/spool') },
           { path: 'users', lazy: () => import('./routes/users') },
-          { path: '*', lazy: () => import('./routes/not-found') },
+          { path: '*', Component: NotFoundPage },
         ],
       },
     ],

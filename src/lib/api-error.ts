@@ -86,3 +86,8 @@ export function messageOf(error: unknown): string {
   if (error instanceof Error) return error.message;
   return 'Something went wrong.';
 }
+
+/** A record that does not exist for this user: 404, or an id the server refused as malformed (400). */
+export function isMissing(error: unknown): boolean {
+  return error instanceof ApiError && (error.status === 404 || (error.status === 400 && error.code === 'invalid_request'));
+}

@@ -15,7 +15,3 @@ export function NotFoundPage({ what = 'page' }: { what?: string }) {
     </div>
   );
 }
-
-export function Component() {
-  return <NotFoundPage />;
-}

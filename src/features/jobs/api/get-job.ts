@@ -11,7 +11,7 @@ export function getJob(id: string, signal?: AbortSignal): Promise<Job> {
 export const jobQueryOptions = (id: string) =>
   queryOptions({ queryKey: jobKeys.detail(id), queryFn: ({ signal }) => getJob(id, signal) });
 
-/** A job by id. */
+/** A job by id; waits while the id is still unknown (empty). */
 export function useJob(id: string) {
-  return useQuery(jobQueryOptions(id));
+  return useQuery({ ...jobQueryOptions(id), enabled: id !== '' });
 }

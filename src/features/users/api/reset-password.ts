@@ -2,7 +2,7 @@ import { useMutation } from '@tanstack/react-query';
 import type { PasswordReset } from '../../../../shared/schemas/user.schema';
 import { apiRequest } from '../../../lib/api-client';
 
-/** Sets a new password for a user (admin); their other sessions end on the server. */
+/** Sets a new password for a user (admin). */
 export function resetPassword(id: string, body: PasswordReset): Promise<void> {
   return apiRequest<void>(`/users/${encodeURIComponent(id)}/reset-password`, { method: 'POST', body });
 }

@@ -1,0 +1,168 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useEffect, type ReactNode } from 'react';
+import { useForm } from 'react-hook-form';
+import { jobCreateSchema, type Job, type JobCreate, type JobCreateInput } from '../../../../shared/schemas/job.schema';
+import { Button } from '../../../components/ui/Button';
+import { InlineError } from '../../../components/ui/ErrorState';
+import { SelectField, TextField } from '../../../components/ui/Field';
+import { ApiError, issuesOf } from '../../../lib/api-error';
+import { applyServerIssues } from '../../../lib/form-errors';
+import { formatLength } from '../../../lib/format-length';
+import { jobStatusDisplay } from './JobStatusBadge';
+
+const FIELDS = [
+  'number',
+  'title',
+  'client',
+  'site',
+  'units',
+  'status',
+  'spec.material',
+  'spec.schedule',
+  'spec.flangeClass',
+  'spec.rootGapMm',
+  'spec.sawKerfMm',
+  'spec.minPieceLengthMm',
+] as const;
+
+/** Defaults for a new job: the shop's usual carbon-steel spec (editable per job). */
+export const newJobDefaults: JobCreateInput = {
+  number: '',
+  title: '',
+  client: '',
+  site: '',
+  units: 'mm',
+  status: 'active',
+  spec: {
+    material: 'ASTM A106 Gr B',
+    schedule: 'STD',
+    flangeClass: 150,
+    rootGapMm: 3,
+    sawKerfMm: 3,
+    minPieceLengthMm: 50,
+  },
+};
+
+function valuesOf(job: Job): JobCreateInput {
+  return {
+    number: job.number,
+    title: job.title,
+    client: job.client,
+    site: job.site,
+    units: job.units,
+    status: job.status === 'archived' ? 'active' : job.status,
+    spec: { ...job.spec },
+  };
+}
+
+const flangeClasses = [150, 300, 400, 600, 900, 1500, 2500].map((c) => ({ value: String(c), label: `Class ${c}` }));
+const unitOptions = [
+  { value: 'mm', label: 'Millimetres (mm)' },
+  { value: 'ft-in', label: 'Feet-inches (to 1/16")' },
+];
+const statusOptions = (['active', 'on-hold', 'complete'] as const).map((s) => ({ value: s, label: jobStatusDisplay[s].label }));
+
+interface JobFormProps {
+  /** The job being edited; absent for a new job. */
+  job?: Job;
+  submitLabel: string;
+  busy: boolean;
+  error: unknown;
+  onSubmit: (values: JobCreate) => void;
+  onCancel: () => void;
+  /** Shown above the buttons, e.g. the stale-version notice. */
+  notice?: ReactNode;
+}
+
+/** Job details and default spec, validated with the shared job schema; server issues land on their fields. */
+export function JobForm({ job, submitLabel, busy, error, onSubmit, onCancel, notice }: JobFormProps) {
+  const {
+    register,
+    handleSubmit,
+    setError,
+    watch,
+    formState: { errors },
+  } = useForm({ resolver: zodResolver(jobCreateSchema), defaultValues: job ? valuesOf(job) : newJobDefaults });
+
+  useEffect(() => {
+    if (error) applyServerIssues(error, setError, FIELDS);
+    if (error instanceof ApiError && error.code === 'duplicate') {
+      setError('number', { type: 'server', message: 'Another job already has this number.' });
+    }
+  }, [error, setError]);
+
+  const units = watch('units') ?? 'mm';
+  const inUnits = (mm: unknown) =>
+    units === 'ft-in' && typeof mm === 'number' && Number.isFinite(mm) ? `≈ ${formatLength(mm, 'ft-in')}` : undefined;
+  const placedOnField = issuesOf(error).some((i) => (FIELDS as readonly string[]).includes(i.path.join('.')));
+  const showGeneralError =
+    Boolean(error) && !placedOnField && !(error instanceof ApiError && (error.isStale || error.code === 'duplicate'));
+
+  return (
+    <form noValidate onSubmit={handleSubmit(onSubmit)} className="flex flex-col gap-5">
+      <fieldset className="grid gap-4 md:grid-cols-2">
+        <legend className="mb-2 font-display text-lg font-semibold text-ink-800">Job</legend>
+        <TextField label="Job number" mono placeholder="KPS-2041" error={errors.number?.message} {...register('number')} />
+        <TextField label="Title" placeholder="Condenser water, Hall B" error={errors.title?.message} {...register('title')} />
+        <TextField label="Client" error={errors.client?.message} {...register('client')} />
+        <TextField label="Site" error={errors.site?.message} {...register('site')} />
+        <SelectField label="Units on screens and sheets" options={unitOptions} error={errors.units?.message} {...register('units')} />
+        <SelectField label="Status" options={statusOptions} error={errors.status?.message} {...register('status')} />
+      </fieldset>
+      <fieldset className="grid gap-4 md:grid-cols-3">
+        <legend className="mb-2 font-display text-lg font-semibold text-ink-800">Default spec for new spools</legend>
+        <TextField label="Pipe material" error={errors.spec?.material?.message} {...register('spec.material')} />
+        <TextField label="Schedule / wall" mono error={errors.spec?.schedule?.message} {...register('spec.schedule')} />
+        <SelectField
+          label="Flange class (ASME B16.5)"
+          options={flangeClasses}
+          error={errors.spec?.flangeClass?.message}
+          {...register('spec.flangeClass', { setValueAs: (v) => Number(v) })}
+        />
+        <TextField
+          label="Root gap"
+          type="number"
+          inputMode="decimal"
+          step="0.1"
+          suffix="mm"
+          mono
+          hint={inUnits(watch('spec.rootGapMm')) ?? 'Per butt weld, taken off each cut length'}
+          error={errors.spec?.rootGapMm?.message}
+          {...register('spec.rootGapMm', { valueAsNumber: true })}
+        />
+        <TextField
+          label="Saw kerf"
+          type="number"
+          inputMode="decimal"
+          step="0.1"
+          suffix="mm"
+          mono
+          hint={inUnits(watch('spec.sawKerfMm')) ?? 'Lost per cut when nesting stock lengths'}
+          error={errors.spec?.sawKerfMm?.message}
+          {...register('spec.sawKerfMm', { valueAsNumber: true })}
+        />
+        <TextField
+          label="Shortest piece"
+          type="number"
+          inputMode="decimal"
+          step="1"
+          suffix="mm"
+          mono
+          hint={inUnits(watch('spec.minPieceLengthMm')) ?? 'Shorter cut lengths are flagged'}
+          error={errors.spec?.minPieceLengthMm?.message}
+          {...register('spec.minPieceLengthMm', { valueAsNumber: true })}
+        />
+      </fieldset>
+      {notice}
+      {showGeneralError ? <InlineError error={error} /> : null}
+      <div className="flex flex-wrap justify-end gap-2 border-t border-steel-200 pt-4">
+        <Button variant="ghost" onClick={onCancel}>
+          Cancel
+        </Button>
+        <Button type="submit" variant="primary" busy={busy}>
+          {submitLabel}
+        </Button>
+      </div>
+    </form>
+  );
+}
