@@ -1,0 +1,41 @@
+import {
+  SPOOL_DESIGN_FORMAT,
+  SPOOL_DESIGN_VERSION,
+  type SpoolDesign,
+} from '../../../../../shared/schemas/spool-design.schema';
+import type { EndSpec } from '../../../../../shared/schemas/spool-design-node.schema';
+import type { SpecOverrides } from '../../../../../shared/schemas/spool-design-spec.schema';
+import type { Vec3 } from '../../../../../shared/schemas/spool-design-primitives.schema';
+import type { Nps } from '../../../../../shared/standards/nps';
+import type { IdAllocator } from '../id-allocator';
+import { selectNode } from '../editor-selection';
+import { done, type CommandResult } from './command-result';
+
+/** Arguments of {@link startSpool}. */
+export type StartSpoolArgs = {
+  nps: Nps;
+  /** What sits at the first open end: a flange, a bevel end, a cap… */
+  end: EndSpec;
+  origin?: Vec3;
+  /** Design-wide spec (schedule, class, gaps) from the job. */
+  spec?: SpecOverrides;
+  mark?: string;
+};
+
+/**
+ * Starts a new design from one open end. It replaces whatever design was open; the
+ * editor keeps the old one on the undo stack.
+ */
+export function startSpool(args: StartSpoolArgs, ids: IdAllocator): CommandResult {
+  const id = ids.node();
+  const design: SpoolDesign = {
+    format: SPOOL_DESIGN_FORMAT,
+    version: SPOOL_DESIGN_VERSION,
+    ...(args.mark ? { mark: args.mark } : {}),
+    spec: { ...args.spec, nps: args.nps },
+    origin: args.origin ?? { x: 0, y: 0, z: 0 },
+    nodes: [{ id, kind: 'end', end: args.end }],
+    runs: [],
+  };
+  return done(design, `Start NPS ${args.nps} spool`, { select: selectNode(id) });
+}

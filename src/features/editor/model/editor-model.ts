@@ -1,0 +1,246 @@
+import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema';
+import type { SpoolResult } from '../../../../shared/engine/compute-result';
+import { elementKind } from './design-graph';
+import type { Selection } from './editor-selection';
+import { IdAllocator, idFloorOf, type IdFloor } from './id-allocator';
+import type { CommandContext } from './commands/command-context';
+import type { CommandResult } from './commands/command-result';
+import { DEFAULT_VIEW_PREFS, type ViewPrefs } from './view-prefs';
+
+/** Computes the engine result of a design (the real engine in the app and tests). */
+export type ComputeFn = (design: SpoolDesign) => SpoolResult;
+
+/** One entry of the undo or redo stack. */
+type HistoryEntry = { design: SpoolDesign | null; selection: Selection; label: string };
+
+/** Everything the UI reads, as one immutable value per change (for `useSyncExternalStore`). */
+export type EditorSnapshot = {
+  design: SpoolDesign | null;
+  selection: Selection;
+  view: ViewPrefs;
+  readOnly: boolean;
+  canUndo: boolean;
+  canRedo: boolean;
+  undoLabel: string | null;
+  redoLabel: string | null;
+  /** The last command's refusal, in plain words; cleared by the next success. */
+  lastError: string | null;
+  /** The last command's label (for a status line / screen readers). */
+  lastMessage: string | null;
+  /** Increases on every design change (autosave watches it). */
+  designRevision: number;
+};
+
+/** What a command call tells its caller. */
+export type CommandOutcome = { ok: true; label: string; removedIds: string[] } | { ok: false; error: string };
+
+/** Undo depth kept; older steps drop off. */
+const MAX_HISTORY = 200;
+
+/**
+ * The headless spool editor: the design, the selection and the view, commands with undo
+ * and redo, and the engine result derived from the design (computed once per design).
+ * No React, no three: the scene and the panels subscribe and send commands.
+ */
+export class EditorModel {
+  private design: SpoolDesign | null;
+  private selection: Selection = null;
+  private view: ViewPrefs = DEFAULT_VIEW_PREFS;
+  private readonly undoStack: HistoryEntry[] = [];
+  private readonly redoStack: HistoryEntry[] = [];
+  private lastError: string | null = null;
+  private lastMessage: string | null = null;
+  private designRevision = 0;
+  private idFloor: IdFloor;
+  private readOnly: boolean;
+  private snapshot: EditorSnapshot;
+  private readonly listeners = new Set<() => void>();
+  private resultFor: SpoolDesign | null = null;
+  private result: SpoolResult | null = null;
+
+  constructor(
+    private readonly compute: ComputeFn,
+    options: { design?: SpoolDesign | null; readOnly?: boolean } = {},
+  ) {
+    this.design = options.design ?? null;
+    this.readOnly = options.readOnly ?? false;
+    this.idFloor = idFloorOf(this.design);
+    this.snapshot = this.makeSnapshot();
+  }
+
+  /** Subscribes to every change; returns the unsubscribe function. */
+  subscribe = (listener: () => void): (() => void) => {
+    this.listeners.add(listener);
+    return () => this.listeners.delete(listener);
+  };
+
+  /** The current snapshot; the same object until something changes. */
+  getSnapshot = (): EditorSnapshot => this.snapshot;
+
+  /** The engine result of the current design, computed at most once per design. */
+  getResult(): SpoolResult | null {
+    if (!this.design) return null;
+    if (this.resultFor !== this.design) {
+      this.result = this.compute(this.design);
+      this.resultFor = this.design;
+    }
+    return this.result;
+  }
+
+  /**
+   * Runs a command against the current design. On success the old design goes on the
+   * undo stack and the redo stack is cleared; on failure nothing changes but the error.
+   */
+  apply(command: (design: SpoolDesign | null, ctx: CommandContext) => CommandResult): CommandOutcome {
+    if (this.readOnly) return this.refuse('This spool is read-only for your role');
+    const ids = new IdAllocator(this.design, this.idFloor);
+    let result: CommandResult;
+    try {
+      result = command(this.design, { result: this.getResult(), ids });
+    } catch (cause) {
+      // A command bug must not leave a half-edited design; report it as a refusal.
+      return this.refuse(cause instanceof Error ? cause.message : 'The change could not be made');
+    }
+    if (!result.ok) return this.refuse(result.error);
+    this.push(this.undoStack, { design: this.design, selection: this.selection, label: result.label });
+    this.redoStack.length = 0;
+    this.idFloor = ids.floor();
+    this.design = result.design;
+    this.selection = result.select !== undefined ? result.select : this.validSelection(this.selection);
+    this.lastError = null;
+    this.lastMessage = result.label;
+    this.designRevision += 1;
+    this.emit();
+    return { ok: true, label: result.label, removedIds: result.removedIds ?? [] };
+  }
+
+  /** Runs a command that needs a design (all but starting one). */
+  edit(command: (design: SpoolDesign, ctx: CommandContext) => CommandResult): CommandOutcome {
+    return this.apply((design, ctx) => (design ? command(design, ctx) : { ok: false, error: 'Start a spool first' }));
+  }
+
+  /** Steps back one change. */
+  undo(): boolean {
+    const entry = this.undoStack.pop();
+    if (!entry || this.readOnly) return false;
+    this.redoStack.push({ design: this.design, selection: this.selection, label: entry.label });
+    this.restore(entry, `Undid: ${entry.label}`);
+    return true;
+  }
+
+  /** Steps forward again after an undo. */
+  redo(): boolean {
+    const entry = this.redoStack.pop();
+    if (!entry || this.readOnly) return false;
+    this.undoStack.push({ design: this.design, selection: this.selection, label: entry.label });
+    this.restore(entry, `Redid: ${entry.label}`);
+    return true;
+  }
+
+  /** Selects a node or run (or nothing); unknown ids select nothing. */
+  select(selection: Selection): void {
+    const next = this.validSelection(selection);
+    if (sameSelection(next, this.selection)) return;
+    this.selection = next;
+    this.emit();
+  }
+
+  /** Changes what is shown (labels, view preset); never part of undo. */
+  setView(patch: Partial<Omit<ViewPrefs, 'labels'>> & { labels?: Partial<ViewPrefs['labels']> }): void {
+    this.view = { ...this.view, ...patch, labels: { ...this.view.labels, ...patch.labels } };
+    this.emit();
+  }
+
+  /** Snaps the camera to a preset (again, if it already is that preset). */
+  showPreset(preset: ViewPrefs['preset']): void {
+    this.setView({ preset, presetNonce: this.view.presetNonce + 1 });
+  }
+
+  /**
+   * Replaces the design from outside (loaded from the server, imported from a file,
+   * "take theirs" after a conflict). With `undoable` the previous design stays on the
+   * undo stack; otherwise history starts afresh.
+   */
+  replaceDesign(design: SpoolDesign | null, options: { undoable?: boolean; label?: string } = {}): void {
+    if (options.undoable && !this.readOnly) {
+      this.push(this.undoStack, { design: this.design, selection: this.selection, label: options.label ?? 'Replace design' });
+      this.redoStack.length = 0;
+    } else {
+      this.undoStack.length = 0;
+      this.redoStack.length = 0;
+    }
+    const floor = idFloorOf(design);
+    this.idFloor = { n: Math.max(floor.n, this.idFloor.n), r: Math.max(floor.r, this.idFloor.r) };
+    this.design = design;
+    this.selection = this.validSelection(this.selection);
+    this.lastError = null;
+    this.lastMessage = options.label ?? null;
+    this.designRevision += 1;
+    this.emit();
+  }
+
+  /** Switches read-only on or off (the user's role, an issued revision). */
+  setReadOnly(readOnly: boolean): void {
+    if (readOnly === this.readOnly) return;
+    this.readOnly = readOnly;
+    this.emit();
+  }
+
+  /** Clears the last error (e.g. when the user dismisses it). */
+  clearError(): void {
+    if (this.lastError === null) return;
+    this.lastError = null;
+    this.emit();
+  }
+
+  private refuse(error: string): CommandOutcome {
+    this.lastError = error;
+    this.emit();
+    return { ok: false, error };
+  }
+
+  private restore(entry: HistoryEntry, message: string): void {
+    this.design = entry.design;
+    this.selection = this.validSelection(entry.selection);
+    this.lastError = null;
+    this.lastMessage = message;
+    this.designRevision += 1;
+    this.emit();
+  }
+
+  private push(stack: HistoryEntry[], entry: HistoryEntry): void {
+    stack.push(entry);
+    if (stack.length > MAX_HISTORY) stack.shift();
+  }
+
+  private validSelection(selection: Selection): Selection {
+    if (!selection || !this.design) return null;
+    const kind = elementKind(this.design, selection.id);
+    return kind === selection.type ? selection : null;
+  }
+
+  private makeSnapshot(): EditorSnapshot {
+    return {
+      design: this.design,
+      selection: this.selection,
+      view: this.view,
+      readOnly: this.readOnly,
+      canUndo: !this.readOnly && this.undoStack.length > 0,
+      canRedo: !this.readOnly && this.redoStack.length > 0,
+      undoLabel: this.undoStack.at(-1)?.label ?? null,
+      redoLabel: this.redoStack.at(-1)?.label ?? null,
+      lastError: this.lastError,
+      lastMessage: this.lastMessage,
+      designRevision: this.designRevision,
+    };
+  }
+
+  private emit(): void {
+    this.snapshot = this.makeSnapshot();
+    for (const listener of this.listeners) listener();
+  }
+}
+
+function sameSelection(a: Selection, b: Selection): boolean {
+  return a === b || (a !== null && b !== null && a.type === b.type && a.id === b.id);
+}

@@ -1,0 +1,29 @@
+/** Camera presets: isometric, plan (looking down), elevations looking north and east. */
+export type ViewPreset = 'iso' | 'plan' | 'elev-north' | 'elev-east';
+
+/** What the viewer chooses to see; not part of the design, not saved with it. */
+export type ViewPrefs = {
+  labels: {
+    /** Work-point to work-point dimensions between fittings. */
+    centreToCentre: boolean;
+    /** Fitting centre to flange face or open end. */
+    centreToFace: boolean;
+    /** Cut length of each pipe piece. */
+    cutLengths: boolean;
+    /** Weld numbers. */
+    welds: boolean;
+  };
+  /** Centre of gravity marker with the weight. */
+  showCentreOfGravity: boolean;
+  preset: ViewPreset;
+  /** Bumped when the same preset is asked for again, so the camera snaps back. */
+  presetNonce: number;
+};
+
+/** Defaults: every label on, isometric. */
+export const DEFAULT_VIEW_PREFS: ViewPrefs = {
+  labels: { centreToCentre: true, centreToFace: true, cutLengths: true, welds: true },
+  showCentreOfGravity: true,
+  preset: 'iso',
+  presetNonce: 0,
+};
