@@ -15,7 +15,7 @@ import { SpoolStatusActions } from '../../features/spools/components/SpoolStatus
 import { SpoolStatusBadge } from '../../features/spools/components/SpoolStatusBadge';
 import { isMissing } from '../../lib/api-error';
 import { formatDateTime } from '../../lib/format-date';
-import { unitsLabel } from '../../lib/format-length';
+import { unitsLabel } from '../../lib/units-label';
 import { queryClient } from '../../lib/query-client';
 import { NotFoundPage } from './not-found';
 

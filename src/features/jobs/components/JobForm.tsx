@@ -7,7 +7,7 @@ import { InlineError } from '../../../components/ui/ErrorState';
 import { SelectField, TextField } from '../../../components/ui/Field';
 import { ApiError, issuesOf } from '../../../lib/api-error';
 import { applyServerIssues } from '../../../lib/form-errors';
-import { formatLength } from '../../../lib/format-length';
+import { formatLength } from '../../../../shared/units/length-format';
 import { jobStatusDisplay } from './JobStatusBadge';
 
 const FIELDS = [

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import type { Job } from '../../../../shared/schemas/job.schema';
-import { formatLength } from '../../../lib/format-length';
+import { formatLength } from '../../../../shared/units/length-format';
 
 /** A spec value in the job's units; ft-in jobs also show the stored millimetres. */
 function Dim({ mm, units }: { mm: number; units: Job['units'] }) {
