@@ -41,10 +41,13 @@ export interface ApiIssue {
   message: string;
 }
 
-/** Field-level issues from a 400 `invalid_request`, or an empty list. */
+/** Field-level issues from a 400 `invalid_request` (`details.issues`, or a bare list), or an empty list. */
 export function issuesOf(error: unknown): ApiIssue[] {
-  if (!(error instanceof ApiError) || !Array.isArray(error.details)) return [];
-  return error.details.filter(
+  if (!(error instanceof ApiError)) return [];
+  const d = error.details;
+  const list: unknown = Array.isArray(d) ? d : typeof d === 'object' && d !== null ? (d as { issues?: unknown }).issues : undefined;
+  if (!Array.isArray(list)) return [];
+  return list.filter(
     (d): d is ApiIssue =>
       typeof d === 'object' && d !== null && Array.isArray((d as ApiIssue).path) && typeof (d as ApiIssue).message === 'string',
   );
@@ -87,7 +90,10 @@ export function messageOf(error: unknown): string {
   return 'Something went wrong.';
 }
 
-/** A record that does not exist for this user: 404, or an id the server refused as malformed (400). */
+/** A record that does not exist for this user: 404, or an id in the path the server refused as malformed. */
 export function isMissing(error: unknown): boolean {
-  return error instanceof ApiError && (error.status === 404 || (error.status === 400 && error.code === 'invalid_request'));
+  if (!(error instanceof ApiError)) return false;
+  if (error.status === 404) return true;
+  const part = typeof error.details === 'object' && error.details !== null ? (error.details as { part?: unknown }).part : undefined;
+  return error.status === 400 && part === 'params';
 }

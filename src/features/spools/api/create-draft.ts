@@ -5,7 +5,7 @@ import { spoolKeys } from './spool-keys';
 
 /** Opens the spool's working draft (a copy of the latest issued design), or returns the one already open. */
 export function createDraft(spoolId: string): Promise<Revision> {
-  return apiRequest<Revision>(`/spools/${encodeURIComponent(spoolId)}/draft`, { method: 'POST' });
+  return apiRequest<Revision>(`/spools/${encodeURIComponent(spoolId)}/draft`, { method: 'POST', body: {} });
 }
 
 /** Start-draft mutation: refreshes the spool (its draft pointer) and its revisions. */
