@@ -1,0 +1,127 @@
+import connectPgSimple from 'connect-pg-simple';
+import express, { type Express, type RequestHandler } from 'express';
+import session from 'express-session';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import type { Pool } from 'pg';
+import type { DataSource } from 'typeorm';
+import { apiNotFound, errorMiddleware } from './common/error.middleware';
+import type { ServerConfig } from './config/env';
+import { writeAuditEvent, type AuditWriter } from './modules/audit/audit.service';
+import { authRouter } from './modules/auth/auth.router';
+import { AuthService } from './modules/auth/auth.service';
+import { createPassport } from './modules/auth/passport';
+import { healthRouter } from './modules/health/health.router';
+import { jobRouter } from './modules/jobs/job.router';
+import { JobService } from './modules/jobs/job.service';
+import { revisionRouter } from './modules/revisions/revision.router';
+import { RevisionService } from './modules/revisions/revision.service';
+import { jobSpoolRouter, spoolRouter } from './modules/spools/spool.router';
+import { SpoolService } from './modules/spools/spool.service';
+import { userRouter } from './modules/users/user.router';
+import { UserService } from './modules/users/user.service';
+
+/** Name of the session cookie. */
+export const SESSION_COOKIE = 'tackline.sid';
+const SESSION_MAX_AGE_MS = 12 * 60 * 60 * 1000; // one long shift
+
+/** What the app is built from. Tests pass their own DataSource and config; nothing listens here. */
+export interface AppOptions {
+  /** An initialised DataSource with migrations applied. */
+  dataSource: DataSource;
+  config: ServerConfig;
+  /** Audit writer; tests inject a failing one to prove transactions roll back. */
+  audit?: AuditWriter;
+  /** Folder of the built client to serve (with SPA fallback); null or missing folder: API only. */
+  clientDir?: string | null;
+  /** Where 500s are logged. */
+  log?: (message: string, err: unknown) => void;
+}
+
+/** Builds the Express app: JSON API under /api, and the built client when there is one. */
+export function createApp(options: AppOptions): Express {
+  const { dataSource: ds, config } = options;
+  const audit = options.audit ?? writeAuditEvent;
+
+  const authService = new AuthService(ds, audit);
+  const users = new UserService(ds, audit, config.bcryptCost);
+  const jobs = new JobService(ds, audit);
+  const spools = new SpoolService(ds, audit, jobs);
+  const revisions = new RevisionService(ds, audit, spools);
+  const passport = createPassport(authService);
+
+  const app = express();
+  app.disable('x-powered-by');
+  // Behind a local reverse proxy the client address comes from X-Forwarded-For.
+  app.set('trust proxy', 'loopback');
+  app.use(securityHeaders);
+
+  const api = express.Router();
+  api.use(express.json({ limit: config.jsonBodyLimit }));
+  api.use('/health', healthRouter(ds));
+
+  const PgStore = connectPgSimple(session);
+  api.use(
+    session({
+      name: SESSION_COOKIE,
+      secret: config.sessionSecret,
+      store: new PgStore({
+        // The DataSource's own pg pool: one pool per process, closed with the DataSource.
+        pool: (ds.driver as unknown as { master: Pool }).master,
+        tableName: 'session',
+        createTableIfMissing: false,
+        pruneSessionInterval: config.sessionPruneSeconds,
+      }),
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: config.secureCookies,
+        maxAge: SESSION_MAX_AGE_MS,
+        path: '/',
+      },
+    }),
+  );
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+
+  api.use(
+    '/auth',
+    authRouter({ passport, auth: authService, users, limits: config.signIn, cookieName: SESSION_COOKIE }),
+  );
+  api.use('/users', userRouter(users));
+  api.use('/jobs', jobRouter(jobs));
+  api.use('/jobs/:jobId/spools', jobSpoolRouter(spools));
+  api.use('/spools', spoolRouter(spools));
+  api.use('/spools', revisionRouter(revisions));
+  api.use(apiNotFound);
+
+  app.use('/api', api);
+
+  const clientDir = options.clientDir;
+  if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    // SPA fallback: every non-API GET gets index.html; React Router takes it from there.
+    app.get('/{*splat}', (req, res, next) => {
+      if (req.path === '/api' || req.path.startsWith('/api/')) return next();
+      res.set('Cache-Control', 'no-cache');
+      res.sendFile(path.join(clientDir, 'index.html'));
+    });
+  }
+
+  app.use(errorMiddleware(options.log));
+  return app;
+}
+
+const securityHeaders: RequestHandler = (_req, res, next) => {
+  res.set('X-Content-Type-Options', 'nosniff');
+  res.set('X-Frame-Options', 'DENY');
+  res.set('Referrer-Policy', 'same-origin');
+  next();
+};

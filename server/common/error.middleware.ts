@@ -1,0 +1,65 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { QueryFailedError } from 'typeorm';
+import { ZodError } from 'zod';
+import type { ErrorBody } from '../../shared/schemas/error.schema';
+import { AppError } from './app-error';
+import { summarise } from './validate.middleware';
+
+/** Unique constraints and what to tell the user when one is hit. */
+const DUPLICATE_MESSAGES: Record<string, string> = {
+  app_user_org_email_key: 'A user with this e-mail already exists in your shop',
+  job_org_number_key: 'A job with this number already exists in your shop',
+  spool_job_mark_key: 'A spool with this mark already exists in this job',
+};
+
+interface BodyParserError {
+  type?: string;
+  status?: number;
+  limit?: number;
+}
+
+/** Turns anything thrown into an AppError; unknown errors become a plain 500. */
+export function toAppError(err: unknown): AppError {
+  if (err instanceof AppError) return err;
+  if (err instanceof ZodError) {
+    return new AppError(400, 'invalid_request', `Invalid request: ${summarise(err)}`, { issues: err.issues });
+  }
+  const parser = err as BodyParserError;
+  if (parser && typeof parser === 'object' && typeof parser.type === 'string') {
+    if (parser.type === 'entity.too.large') {
+      return new AppError(413, 'payload_too_large', 'The request body is too large', { limitBytes: parser.limit });
+    }
+    if (parser.type === 'entity.parse.failed') {
+      return new AppError(400, 'invalid_request', 'The request body is not valid JSON', { reason: 'malformed_json' });
+    }
+    if (typeof parser.status === 'number' && parser.status >= 400 && parser.status < 500) {
+      return new AppError(parser.status === 413 ? 413 : 400, parser.status === 413 ? 'payload_too_large' : 'invalid_request',
+        'The request body could not be read');
+    }
+  }
+  if (err instanceof QueryFailedError) {
+    const driver = err.driverError as { code?: string; constraint?: string };
+    if (driver.code === '23505') {
+      const message = (driver.constraint && DUPLICATE_MESSAGES[driver.constraint]) ?? 'This record already exists';
+      return new AppError(409, 'duplicate', message);
+    }
+  }
+  return new AppError(500, 'internal_error', 'Something went wrong on the server. Nothing was saved.');
+}
+
+/** The one error middleware: every error leaves as `{ error: { code, message, details } }`. */
+export function errorMiddleware(log: (message: string, err: unknown) => void = console.error): ErrorRequestHandler {
+  return (err, req, res, next) => {
+    if (res.headersSent) return next(err);
+    const appError = toAppError(err);
+    if (appError.status >= 500) log(`[tackline] ${req.method} ${req.originalUrl} failed`, err);
+    const body: ErrorBody = { error: { code: appError.code, message: appError.message } };
+    if (appError.details !== undefined) body.error.details = appError.details;
+    res.status(appError.status).json(body);
+  };
+}
+
+/** 404 in the error shape for an /api path no route answers. */
+export const apiNotFound: RequestHandler = (req, _res, next) => {
+  next(new AppError(404, 'not_found', `No API route for ${req.method} ${req.path}`));
+};

@@ -1,0 +1,48 @@
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { createApp } from './app';
+import { loadConfig } from './config/env';
+import { createDataSource } from './db/data-source';
+
+/** Starts Tackline: migrations, then the API and the built client on HOST:PORT. */
+async function main(): Promise<void> {
+  const config = loadConfig();
+  if (config.usingDevSessionSecret) {
+    console.warn('[tackline] SESSION_SECRET is not set: using the development secret (never in production)');
+  }
+  const ds = createDataSource(config.databaseUrl);
+  await ds.initialize();
+  const applied = await ds.runMigrations({ transaction: 'each' });
+  if (applied.length) console.log(`[tackline] applied migrations: ${applied.map((m) => m.name).join(', ')}`);
+
+  const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+  const app = createApp({ dataSource: ds, config, clientDir: path.join(root, 'dist') });
+  const server = app.listen(config.port, config.host, () => {
+    console.log(`[tackline] listening on http://${config.host}:${config.port}`);
+  });
+  server.on('error', (err) => {
+    console.error('[tackline] could not listen:', err);
+    process.exit(1);
+  });
+
+  let stopping = false;
+  const shutdown = (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    console.log(`[tackline] ${signal}: stopping`);
+    // Finish in-flight requests, then close the pool; force-exit if something hangs.
+    const force = setTimeout(() => process.exit(1), 10_000);
+    force.unref();
+    server.close(() => {
+      ds.destroy().finally(() => process.exit(0));
+    });
+    server.closeIdleConnections();
+  };
+  process.on('SIGINT', () => shutdown('SIGINT'));
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+}
+
+main().catch((err: unknown) => {
+  console.error('[tackline] failed to start:', err);
+  process.exit(1);
+});

@@ -1,0 +1,209 @@
+import type { DataSource, EntityManager } from 'typeorm';
+import type { QueryDeepPartialEntity } from 'typeorm';
+import type { DraftIssue, DraftSave, Revision, RevisionSummary } from '../../../shared/schemas/revision.schema';
+import { notFound, staleVersion } from '../../common/app-error';
+import type { SessionActor } from '../../common/session-actor';
+import type { AuditWriter } from '../audit/audit.service';
+import { SpoolEntity } from '../spools/spool.entity';
+import { assertNotArchived, type SpoolService } from '../spools/spool.service';
+import { UserEntity } from '../users/user.entity';
+import { assertValidDesign } from './design-validation';
+import { toRevisionDto, toRevisionSummary, type RevisionWithAuthor } from './revision.mapper';
+import { nextRevisionLetter } from './revision-letter';
+import { SpoolRevisionEntity, type SpoolRevisionRow } from './spool-revision.entity';
+import { starterDesign } from './starter-design';
+
+/** Revisions of a spool: the one working draft, and the issued ones that never change. */
+export class RevisionService {
+  constructor(
+    private readonly ds: DataSource,
+    private readonly audit: AuditWriter,
+    private readonly spools: SpoolService,
+  ) {}
+
+  /** Newest first, without designs. */
+  async list(actor: SessionActor, spoolId: string): Promise<RevisionSummary[]> {
+    const spool = await this.spools.find(this.ds.manager, actor, spoolId);
+    const rows = await this.query(this.ds.manager, actor)
+      .andWhere('r.spoolId = :spoolId', { spoolId: spool.id })
+      .orderBy('r.createdAt', 'DESC')
+      .addOrderBy('r.letter', 'DESC')
+      .getRawAndEntities();
+    return withAuthors(rows).map(toRevisionSummary);
+  }
+
+  async get(actor: SessionActor, spoolId: string, revisionId: string): Promise<Revision> {
+    const row = await this.findOne(this.ds.manager, actor, { spoolId, id: revisionId });
+    if (!row) throw notFound('Revision');
+    return toRevisionDto(row);
+  }
+
+  /**
+   * The spool's working draft, created when missing from a copy of the current issued
+   * design (or a starter design). `created` says which happened.
+   */
+  async openDraft(actor: SessionActor, spoolId: string): Promise<{ created: boolean; draft: Revision }> {
+    return this.ds.transaction(async (m) => {
+      // Locking the spool serialises two people opening a draft at the same moment.
+      const spool = await this.spools.find(m, actor, spoolId, true);
+      const existing = await this.findOne(m, actor, { spoolId: spool.id, state: 'draft' });
+      if (existing) return { created: false, draft: toRevisionDto(existing) };
+      assertNotArchived(spool);
+      const letters = await m.getRepository(SpoolRevisionEntity).find({
+        select: { letter: true },
+        where: { spoolId: spool.id, organisationId: actor.organisationId },
+      });
+      const current = spool.currentRevisionId
+        ? await m.getRepository(SpoolRevisionEntity).findOneBy({
+            id: spool.currentRevisionId,
+            organisationId: actor.organisationId,
+          })
+        : null;
+      const row = await m.save(
+        SpoolRevisionEntity,
+        m.create(SpoolRevisionEntity, {
+          organisationId: actor.organisationId,
+          spoolId: spool.id,
+          letter: nextRevisionLetter(letters.map((l) => l.letter)),
+          state: 'draft',
+          design: current ? current.design : starterDesign(spool),
+          note: '',
+          authorId: actor.id,
+        }),
+      );
+      await this.audit(m, {
+        organisationId: actor.organisationId,
+        actorId: actor.id,
+        action: 'revision.open-draft',
+        entityType: 'spool_revision',
+        entityId: row.id,
+        details: { spoolId: spool.id, letter: row.letter, copiedFrom: current?.letter ?? null },
+      });
+      return { created: true, draft: toRevisionDto((await this.findOne(m, actor, { id: row.id }))!) };
+    });
+  }
+
+  /** Replaces the draft's design (and note). Stale version: 409 with the stored draft, nothing written. */
+  async saveDraft(actor: SessionActor, spoolId: string, input: DraftSave): Promise<Revision> {
+    assertValidDesign(input.design);
+    return this.ds.transaction(async (m) => {
+      const spool = await this.spools.find(m, actor, spoolId);
+      const draft = await this.lockDraft(m, actor, spool.id);
+      if (input.version !== draft.version) throw staleVersion(toRevisionDto(draft));
+      assertNotArchived(spool);
+      await m.update(
+        SpoolRevisionEntity,
+        { id: draft.id, organisationId: actor.organisationId, state: 'draft' },
+        {
+          // jsonb column: TypeORM's deep-partial type cannot express an open record.
+          design: input.design as QueryDeepPartialEntity<Record<string, unknown>>,
+          ...(input.note !== undefined ? { note: input.note } : {}),
+          // The last person to save a draft is its author.
+          authorId: actor.id,
+          version: draft.version + 1,
+          updatedAt: new Date(),
+        },
+      );
+      await this.audit(m, {
+        organisationId: actor.organisationId,
+        actorId: actor.id,
+        action: 'revision.save-draft',
+        entityType: 'spool_revision',
+        entityId: draft.id,
+        details: { spoolId: spool.id, letter: draft.letter, version: draft.version + 1 },
+      });
+      return toRevisionDto((await this.findOne(m, actor, { id: draft.id }))!);
+    });
+  }
+
+  /**
+   * Issues the draft in one transaction: the previous issued revision becomes superseded,
+   * the draft becomes issued, the spool points at it (and leaves `drafting`), and the
+   * audit event is written. Any failure rolls all of it back.
+   */
+  async issueDraft(actor: SessionActor, spoolId: string, input: DraftIssue): Promise<Revision> {
+    return this.ds.transaction(async (m) => {
+      const spool = await this.spools.find(m, actor, spoolId, true);
+      const draft = await this.lockDraft(m, actor, spool.id);
+      if (input.version !== undefined && input.version !== draft.version) throw staleVersion(toRevisionDto(draft));
+      assertNotArchived(spool);
+      assertValidDesign(draft.design);
+      const now = new Date();
+      const superseded = await m.update(
+        SpoolRevisionEntity,
+        { spoolId: spool.id, organisationId: actor.organisationId, state: 'issued' },
+        { state: 'superseded', updatedAt: now },
+      );
+      await m.update(
+        SpoolRevisionEntity,
+        { id: draft.id, organisationId: actor.organisationId, state: 'draft' },
+        {
+          state: 'issued',
+          issuedAt: now,
+          ...(input.note !== undefined ? { note: input.note } : {}),
+          version: draft.version + 1,
+          updatedAt: now,
+        },
+      );
+      await m.update(
+        SpoolEntity,
+        { id: spool.id, organisationId: actor.organisationId },
+        {
+          currentRevisionId: draft.id,
+          status: spool.status === 'drafting' ? 'issued' : spool.status,
+          version: spool.version + 1,
+          updatedAt: now,
+        },
+      );
+      await this.audit(m, {
+        organisationId: actor.organisationId,
+        actorId: actor.id,
+        action: 'revision.issue',
+        entityType: 'spool_revision',
+        entityId: draft.id,
+        details: { spoolId: spool.id, letter: draft.letter, supersededCount: superseded.affected ?? 0 },
+      });
+      return toRevisionDto((await this.findOne(m, actor, { id: draft.id }))!);
+    });
+  }
+
+  private async lockDraft(m: EntityManager, actor: SessionActor, spoolId: string): Promise<RevisionWithAuthor> {
+    const locked = await m
+      .getRepository(SpoolRevisionEntity)
+      .createQueryBuilder('r')
+      .where('r.spoolId = :spoolId AND r.organisationId = :org AND r.state = :state', {
+        spoolId,
+        org: actor.organisationId,
+        state: 'draft',
+      })
+      .setLock('pessimistic_write')
+      .getOne();
+    if (!locked) throw notFound('Draft of this spool');
+    return (await this.findOne(m, actor, { id: locked.id }))!;
+  }
+
+  private query(m: EntityManager, actor: SessionActor) {
+    return m
+      .getRepository(SpoolRevisionEntity)
+      .createQueryBuilder('r')
+      .leftJoin(UserEntity.options.name, 'a', 'a.id = r.authorId')
+      .addSelect('a.displayName', 'author_name')
+      .where('r.organisationId = :org', { org: actor.organisationId });
+  }
+
+  private async findOne(
+    m: EntityManager,
+    actor: SessionActor,
+    where: Partial<Pick<SpoolRevisionRow, 'id' | 'spoolId' | 'state'>>,
+  ): Promise<RevisionWithAuthor | null> {
+    const qb = this.query(m, actor);
+    if (where.id) qb.andWhere('r.id = :id', { id: where.id });
+    if (where.spoolId) qb.andWhere('r.spoolId = :spoolId', { spoolId: where.spoolId });
+    if (where.state) qb.andWhere('r.state = :state', { state: where.state });
+    return withAuthors(await qb.getRawAndEntities())[0] ?? null;
+  }
+}
+
+function withAuthors(result: { entities: SpoolRevisionRow[]; raw: Array<Record<string, unknown>> }): RevisionWithAuthor[] {
+  return result.entities.map((e, i) => ({ ...e, authorName: String(result.raw[i]?.author_name ?? '') }));
+}
