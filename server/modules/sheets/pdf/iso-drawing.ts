@@ -1,0 +1,332 @@
+import type { SpoolResult } from '../../../../shared/engine/compute-result';
+import type { Vec3 } from '../../../../shared/schemas/spool-design-primitives.schema';
+import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
+import { drawDimension, type PagePoint } from './dimension-line';
+import { fitIsoViewport, isoProjectDirection, type IsoViewport } from './iso-projection';
+import { drawComponentSymbol, PIPE_WIDTH, SMALL_BORE_WIDTH, strokePolyline } from './iso-symbols';
+import { LabelPlacer } from './label-placer';
+import type { Rect } from './page-setup';
+import { INK, type TypeSizes } from './sheet-style';
+import { drawText } from './text';
+import { distance, dot, normalise, perpendicularAxis, sub } from './vec3-math';
+
+/** One dimension the drawing printed: what it measures, its value and the text shown. */
+export interface PrintedDimension {
+  kind: 'run' | 'centre-to-face' | 'overall';
+  /** Run id, open-end node id, or the plant axis for overall dimensions. */
+  ref: string;
+  mm: number;
+  text: string;
+}
+
+export interface IsoDrawingInput {
+  result: SpoolResult;
+  units: LengthUnits;
+  sizes: TypeSizes;
+  /** Sheet tag per flange node ("F1"), matching the flange orientation details. */
+  flangeTags: Map<string, string>;
+}
+
+const SMALL = new Set(['1/2', '3/4', '1', '1-1/4', '1-1/2']);
+const AXES: Record<'x' | 'y' | 'z', Vec3> = { x: { x: 1, y: 0, z: 0 }, y: { x: 0, y: 1, z: 0 }, z: { x: 0, y: 0, z: 1 } };
+const AXIS_NAME = { x: 'E–W', y: 'N–S', z: 'vertical' } as const;
+
+/**
+ * Draws the spool as a single-line isometric in `area`: pipe and fittings, flange tags, weld
+ * balloons, piece marks, run and centre-to-face dimensions, overall dimensions, the centre of
+ * gravity and a north arrow. Returns every dimension it printed.
+ */
+export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDrawingInput): PrintedDimension[] {
+  const { result, units, sizes } = input;
+  const printed: PrintedDimension[] = [];
+  const points: Vec3[] = [
+    ...result.workPoints.map((w) => w.position),
+    ...result.components.flatMap((c) => c.ends.map((e) => e.point)),
+    ...result.pieces.flatMap((p) => [p.start, p.end]),
+  ];
+  // Leave room round the spool for dimensions (inner ring) and overall dimensions (outer ring).
+  const margin = Math.min(area.w, area.h) * 0.16 + 30;
+  const view = fitIsoViewport(points, area, margin);
+  const placer = new LabelPlacer(area);
+  const centroid = pageCentroid(view, points);
+
+  doc.save();
+  doc.rect(area.x, area.y, area.w, area.h).clip();
+
+  // North arrow and axes, top-left, reserved first so nothing lands on it.
+  const arrowBox = drawNorthArrow(doc, { x: area.x + 34, y: area.y + 40 }, sizes);
+  placer.reserve(arrowBox);
+  drawText(doc, 'ISOMETRIC — NOT TO SCALE. Work to the figures, never measure the drawing.', area.x + 4, area.y + area.h - sizes.small - 3, {
+    size: sizes.small,
+    color: INK.muted,
+    width: area.w - 8,
+  });
+
+  // Pipe pieces, then fitting bodies over them.
+  for (const piece of result.pieces) {
+    strokePolyline(doc, view, [piece.start, piece.end], SMALL.has(piece.nps) ? SMALL_BORE_WIDTH : PIPE_WIDTH);
+    reserveSegment(placer, view.project(piece.start), view.project(piece.end));
+  }
+  for (const component of result.components) {
+    drawComponentSymbol(doc, view, component);
+    for (const end of component.ends) reserveSegment(placer, view.project(component.position), view.project(end.point));
+  }
+
+  // Dimensions: each run work point to work point (centre-to-centre, or centre-to-face at an end).
+  const dimSize = sizes.dimension;
+  for (const run of result.runs) {
+    const length = run.workPointDistanceMm;
+    if (!(length > 0.05)) continue;
+    const text = formatLength(length, units);
+    placeDimension(doc, view, placer, run.start, run.end, text, dimSize, centroid, [22, 40, 58]);
+    printed.push({ kind: 'run', ref: run.runId, mm: length, text });
+  }
+  // Centre-to-face at open ends not already dimensioned by their run.
+  for (const end of result.openEnds) {
+    if (end.centreToFaceMm === null || !end.fromNodeId) continue;
+    const from = result.workPoints.find((w) => w.nodeId === end.fromNodeId)?.position;
+    if (!from) continue;
+    const same = result.runs.some(
+      (r) => Math.abs(r.workPointDistanceMm - (end.centreToFaceMm ?? 0)) < 0.05 && distance(r.end, end.facePoint) < 0.5 && distance(r.start, from) < 0.5,
+    );
+    if (same) {
+      printed.push({ kind: 'centre-to-face', ref: end.nodeId, mm: end.centreToFaceMm, text: formatLength(end.centreToFaceMm, units) });
+      continue;
+    }
+    const text = formatLength(end.centreToFaceMm, units);
+    placeDimension(doc, view, placer, from, end.facePoint, text, dimSize, centroid, [30, 48, 66]);
+    printed.push({ kind: 'centre-to-face', ref: end.nodeId, mm: end.centreToFaceMm, text });
+  }
+  // Overall dimensions along each plant axis, outside everything else.
+  if (result.overall) {
+    const box = result.overall.workPointBox;
+    const ring = margin * 0.8;
+    for (const axis of ['x', 'y', 'z'] as const) {
+      const size = box.sizeMm[axis];
+      if (!(size > 1)) continue;
+      const a = { ...box.min };
+      const b = { ...box.min, [axis]: box.max[axis] };
+      // Offset down (for horizontal axes) or sideways (vertical), clear of the drawing.
+      const offsetAxis = axis === 'z' ? AXES.y : AXES.z;
+      const sign = axis === 'z' ? 1 : -1;
+      const pa = view.project(a);
+      const po = isoProjectDirection({ x: offsetAxis.x * sign, y: offsetAxis.y * sign, z: offsetAxis.z * sign });
+      const ol = Math.hypot(po.u, po.v) || 1;
+      const off = { x: (po.u / ol) * ring, y: (-po.v / ol) * ring };
+      const text = `overall ${AXIS_NAME[axis]} ${formatLength(size, units)}`;
+      const drawn = drawDimension(doc, pa, view.project(b), clampOffset(off, pa, area), text, { size: dimSize, color: INK.black });
+      placer.reserve(boxAround(drawn.centre, drawn.width, drawn.height));
+      printed.push({ kind: 'overall', ref: axis, mm: size, text: formatLength(size, units) });
+    }
+  }
+
+  // Piece marks at each piece's middle.
+  for (const piece of result.pieces) {
+    const a = view.project(piece.start);
+    const b = view.project(piece.end);
+    const mid = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
+    tagLabel(doc, placer, mid, piece.mark, sizes.small, 'rect', normalTo(a, b));
+  }
+  // Flange tags.
+  for (const f of result.flanges) {
+    const tag = input.flangeTags.get(f.nodeId);
+    if (tag) tagLabel(doc, placer, view.project(f.faceCentre), tag, sizes.small, 'hex', null);
+  }
+  // Welds: shop welds a dot, field welds a ring; each with a numbered balloon.
+  for (const weld of result.welds) {
+    const p = view.project(weld.position);
+    doc.save();
+    if (weld.location === 'field') {
+      doc.lineWidth(1.2).strokeColor(INK.black).circle(p.x, p.y, 3.4).fillAndStroke('#ffffff', INK.black);
+    } else {
+      doc.circle(p.x, p.y, 2.4).fill(INK.black);
+    }
+    doc.restore();
+    tagLabel(doc, placer, p, weld.location === 'field' ? `${weld.mark} FW` : weld.mark, sizes.small, 'balloon', null);
+  }
+  // Centre of gravity.
+  const cog = result.weights.centreOfGravity;
+  if (cog) {
+    const p = view.project(cog);
+    doc.save().lineWidth(0.9).strokeColor(INK.warn);
+    doc.circle(p.x, p.y, 5).stroke();
+    doc.moveTo(p.x - 7, p.y).lineTo(p.x + 7, p.y).moveTo(p.x, p.y - 7).lineTo(p.x, p.y + 7).stroke();
+    doc.restore();
+    const spot = placer.place([boxAround({ x: p.x + 34, y: p.y + 12 }, 50, sizes.small + 2), boxAround({ x: p.x - 34, y: p.y - 12 }, 50, sizes.small + 2)]);
+    const lx = spot === 0 ? p.x + 9 : p.x - 59;
+    const ly = spot === 0 ? p.y + 6 : p.y - 18;
+    drawText(doc, 'CoG (empty)', lx, ly, { font: 'cond-bold', size: sizes.small, color: INK.warn, width: 50 });
+  }
+  doc.restore();
+  return printed;
+}
+
+function placeDimension(
+  doc: PDFKit.PDFDocument,
+  view: IsoViewport,
+  placer: LabelPlacer,
+  from: Vec3,
+  to: Vec3,
+  text: string,
+  size: number,
+  centroid: PagePoint,
+  distances: number[],
+): void {
+  const a = view.project(from);
+  const b = view.project(to);
+  const dir = normalise(sub(to, from));
+  // Offset along an iso axis square to the run, on either side, nearer and farther.
+  const axisA = perpendicularAxis(dir);
+  const axisB = perpendicularAxis(dir, [{ x: 1, y: 0, z: 0 }, { x: 0, y: 1, z: 0 }, { x: 0, y: 0, z: 1 }].filter((v) => Math.abs(dot(v, axisA)) < 0.9));
+  const mid = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
+  const candidates: { offset: PagePoint; box: Rect }[] = [];
+  doc.font('cond-bold').fontSize(size);
+  const tw = doc.widthOfString(text) + 4;
+  for (const d of distances) {
+    for (const axis of [axisA, axisB]) {
+      const pd = isoProjectDirection(axis);
+      const l = Math.hypot(pd.u, pd.v);
+      if (l < 1e-6) continue;
+      for (const sign of [1, -1]) {
+        const off = { x: (sign * pd.u * d) / l, y: (-sign * pd.v * d) / l };
+        candidates.push({ offset: off, box: rotatedBox({ x: mid.x + off.x, y: mid.y + off.y }, a, b, tw, size + 2) });
+      }
+    }
+  }
+  // Prefer the side away from the spool's middle, so dimensions sit outside the pipework.
+  candidates.sort((p, q) => awayScore(q.offset, mid, centroid) - awayScore(p.offset, mid, centroid));
+  const stable = candidates.map((c, i) => ({ ...c, i })).sort((p, q) => distances.indexOf(closest(distances, p.offset)) - distances.indexOf(closest(distances, q.offset)) || p.i - q.i);
+  const chosen = stable[placer.place(stable.map((c) => c.box))]!;
+  drawDimension(doc, a, b, chosen.offset, text, { size });
+}
+
+function closest(distances: number[], off: PagePoint): number {
+  const l = Math.hypot(off.x, off.y);
+  return distances.reduce((best, d) => (Math.abs(d - l) < Math.abs(best - l) ? d : best), distances[0]!);
+}
+
+function awayScore(offset: PagePoint, mid: PagePoint, centroid: PagePoint): number {
+  return offset.x * (mid.x - centroid.x) + offset.y * (mid.y - centroid.y) >= 0 ? 1 : 0;
+}
+
+function rotatedBox(centre: PagePoint, a: PagePoint, b: PagePoint, w: number, h: number): Rect {
+  const r = Math.atan2(b.y - a.y, b.x - a.x);
+  const bw = Math.abs(w * Math.cos(r)) + Math.abs(h * Math.sin(r));
+  const bh = Math.abs(w * Math.sin(r)) + Math.abs(h * Math.cos(r));
+  return boxAround(centre, bw, bh);
+}
+
+function boxAround(c: PagePoint, w: number, h: number): Rect {
+  return { x: c.x - w / 2, y: c.y - h / 2, w, h };
+}
+
+function clampOffset(off: PagePoint, _p: PagePoint, _area: Rect): PagePoint {
+  return off;
+}
+
+function normalTo(a: PagePoint, b: PagePoint): PagePoint {
+  const l = Math.hypot(b.x - a.x, b.y - a.y) || 1;
+  return { x: -(b.y - a.y) / l, y: (b.x - a.x) / l };
+}
+
+function pageCentroid(view: IsoViewport, points: Vec3[]): PagePoint {
+  if (points.length === 0) return { x: 0, y: 0 };
+  let x = 0;
+  let y = 0;
+  for (const p of points) {
+    const q = view.project(p);
+    x += q.x;
+    y += q.y;
+  }
+  return { x: x / points.length, y: y / points.length };
+}
+
+// Pipe lines reserve thin boxes along their length so labels avoid sitting on them.
+function reserveSegment(placer: LabelPlacer, a: PagePoint, b: PagePoint): void {
+  const steps = Math.max(1, Math.ceil(Math.hypot(b.x - a.x, b.y - a.y) / 12));
+  for (let i = 0; i <= steps; i += 1) {
+    const t = i / steps;
+    placer.reserve(boxAround({ x: a.x + (b.x - a.x) * t, y: a.y + (b.y - a.y) * t }, 6, 6));
+  }
+}
+
+/** A tag (piece mark box, flange hexagon, weld balloon) near a point with a short leader. */
+function tagLabel(
+  doc: PDFKit.PDFDocument,
+  placer: LabelPlacer,
+  at: PagePoint,
+  text: string,
+  size: number,
+  style: 'rect' | 'hex' | 'balloon',
+  preferred: PagePoint | null,
+): void {
+  doc.font('cond-bold').fontSize(size);
+  const w = Math.max(doc.widthOfString(text) + 6, size + 6);
+  const h = size + 5;
+  const dirs: PagePoint[] = [];
+  if (preferred) dirs.push(preferred, { x: -preferred.x, y: -preferred.y });
+  for (let k = 0; k < 8; k += 1) dirs.push({ x: Math.cos((k * Math.PI) / 4 - Math.PI / 4), y: Math.sin((k * Math.PI) / 4 - Math.PI / 4) });
+  const candidates: { c: PagePoint; box: Rect }[] = [];
+  for (const dist of [16, 26, 38]) {
+    for (const d of dirs) {
+      const c = { x: at.x + d.x * (dist + w / 2), y: at.y + d.y * (dist + h / 2) };
+      candidates.push({ c, box: boxAround(c, w + 3, h + 3) });
+    }
+  }
+  const { c } = candidates[placer.place(candidates.map((k) => k.box))]!;
+  doc.save();
+  doc.lineWidth(0.5).strokeColor(INK.muted).moveTo(at.x, at.y).lineTo(c.x, c.y).stroke();
+  if (style === 'rect') {
+    doc.lineWidth(0.8).rect(c.x - w / 2, c.y - h / 2, w, h).fillAndStroke('#ffffff', INK.black);
+  } else if (style === 'hex') {
+    const hw = w / 2 + 2;
+    const hh = h / 2;
+    doc
+      .lineWidth(0.9)
+      .moveTo(c.x - hw, c.y)
+      .lineTo(c.x - hw + 4, c.y - hh)
+      .lineTo(c.x + hw - 4, c.y - hh)
+      .lineTo(c.x + hw, c.y)
+      .lineTo(c.x + hw - 4, c.y + hh)
+      .lineTo(c.x - hw + 4, c.y + hh)
+      .closePath()
+      .fillAndStroke('#ffffff', INK.black);
+  } else {
+    doc.lineWidth(0.8).roundedRect(c.x - w / 2, c.y - h / 2, w, h, h / 2).fillAndStroke('#ffffff', INK.black);
+  }
+  doc.restore();
+  drawText(doc, text, c.x - w / 2, c.y - size / 2 + 0.5, { font: 'cond-bold', size, width: w, align: 'center', color: INK.black });
+}
+
+function drawNorthArrow(doc: PDFKit.PDFDocument, origin: PagePoint, sizes: TypeSizes): Rect {
+  const len = 26;
+  const axes: Array<[Vec3, string, boolean]> = [
+    [AXES.y, 'N', true],
+    [AXES.x, 'E', false],
+    [AXES.z, 'UP', false],
+  ];
+  doc.save();
+  for (const [axis, label, main] of axes) {
+    const d = isoProjectDirection(axis);
+    const l = Math.hypot(d.u, d.v);
+    const tip = { x: origin.x + (d.u / l) * len, y: origin.y - (d.v / l) * len };
+    doc.lineWidth(main ? 1.6 : 0.7).strokeColor(INK.black).moveTo(origin.x, origin.y).lineTo(tip.x, tip.y).stroke();
+    const ux = (tip.x - origin.x) / len;
+    const uy = (tip.y - origin.y) / len;
+    const hw = main ? 3.2 : 2;
+    doc
+      .moveTo(tip.x + ux * 4, tip.y + uy * 4)
+      .lineTo(tip.x - uy * hw, tip.y + ux * hw)
+      .lineTo(tip.x + uy * hw, tip.y - ux * hw)
+      .closePath()
+      .fill(INK.black);
+    drawText(doc, label, tip.x + ux * 10 - 8, tip.y + uy * 10 - sizes.small / 2, {
+      font: main ? 'cond-bold' : 'cond-semibold',
+      size: main ? sizes.heading : sizes.small,
+      width: 16,
+      align: 'center',
+    });
+  }
+  doc.restore();
+  return { x: origin.x - 34, y: origin.y - 40, w: 70, h: 60 };
+}
