@@ -11,7 +11,7 @@ export type CapRow = { nps: Nps; e: Cell; e1: Cell; limitingWallMm: Cell };
 export const REDUCER_CAP_SOURCES = {
   reducer:
     'ASME B16.9 reducer H: enggcyclopedia "Standard reducer dimensions" (NPS 1–10) and wermac butt-weld fittings part 4 (NPS 6 × 2½ = 140 mm); the small-end lists are from memory of the B16.9 table',
-  cap: 'ASME B16.9 cap E / E1: wermac caps table (alloysteelfittings mirror, where the columns are headed H / H1); limiting walls from memory',
+  cap: 'ASME B16.9 Table 10 cap E / E1: wermac caps table (alloysteelfittings mirror, where the columns are headed H / H1); limiting walls from memory',
 } as const;
 
 /**
@@ -44,12 +44,12 @@ export const REDUCER_TABLE: readonly ReducerRow[] = [
  */
 export const CAP_TABLE: readonly CapRow[] = (
   [
-    ['1/2', 25, 25, 4.57, 'M'], ['3/4', 25, 25, 3.81, 'M'], ['1', 38, 38, 4.57, 'S'],
-    ['1-1/4', 38, 38, 4.83, 'M'], ['1-1/2', 38, 38, 5.08, 'M'], ['2', 38, 44, 5.59, 'S'],
-    ['2-1/2', 38, 51, 7.11, 'M'], ['3', 51, 64, 7.62, 'S'], ['4', 64, 76, 8.64, 'S'],
-    ['5', 76, 89, 9.65, 'M'], ['6', 89, 102, 10.92, 'S'], ['8', 102, 127, 12.7, 'S'],
-    ['10', 127, 152, 12.7, 'S'], ['12', 152, 178, 12.7, 'S'], ['14', 165, 191, 12.7, 'M'],
-    ['16', 178, 203, 12.7, 'S'], ['18', 203, 229, 12.7, 'M'], ['20', 229, 254, 12.7, 'M'],
+    ['1/2', 25, 25, 4.57, 'S'], ['3/4', 25, 25, 3.81, 'S'], ['1', 38, 38, 4.57, 'S'],
+    ['1-1/4', 38, 38, 4.83, 'S'], ['1-1/2', 38, 38, 5.08, 'S'], ['2', 38, 44, 5.59, 'S'],
+    ['2-1/2', 38, 51, 7.11, 'S'], ['3', 51, 64, 7.62, 'S'], ['4', 64, 76, 8.64, 'S'],
+    ['5', 76, 89, 9.65, 'S'], ['6', 89, 102, 10.92, 'S'], ['8', 102, 127, 12.7, 'S'],
+    ['10', 127, 152, 12.7, 'S'], ['12', 152, 178, 12.7, 'S'], ['14', 165, 191, 12.7, 'S'],
+    ['16', 178, 203, 12.7, 'S'], ['18', 203, 229, 12.7, 'S'], ['20', 229, 254, 12.7, 'S'],
     ['24', 267, 305, 12.7, 'S'],
   ] as const
 ).map(([nps, e, e1, wall, status]) => ({ nps, e: [e, status], e1: [e1, status], limitingWallMm: [wall, 'M'] }));

@@ -1,5 +1,7 @@
 import type { Cell } from './b16-9-elbow-table';
-import type { Nps } from './nps';
+import { NPS_VALUES, type Nps } from './nps';
+
+const npsRank = (n: Nps) => NPS_VALUES.indexOf(n);
 
 /** One tee of ASME B16.9, mm: run centre-to-end C and outlet centre-to-end M. */
 export type TeeRow = { run: Nps; branch: Nps; c: Cell; m: Cell };
@@ -7,7 +9,7 @@ export type TeeRow = { run: Nps; branch: Nps; c: Cell; m: Cell };
 /** Where the S values come from. */
 export const TEE_SOURCES = {
   straight: 'ASME B16.9 straight tee C = M: wermac straight-tee table (alloysteelfittings mirror), also emirerristeel B16.9 tee page',
-  reducing: 'ASME B16.9 reducing outlet tee C and M: from memory of the B16.9 table unless marked otherwise',
+  reducing: 'ASME B16.9 Table 8 reducing outlet tee C and M: pipingengineer.org metric reducing-tee table up to NPS 12 × 6; larger runs from memory (status M)',
 } as const;
 
 /**
@@ -15,10 +17,10 @@ export const TEE_SOURCES = {
  */
 export const STRAIGHT_TEE_TABLE: readonly TeeRow[] = (
   [
-    ['1/2', 25, 'M'], ['3/4', 29, 'M'], ['1', 38, 'S'], ['1-1/4', 48, 'M'], ['1-1/2', 57, 'M'],
-    ['2', 64, 'S'], ['2-1/2', 76, 'M'], ['3', 86, 'S'], ['4', 105, 'S'], ['5', 124, 'M'],
-    ['6', 143, 'S'], ['8', 178, 'S'], ['10', 216, 'S'], ['12', 254, 'S'], ['14', 279, 'M'],
-    ['16', 305, 'S'], ['18', 343, 'M'], ['20', 381, 'M'], ['24', 432, 'S'],
+    ['1/2', 25, 'S'], ['3/4', 29, 'S'], ['1', 38, 'S'], ['1-1/4', 48, 'S'], ['1-1/2', 57, 'S'],
+    ['2', 64, 'S'], ['2-1/2', 76, 'S'], ['3', 86, 'S'], ['4', 105, 'S'], ['5', 124, 'S'],
+    ['6', 143, 'S'], ['8', 178, 'S'], ['10', 216, 'S'], ['12', 254, 'S'], ['14', 279, 'S'],
+    ['16', 305, 'S'], ['18', 343, 'S'], ['20', 381, 'S'], ['24', 432, 'S'],
   ] as const
 ).map(([nps, mm, status]) => ({ run: nps, branch: nps, c: [mm, status], m: [mm, status] }));
 
@@ -47,4 +49,9 @@ export const REDUCING_TEE_TABLE: readonly TeeRow[] = (
     ['20', '18', 381, 368], ['20', '16', 381, 356], ['20', '14', 381, 356], ['20', '12', 381, 346], ['20', '10', 381, 333], ['20', '8', 381, 324],
     ['24', '20', 432, 419], ['24', '18', 432, 406], ['24', '16', 432, 397], ['24', '14', 432, 397], ['24', '12', 432, 381], ['24', '10', 432, 368],
   ] as const
-).map(([run, branch, c, m]) => ({ run, branch, c: [c, 'M'], m: [m, 'M'] }));
+).map(([run, branch, c, m]) => {
+  // Sourced (pipingengineer.org metric Table 8) for runs up to NPS 12 with outlets down to NPS 6.
+  const sourced = npsRank(run) < npsRank('12') || (run === '12' && npsRank(branch) >= npsRank('6'));
+  const status = sourced ? ('S' as const) : ('M' as const);
+  return { run, branch, c: [c, status], m: [m, status] };
+});
