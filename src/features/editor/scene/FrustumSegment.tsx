@@ -1,5 +1,4 @@
 import { useMemo } from 'react';
-import { CylinderGeometry } from 'three';
 import type { Vec3 } from '../../../../shared/schemas/spool-design-primitives.schema';
 import { mmToScene, segmentPose, toVector3 } from './scene-units';
 import type { PickHandler } from './PipeSegment';
@@ -21,14 +20,12 @@ export function FrustumSegment({
   onClick?: PickHandler;
 }) {
   const pose = useMemo(() => segmentPose(toVector3(from), toVector3(to)), [from, to]);
-  // CylinderGeometry's top is +y: the `to` end after the rotation onto from→to.
-  const geometry = useMemo(
-    () => (pose ? new CylinderGeometry(mmToScene(toOdMm / 2), mmToScene(fromOdMm / 2), pose.length, 32) : null),
-    [pose, fromOdMm, toOdMm],
-  );
-  if (!pose || !geometry) return null;
+  if (!pose) return null;
+  // The geometry's top (+y) is the `to` end after the rotation onto from→to. As a JSX child
+  // it is disposed by react-three-fiber when it changes or unmounts.
   return (
-    <mesh geometry={geometry} position={pose.position} quaternion={pose.quaternion} onClick={onClick}>
+    <mesh position={pose.position} quaternion={pose.quaternion} onClick={onClick}>
+      <cylinderGeometry args={[mmToScene(toOdMm / 2), mmToScene(fromOdMm / 2), pose.length, 32]} />
       <meshStandardMaterial color={colour} metalness={0.35} roughness={0.55} />
     </mesh>
   );

@@ -9,6 +9,8 @@ export const SCENE_COLOURS = {
   fitting: '#6b7886', // steel-500
   flange: '#525e6b', // steel-600
   boltHole: '#121a23', // ink-900
+  /** The first bolt hole, the one the rotation is measured to. */
+  firstHole: '#1d4a8a', // state-issued-fg
   selected: '#f9ac35', // spark-400
   hovered: '#ffc766', // spark-300
   error: '#b3301f', // danger-600

@@ -1,0 +1,54 @@
+import { useEffect, useRef } from 'react';
+import { useThree } from '@react-three/fiber';
+import { Vector3 } from 'three';
+import type { ViewPreset } from '../model/view-prefs';
+import type { SceneBounds } from './scene-bounds';
+
+/** Where the camera looks from, per preset (plant axes, z up). */
+const PRESET_DIRECTIONS: Record<ViewPreset, [number, number, number]> = {
+  // Isometric from the south-east, above: the usual reading of a piping isometric.
+  iso: [1, -1, 0.82],
+  // Plan: from above, north up the screen (a hair of south so "up" stays defined).
+  plan: [0, -0.0001, 1],
+  // Elevation looking north: standing south of the spool.
+  'elev-north': [0, -1, 0],
+  // Elevation looking east: standing west of it.
+  'elev-east': [-1, 0, 0],
+};
+
+type Controls = { target: Vector3; update: () => void };
+
+/**
+ * Puts the camera on a preset view framing the spool, when the preset is asked for
+ * (again) and the first time there is a model. It does not follow edits, so a user who
+ * zoomed in to work keeps their view while typing dimensions.
+ */
+export function CameraRig({ preset, nonce, bounds, hasModel }: { preset: ViewPreset; nonce: number; bounds: SceneBounds; hasModel: boolean }) {
+  const camera = useThree((s) => s.camera);
+  const controls = useThree((s) => s.controls) as unknown as Controls | null;
+  const invalidate = useThree((s) => s.invalidate);
+  const framedOnce = useRef(false);
+  const boundsRef = useRef(bounds);
+  boundsRef.current = bounds;
+
+  useEffect(() => {
+    if (!controls) return;
+    if (!hasModel && framedOnce.current) return;
+    const b = boundsRef.current;
+    const fov = 'fov' in camera ? ((camera as { fov: number }).fov * Math.PI) / 180 : Math.PI / 4;
+    const distance = (b.radius / Math.sin(fov / 2)) * 1.08;
+    const dir = new Vector3(...PRESET_DIRECTIONS[preset]).normalize();
+    const centre = new Vector3(...b.centre);
+    camera.position.copy(centre.clone().add(dir.multiplyScalar(distance)));
+    camera.near = Math.max(0.005, distance / 1000);
+    camera.far = distance * 50;
+    camera.updateProjectionMatrix();
+    controls.target.copy(centre);
+    controls.update();
+    if (hasModel) framedOnce.current = true;
+    invalidate();
+    // Re-frame on a preset request or when the first model arrives, not on every bounds change.
+  }, [preset, nonce, hasModel, controls, camera, invalidate]);
+
+  return null;
+}

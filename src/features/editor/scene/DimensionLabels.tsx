@@ -1,0 +1,75 @@
+import { memo, useMemo } from 'react';
+import { Html } from '@react-three/drei';
+import type { SpoolResult } from '../../../../shared/engine/compute-result';
+import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema';
+import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
+import type { ViewPrefs } from '../model/view-prefs';
+import { toScene } from './scene-units';
+
+const KIND_SHORT = { 'centre-to-centre': 'C–C', 'centre-to-face': 'C–F', 'face-to-face': 'F–F', cut: 'C–C' } as const;
+
+type Label = { key: string; at: [number, number, number]; text: string; tone: 'dim' | 'cut' | 'weld' | 'cog' };
+
+/**
+ * Dimension labels as HTML over the canvas (crisp at any zoom, readable by screen
+ * readers and tests): work-point dimensions of runs, cut lengths of pieces, weld
+ * numbers, each toggled in the view settings, in the job's units.
+ */
+export const DimensionLabels = memo(function DimensionLabels({
+  result,
+  design,
+  labels,
+  units,
+}: {
+  result: SpoolResult;
+  design: SpoolDesign;
+  labels: ViewPrefs['labels'];
+  units: LengthUnits;
+}) {
+  const items = useMemo(() => {
+    const ends = new Set(design.nodes.filter((n) => n.kind === 'end').map((n) => n.id));
+    const out: Label[] = [];
+    for (const run of result.runs) {
+      const open = ends.has(run.from) || ends.has(run.to);
+      if (open ? !labels.centreToFace : !labels.centreToCentre) continue;
+      if (run.workPointDistanceMm <= 0) continue;
+      const mid = {
+        x: (run.start.x + run.end.x) / 2,
+        y: (run.start.y + run.end.y) / 2,
+        z: (run.start.z + run.end.z) / 2,
+      };
+      const kind = open ? (ends.has(run.from) && ends.has(run.to) ? 'face-to-face' : 'centre-to-face') : 'centre-to-centre';
+      out.push({ key: `d-${run.runId}`, at: toScene(mid), text: `${KIND_SHORT[kind]} ${formatLength(run.workPointDistanceMm, units)}`, tone: 'dim' });
+    }
+    if (labels.cutLengths) {
+      for (const p of result.pieces) {
+        if (p.cutLengthMm === null) continue;
+        const mid = { x: (p.start.x + p.end.x) / 2, y: (p.start.y + p.end.y) / 2, z: (p.start.z + p.end.z) / 2 };
+        out.push({ key: `c-${p.mark}`, at: toScene(mid), text: `${p.mark} cut ${formatLength(p.cutLengthMm, units)}`, tone: 'cut' });
+      }
+    }
+    if (labels.welds) {
+      for (const w of result.welds) out.push({ key: `w-${w.mark}`, at: toScene(w.position), text: w.mark, tone: 'weld' });
+    }
+    return out;
+  }, [result, design, labels, units]);
+
+  return (
+    <group name="labels">
+      {items.map((l) => (
+        <Html key={l.key} position={l.at} center zIndexRange={[20, 0]} style={{ pointerEvents: 'none' }}>
+          <span className={TONE_CLASS[l.tone]} data-label={l.tone}>
+            {l.text}
+          </span>
+        </Html>
+      ))}
+    </group>
+  );
+});
+
+const TONE_CLASS: Record<Label['tone'], string> = {
+  dim: 'block -translate-y-4 whitespace-nowrap rounded bg-white/90 px-1.5 py-0.5 font-mono text-[11px] font-semibold text-ink-800 shadow-sm ring-1 ring-steel-300',
+  cut: 'block translate-y-4 whitespace-nowrap rounded bg-spark-100/95 px-1.5 py-0.5 font-mono text-[11px] font-semibold text-spark-700 ring-1 ring-spark-300',
+  weld: 'block whitespace-nowrap rounded-full bg-ink-800 px-1.5 py-0.5 font-mono text-[10px] font-bold text-white',
+  cog: 'block whitespace-nowrap rounded bg-state-shipped-bg px-1.5 py-0.5 text-[11px] font-semibold text-state-shipped-fg',
+};

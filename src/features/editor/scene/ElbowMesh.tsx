@@ -1,0 +1,56 @@
+import { useMemo } from 'react';
+import { Matrix4, Quaternion, Vector3 } from 'three';
+import type { Vec3 } from '../../../../shared/schemas/spool-design-primitives.schema';
+import { mmToScene, toVector3 } from './scene-units';
+import type { PickHandler } from './PipeSegment';
+
+/**
+ * A bend drawn as a torus segment around its centre of curvature, from end `a` to end
+ * `b` (plant mm): elbows at any angle and 180° returns. three's torus lies in its local
+ * xy plane starting on +x; the local basis is built so +x points at `a` and the arc
+ * sweeps towards `b`.
+ */
+export function ElbowMesh({
+  arcCentre,
+  a,
+  b,
+  bendRadiusMm,
+  angleDeg,
+  odMm,
+  colour,
+  onClick,
+  planeNormal,
+  sweepHint,
+}: {
+  arcCentre: Vec3;
+  a: Vec3;
+  b: Vec3;
+  bendRadiusMm: number;
+  angleDeg: number;
+  odMm: number;
+  colour: string;
+  onClick?: PickHandler;
+  planeNormal: Vec3;
+  /** For a 180° return: the direction from the centre to the middle of the arc. */
+  sweepHint?: Vec3;
+}) {
+  const pose = useMemo(() => {
+    const c = toVector3(arcCentre);
+    const u = toVector3(a).sub(c).normalize();
+    const toB = toVector3(b).sub(c);
+    let v = toB.clone().sub(u.clone().multiplyScalar(toB.dot(u)));
+    // A 180° return: b is opposite a, so take the sweep side from the bend plane.
+    if (v.lengthSq() < 1e-12) v = sweepHint ? toVector3(sweepHint) : toVector3(planeNormal).normalize().cross(u);
+    v.normalize();
+    const w = new Vector3().crossVectors(u, v);
+    const q = new Quaternion().setFromRotationMatrix(new Matrix4().makeBasis(u, v, w));
+    return { position: c, quaternion: q };
+  }, [arcCentre, a, b, planeNormal, sweepHint]);
+  const arc = (Math.max(0.5, angleDeg) * Math.PI) / 180;
+  return (
+    <mesh position={pose.position} quaternion={pose.quaternion} onClick={onClick}>
+      <torusGeometry args={[mmToScene(bendRadiusMm), mmToScene(odMm / 2), 20, Math.max(8, Math.round(angleDeg / 4)), arc]} />
+      <meshStandardMaterial color={colour} metalness={0.35} roughness={0.5} />
+    </mesh>
+  );
+}

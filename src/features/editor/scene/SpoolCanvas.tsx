@@ -1,0 +1,73 @@
+import { useMemo, type RefObject } from 'react';
+import { Canvas } from '@react-three/fiber';
+import { OrbitControls } from '@react-three/drei';
+import type { Group } from 'three';
+import type { SpoolResult } from '../../../../shared/engine/compute-result';
+import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema';
+import type { LengthUnits } from '../../../../shared/units/length-format';
+import type { Selection } from '../model/editor-selection';
+import type { ViewPrefs } from '../model/view-prefs';
+import { CameraRig } from './CameraRig';
+import { CentreOfGravityMarker } from './CentreOfGravityMarker';
+import { DimensionLabels } from './DimensionLabels';
+import { PlantGround } from './PlantGround';
+import { sceneBounds } from './scene-bounds';
+import { largestOd } from './scene-lookups';
+import { SCENE_COLOURS } from './scene-palette';
+import { SCENE_STATS_ENABLED, SceneStats } from './SceneStats';
+import { SpoolModel } from './SpoolModel';
+
+/**
+ * The 3D view: renders only when something changes (`frameloop="demand"`), orbit, pan
+ * and zoom with the mouse, touch or trackpad; preset views from the toolbar. The model
+ * group is handed out through `modelRef` for the glTF export.
+ */
+export default function SpoolCanvas({
+  result,
+  design,
+  selection,
+  view,
+  units,
+  onSelect,
+  modelRef,
+}: {
+  result: SpoolResult | null;
+  design: SpoolDesign | null;
+  selection: Selection;
+  view: ViewPrefs;
+  units: LengthUnits;
+  onSelect: (selection: Selection) => void;
+  modelRef?: RefObject<Group | null>;
+}) {
+  const bounds = useMemo(() => sceneBounds(result), [result]);
+  const cogMm = useMemo(() => (result ? Math.max(30, largestOd(result) * 0.35) : 30), [result]);
+  const cog = result?.weights.centreOfGravity ?? null;
+  return (
+    <Canvas
+      frameloop="demand"
+      dpr={[1, 2]}
+      camera={{ fov: 35, up: [0, 0, 1], position: [4, -4, 3], near: 0.01, far: 500 }}
+      onPointerMissed={() => onSelect(null)}
+      gl={{ antialias: true, preserveDrawingBuffer: true }}
+      aria-label="3D model of the spool"
+    >
+      <color attach="background" args={[SCENE_COLOURS.background]} />
+      <hemisphereLight args={['#ffffff', '#8d9aa7', 1.1]} />
+      <directionalLight position={[5, -8, 10]} intensity={1.6} />
+      <directionalLight position={[-6, 4, 3]} intensity={0.5} />
+      <OrbitControls makeDefault enableDamping={false} />
+      <CameraRig preset={view.preset} nonce={view.presetNonce} bounds={bounds} hasModel={!!result && result.components.length > 0} />
+      <PlantGround bounds={bounds} />
+      {result ? (
+        <group ref={modelRef} name="spool-model">
+          <SpoolModel result={result} selection={selection} onSelect={onSelect} />
+        </group>
+      ) : null}
+      {result && design ? <DimensionLabels result={result} design={design} labels={view.labels} units={units} /> : null}
+      {result && cog && view.showCentreOfGravity ? (
+        <CentreOfGravityMarker position={cog} emptyKg={result.weights.emptyKg} sizeMm={cogMm} />
+      ) : null}
+      {SCENE_STATS_ENABLED ? <SceneStats /> : null}
+    </Canvas>
+  );
+}

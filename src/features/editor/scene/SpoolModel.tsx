@@ -1,0 +1,93 @@
+import { memo, useMemo } from 'react';
+import type { SpoolResult } from '../../../../shared/engine/compute-result';
+import type { Selection } from '../model/editor-selection';
+import { ComponentMesh, WorkPointMarker } from './ComponentMesh';
+import { colourFor } from './component-colour';
+import { PipeSegment, pickHandler } from './PipeSegment';
+import { SCENE_COLOURS } from './scene-palette';
+import { flangesById, largestOd, nearestRun, severityById } from './scene-lookups';
+import { SCENE_UNITS_PER_MM } from './scene-units';
+import { WeldRing } from './WeldRing';
+
+/**
+ * The spool, true size, from the engine result: pipe pieces, fittings, flanges with bolt
+ * holes, work-point markers and weld markers. Pure view: clicks go out through `onSelect`.
+ */
+export const SpoolModel = memo(function SpoolModel({
+  result,
+  selection,
+  onSelect,
+}: {
+  result: SpoolResult;
+  selection: Selection;
+  onSelect: (selection: Selection) => void;
+}) {
+  const severity = useMemo(() => severityById(result), [result]);
+  const flanges = useMemo(() => flangesById(result), [result]);
+  const markerMm = useMemo(() => Math.max(12, largestOd(result) * 0.12), [result]);
+  const selectedId = selection?.id ?? null;
+  const runs = useMemo(() => new Map(result.runs.map((r) => [r.runId, r])), [result]);
+  const odByRun = useMemo(() => {
+    const m = new Map<string, number>();
+    for (const p of result.pieces) if (p.odMm) for (const id of p.runIds) m.set(id, p.odMm);
+    // Close-coupled runs have no piece: take the OD from the fitting ends.
+    for (const c of result.components) for (const e of c.ends) if (e.runId && e.odMm && !m.has(e.runId)) m.set(e.runId, e.odMm);
+    return m;
+  }, [result]);
+
+  return (
+    <group name="spool">
+      {result.pieces.map((piece) => {
+        if (!piece.odMm) return null;
+        const selected = selectedId !== null && piece.runIds.includes(selectedId);
+        const sev = piece.runIds.map((id) => severity.get(id)).find(Boolean) ?? null;
+        return (
+          <PipeSegment
+            key={piece.mark}
+            name={`piece-${piece.mark}`}
+            from={piece.start}
+            to={piece.end}
+            odMm={piece.odMm}
+            colour={colourFor({ selected, severity: sev }, SCENE_COLOURS.pipe)}
+            onClick={pickHandler((e) => {
+              const p = e.point;
+              const mm = { x: p.x / SCENE_UNITS_PER_MM, y: p.y / SCENE_UNITS_PER_MM, z: p.z / SCENE_UNITS_PER_MM };
+              const runId = nearestRun(result, piece.runIds, mm);
+              if (runId) onSelect({ type: 'run', id: runId });
+            })}
+          />
+        );
+      })}
+      {result.components.map((c) => {
+        const state = { selected: selectedId === c.nodeId, severity: severity.get(c.nodeId) ?? null };
+        const base = c.shape.type === 'flange' ? SCENE_COLOURS.flange : SCENE_COLOURS.fitting;
+        const pick = pickHandler(() => onSelect({ type: 'node', id: c.nodeId }));
+        return (
+          <group key={c.nodeId} name={`node-${c.nodeId}`}>
+            <ComponentMesh component={c} flange={flanges.get(c.nodeId)} colour={colourFor(state, base)} onClick={pick} />
+            <WorkPointMarker
+              position={c.position}
+              sizeMm={state.selected ? markerMm * 1.5 : markerMm}
+              colour={colourFor(state, SCENE_COLOURS.workPoint)}
+              onClick={pick}
+            />
+          </group>
+        );
+      })}
+      {result.welds.map((w) => {
+        const run = w.runId ? runs.get(w.runId) : undefined;
+        const od = w.runId ? odByRun.get(w.runId) : undefined;
+        if (!run || !od) return null;
+        return (
+          <WeldRing
+            key={w.mark}
+            position={w.position}
+            axis={run.direction}
+            odMm={od}
+            colour={w.location === 'field' ? SCENE_COLOURS.warning : SCENE_COLOURS.weld}
+          />
+        );
+      })}
+    </group>
+  );
+});
