@@ -28,6 +28,8 @@ export interface SawListInput {
   units: LengthUnits;
   paper: PaperSize;
   spools: SawListSpool[];
+  /** Spool marks left out because they have no design yet. */
+  skipped: string[];
   printedAt: Date;
 }
 
@@ -133,6 +135,7 @@ export async function renderSawList(input: SawListInput): Promise<{ pdf: Buffer;
         'Pieces are grouped by size, schedule and material. Saw order within each group: longest first, so the offcuts of long pieces can give the short ones.',
         `Cut length is the saw length of the piece. Stock includes one saw kerf (${formatLength(kerf, units)}) per cut. Tick each piece as it is cut and mark it with spool and piece mark.`,
         `Spools: ${input.spools.map((s) => `${s.mark} rev ${s.revisionLetter}`).join(', ') || 'none'}.`,
+        ...(input.skipped.length > 0 ? [`Left out, no design yet: ${input.skipped.join(', ')}.`] : []),
       ],
     }),
   );

@@ -1,0 +1,37 @@
+import { Router, type Response } from 'express';
+import { idParamsSchema } from '../../../shared/schemas/id.schema';
+import { ANY_ROLE, requireRole } from '../../common/auth.middleware';
+import { actorOf } from '../../common/session-actor';
+import { inputOf, validate } from '../../common/validate.middleware';
+import { sawListQuerySchema, spoolSheetQuerySchema } from './sheets.schema';
+import type { SheetsService } from './sheets.service';
+
+const spoolSheet = { params: idParamsSchema, query: spoolSheetQuerySchema };
+const sawList = { params: idParamsSchema, query: sawListQuerySchema };
+
+function sendPdf(res: Response, pdf: Buffer, filename: string): void {
+  res.set('Content-Type', 'application/pdf');
+  // inline: opens in the browser's viewer, from where it prints; the name is used on save.
+  res.set('Content-Disposition', `inline; filename="${filename.replace(/[^A-Za-z0-9._-]/g, '_')}"`);
+  res.set('Content-Length', String(pdf.length));
+  res.end(pdf);
+}
+
+/**
+ * Printable sheets, for every role: the PDF is built completely before the first byte is
+ * sent, so any failure is a JSON error and never a half-written PDF.
+ */
+export function sheetsRouter(sheets: SheetsService): Router {
+  const router = Router();
+  router.get('/spools/:id/sheet.pdf', requireRole(...ANY_ROLE), validate(spoolSheet), async (req, res) => {
+    const { params, query } = inputOf(res, spoolSheet);
+    const out = await sheets.spoolSheet(actorOf(req), params.id, query);
+    sendPdf(res, out.pdf, out.filename);
+  });
+  router.get('/jobs/:id/saw-list.pdf', requireRole(...ANY_ROLE), validate(sawList), async (req, res) => {
+    const { params, query } = inputOf(res, sawList);
+    const out = await sheets.sawList(actorOf(req), params.id, query);
+    sendPdf(res, out.pdf, out.filename);
+  });
+  return router;
+}
