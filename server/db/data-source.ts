@@ -22,7 +22,8 @@ export function createDataSource(url: string, options: { poolSize?: number } = {
     migrations: MIGRATIONS,
     migrationsTableName: 'typeorm_migrations',
     synchronize: false,
-    logging: ['error'],
+    // Expected failures (duplicates) are answered as 409s; 500s are logged by the error middleware.
+    logging: ['migration'],
     extra: { max: options.poolSize ?? 10, connectionTimeoutMillis: 5000 },
   });
 }

@@ -26,7 +26,8 @@ export class RevisionService {
     const spool = await this.spools.find(this.ds.manager, actor, spoolId);
     const rows = await this.query(this.ds.manager, actor)
       .andWhere('r.spoolId = :spoolId', { spoolId: spool.id })
-      .orderBy('r.createdAt', 'DESC')
+      // Letters order the revisions (Z < AA): by length, then alphabetically.
+      .orderBy('length(r.letter)', 'DESC')
       .addOrderBy('r.letter', 'DESC')
       .getRawAndEntities();
     return withAuthors(rows).map(toRevisionSummary);
