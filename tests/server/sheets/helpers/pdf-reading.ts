@@ -64,8 +64,41 @@ export function renderPageInk(pdf: Buffer, dpi = 30): PageInk[] {
   }
 }
 
-// Binary PGM (P5): "P5 <w> <h> <max>" then one byte per pixel.
+/** A greyscale raster of one page. */
+export interface GreyImage {
+  width: number;
+  height: number;
+  pixels: Uint8Array;
+}
+
+/** Renders one page (1-based) to a greyscale raster with pdftoppm. */
+export function renderPageGrey(pdf: Buffer, page: number, dpi: number): GreyImage {
+  const dir = mkdtempSync(join(tmpdir(), 'sheet-grey-'));
+  try {
+    const file = join(dir, 'in.pdf');
+    writeFileSync(file, pdf);
+    execFileSync('pdftoppm', ['-gray', '-r', String(dpi), '-f', String(page), '-l', String(page), file, join(dir, 'page')]);
+    const out = readdirSync(dir).find((f) => f.endsWith('.pgm'));
+    if (!out) throw new Error('pdftoppm wrote no page');
+    return parsePgm(readFileSync(join(dir, out)));
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
 function measurePgm(data: Buffer): PageInk {
+  const { width, height, pixels } = parsePgm(data);
+  let dark = 0;
+  let inked = 0;
+  for (const g of pixels) {
+    if (g < 128) dark += 1;
+    if (g < 250) inked += 1;
+  }
+  return { width, height, darkFraction: dark / (width * height), inkedFraction: inked / (width * height) };
+}
+
+// Binary PGM (P5): "P5 <w> <h> <max>" then one byte per pixel.
+function parsePgm(data: Buffer): GreyImage {
   let offset = 0;
   const tokens: string[] = [];
   while (tokens.length < 4) {
@@ -82,12 +115,38 @@ function measurePgm(data: Buffer): PageInk {
   if (tokens[0] !== 'P5') throw new Error(`Not a binary PGM: ${tokens[0]}`);
   const width = Number(tokens[1]);
   const height = Number(tokens[2]);
-  let dark = 0;
-  let inked = 0;
-  for (let i = offset; i < offset + width * height; i += 1) {
-    const g = data[i]!;
-    if (g < 128) dark += 1;
-    if (g < 250) inked += 1;
+  return { width, height, pixels: new Uint8Array(data.subarray(offset, offset + width * height)) };
+}
+
+/** Bounding box of one path the page paints, in the page's drawing units (PDF points). */
+export interface PathBox {
+  paint: 'fill' | 'stroke' | 'other';
+  minX: number;
+  minY: number;
+  maxX: number;
+  maxY: number;
+}
+
+/**
+ * Bounding boxes of every constructed path on a page, read from the PDF's own operators
+ * (pdfjs operator list): lets a test measure what was drawn, in points, without trusting the renderer.
+ */
+export async function readPathBoxes(pdf: Buffer, pageNumber: number): Promise<PathBox[]> {
+  const { OPS } = await import('pdfjs-dist/legacy/build/pdf.mjs');
+  const doc = await getDocument({ data: new Uint8Array(pdf), isEvalSupported: false }).promise;
+  try {
+    const page = await doc.getPage(pageNumber);
+    const list = await page.getOperatorList();
+    const boxes: PathBox[] = [];
+    list.fnArray.forEach((fn, i) => {
+      if (fn !== OPS.constructPath) return;
+      const [paintOp, , minMax] = list.argsArray[i] as [number, unknown, ArrayLike<number> | null];
+      if (!minMax) return;
+      const paint = paintOp === OPS.fill || paintOp === OPS.eoFill ? 'fill' : paintOp === OPS.stroke ? 'stroke' : 'other';
+      boxes.push({ paint, minX: minMax[0]!, minY: minMax[1]!, maxX: minMax[2]!, maxY: minMax[3]! });
+    });
+    return boxes;
+  } finally {
+    await doc.destroy();
   }
-  return { width, height, darkFraction: dark / (width * height), inkedFraction: inked / (width * height) };
 }
