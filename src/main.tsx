@@ -3,7 +3,10 @@ import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router';
 import { AppProviders } from './app/providers';
 import { router } from './app/router';
+import { installFormMessages } from './lib/zod-messages';
 import './styles/index.css';
+
+installFormMessages();
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');

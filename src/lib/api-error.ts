@@ -26,8 +26,9 @@ export class ApiError extends Error {
     this.details = details;
   }
 
+  /** Someone saved first (409 stale_version); a 409 `duplicate` is a different problem. */
   get isStale(): boolean {
-    return this.status === 409 || this.code === 'stale_version';
+    return this.code === 'stale_version';
   }
 
   get isNotFound(): boolean {

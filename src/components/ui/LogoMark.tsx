@@ -1,15 +1,14 @@
 /**
- * Tackline's mark: two pipe ends meeting at a root gap, held by three tack
- * welds (the amber stitches). Drawn for 16–48 px.
+ * Tackline's mark: two pipe ends meeting at a root gap, held across it by
+ * three tack welds, on a weld-spark amber tile. Drawn for 16–48 px.
  */
 export function LogoMark({ className = 'h-8 w-8' }: { className?: string }) {
   return (
     <svg viewBox="0 0 32 32" className={className} role="img" aria-label="Tackline">
-      <rect x="0" y="0" width="32" height="32" rx="7" fill="#1b2631" />
-      <rect x="3" y="11" width="11" height="10" rx="1.5" fill="#b3bec9" />
-      <rect x="18" y="11" width="11" height="10" rx="1.5" fill="#b3bec9" />
-      <path d="M3 13h11M18 13h11" stroke="#e8ecf0" strokeWidth="1" opacity="0.7" />
-      <path d="M14.2 8.5l3.6 3M14.2 14.5l3.6 3M14.2 20.5l3.6 3" stroke="#f9ac35" strokeWidth="2.2" strokeLinecap="round" />
+      <rect x="0" y="0" width="32" height="32" rx="7" fill="#f9ac35" />
+      <rect x="3" y="10" width="10.5" height="12" rx="1.5" fill="#1b2631" />
+      <rect x="18.5" y="10" width="10.5" height="12" rx="1.5" fill="#1b2631" />
+      <path d="M14.4 8l3.2 3.2M14.4 14.4l3.2 3.2M14.4 20.8l3.2 3.2" stroke="#1b2631" strokeWidth="2" strokeLinecap="round" />
     </svg>
   );
 }

@@ -1,0 +1,169 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startAppServer, type RunningApp } from './helpers/app-server';
+import { launchBrowser, type TestBrowser } from './helpers/browser';
+import { saveScreenshot } from './helpers/screenshots';
+import { DEMO_USERS, signInAs, signOut } from './helpers/sign-in';
+
+/**
+ * The first journeys a shop makes: a detailer sets up a job and its first spool;
+ * a client viewer reads the same job without any way to change it.
+ */
+describe('jobs and spools in the browser', () => {
+  let app: RunningApp;
+  let browser: TestBrowser;
+
+  beforeAll(async () => {
+    app = await startAppServer();
+    browser = await launchBrowser();
+  }, 120_000);
+
+  afterAll(async () => {
+    await browser?.close();
+    await app?.stop();
+  });
+
+  it('a detailer signs in, creates a job, adds a spool and sees it in the job’s table', { timeout: 90_000 }, async () => {
+    const page = await browser.context.newPage();
+    const problems: string[] = [];
+    page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
+    page.on('console', (m) => {
+      // 401 (signed out), 404 and 409 (the duplicate mark below) are answers the page handles.
+      if (m.type() === 'error' && !/status of 40[149]/.test(m.text())) problems.push(`console: ${m.text()}`);
+    });
+
+    await page.goto(`${app.baseUrl}/`);
+    await page.getByRole('heading', { name: 'Sign in' }).waitFor();
+    await saveScreenshot(page, '01-sign-in');
+
+    // A wrong password gets the server's one answer, and the form stays usable.
+    await page.getByLabel('E-mail').fill(DEMO_USERS.detailer);
+    await page.getByLabel('Password').fill('not-the-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('alert').filter({ hasText: /incorrect/i }).waitFor();
+    await saveScreenshot(page, '02-sign-in-refused');
+
+    await signInAs(page, DEMO_USERS.detailer);
+    await page.getByRole('heading', { name: 'Jobs', exact: true }).waitFor();
+    await page.getByRole('link', { name: 'HFD-B-CW' }).waitFor();
+    await saveScreenshot(page, '03-jobs-detailer');
+
+    // New job: the dialog validates with the shared schema before anything is sent.
+    await page.getByRole('button', { name: 'New job' }).first().click();
+    const dialog = page.getByRole('dialog', { name: 'New job' });
+    await dialog.waitFor();
+    await dialog.getByRole('button', { name: 'Create job' }).click();
+    await dialog.getByLabel('Job number').and(page.locator('[aria-invalid="true"]')).waitFor();
+    await saveScreenshot(page, '04-new-job-invalid');
+
+    await dialog.getByLabel('Job number').fill('HFD-C-CHW');
+    await dialog.getByLabel('Title').fill('Chilled water, Hall C');
+    await dialog.getByLabel('Client').fill('Harrow Fields Data Centre');
+    await dialog.getByLabel('Site').fill('Hall C');
+    await dialog.getByLabel('Units on screens and sheets').selectOption('ft-in');
+    await dialog.getByLabel('Root gap').fill('2.4');
+    await saveScreenshot(page, '05-new-job-filled');
+    await dialog.getByRole('button', { name: 'Create job' }).click();
+
+    // Lands on the new job: header, spec in the job's units, and an empty spool table.
+    await page.getByRole('heading', { name: /HFD-C-CHW/ }).waitFor();
+    expect(page.url()).toMatch(/\/jobs\/[0-9a-f-]{36}$/);
+    await page.getByText('No spools in this job yet').waitFor();
+    // 2.4 mm is 3/32"; to the nearest 1/16" the job shows 1/8", with the stored millimetres beside it.
+    await page.getByText('1/8" (2.4 mm)').waitFor();
+    await saveScreenshot(page, '06-job-empty');
+
+    await page.getByRole('button', { name: 'New spool' }).first().click();
+    const spoolDialog = page.getByRole('dialog', { name: /New spool/ });
+    await spoolDialog.getByLabel('Spool mark').fill('CHW-110-S01');
+    await spoolDialog.getByLabel('Line number').fill('CHW-110');
+    await spoolDialog.getByRole('button', { name: 'Add spool' }).click();
+    await spoolDialog.waitFor({ state: 'hidden' });
+
+    const row = page.getByRole('row').filter({ hasText: 'CHW-110-S01' });
+    await row.waitFor();
+    await expect(row.textContent()).resolves.toMatch(/CHW-110.*In drafting/);
+    await saveScreenshot(page, '07-job-with-spool');
+
+    // The same mark twice is refused with a message on the field, and the dialog keeps the input.
+    await page.getByRole('button', { name: 'New spool' }).first().click();
+    await spoolDialog.getByLabel('Spool mark').fill('CHW-110-S01');
+    await spoolDialog.getByLabel('Line number').fill('CHW-110');
+    await spoolDialog.getByRole('button', { name: 'Add spool' }).click();
+    await spoolDialog.getByText(/already/i).waitFor();
+    await expect(spoolDialog.getByLabel('Spool mark').inputValue()).resolves.toBe('CHW-110-S01');
+    await saveScreenshot(page, '08-duplicate-spool');
+    await spoolDialog.getByRole('button', { name: 'Cancel' }).click();
+
+    await row.getByRole('link', { name: 'CHW-110-S01' }).click();
+    await page.getByRole('heading', { name: 'CHW-110-S01' }).waitFor();
+    await page.getByRole('heading', { name: 'Revisions' }).waitFor();
+    await page.getByRole('complementary', { name: 'Before lifting, welding or testing' }).getByText(/competent person/).waitFor();
+    await saveScreenshot(page, '09-spool-detailer');
+
+    await signOut(page);
+    expect(problems).toEqual([]);
+    await page.close();
+  });
+
+  it('a viewer sees the jobs and spools but no button that changes them', { timeout: 60_000 }, async () => {
+    await browser.context.clearCookies();
+    const page = await browser.context.newPage();
+    // Signed out, a deep link goes to sign-in and comes back afterwards.
+    await page.goto(`${app.baseUrl}/users`);
+    await page.waitForURL(/\/sign-in\?next=%2Fusers/);
+    await signInAs(page, DEMO_USERS.viewer);
+    await page.waitForURL(/\/users$/);
+    await page.getByRole('heading', { name: 'Admins only' }).waitFor();
+
+    await page.getByRole('link', { name: 'Jobs', exact: true }).click();
+    await page.getByRole('link', { name: 'HFD-B-CW' }).waitFor();
+    await expect(page.getByRole('button', { name: 'New job' }).count()).resolves.toBe(0);
+    await expect(page.getByRole('link', { name: 'Users' }).count()).resolves.toBe(0);
+    await saveScreenshot(page, '10-jobs-viewer');
+
+    await page.getByRole('link', { name: 'HFD-B-CW' }).click();
+    await page.getByRole('row').filter({ hasText: 'CW-201-S03' }).waitFor();
+    await expect(page.getByRole('button', { name: 'New spool' }).count()).resolves.toBe(0);
+    await expect(page.getByRole('button', { name: 'Edit job' }).count()).resolves.toBe(0);
+    await saveScreenshot(page, '11-job-viewer');
+
+    // Sorting by mark, descending, reorders the rows and is kept in the URL.
+    await page.getByRole('button', { name: 'Spool mark' }).click();
+    await page.waitForURL(/sort=mark&order=desc/);
+    await page.locator('tbody tr').first().filter({ hasText: 'CW-512-S01' }).waitFor();
+    await expect(page.locator('tbody tr').last().locator('td').first().textContent()).resolves.toBe('CW-201-S03');
+
+    await page.getByRole('link', { name: 'CW-201-S03' }).click();
+    await page.getByRole('heading', { name: 'CW-201-S03' }).waitFor();
+    await page.getByRole('heading', { name: 'Revisions' }).waitFor();
+    for (const name of [/Edit mark/, /Archive/, /Start/, /Issue revision/, /Mark /]) {
+      await expect(page.getByRole('button', { name }).count()).resolves.toBe(0);
+    }
+    await saveScreenshot(page, '12-spool-viewer');
+    await page.close();
+  });
+
+  it('an admin manages users, and the job reads well at tablet width', { timeout: 60_000 }, async () => {
+    await browser.context.clearCookies();
+    const page = await browser.context.newPage();
+    await page.goto(`${app.baseUrl}/sign-in`);
+    await signInAs(page, DEMO_USERS.admin);
+    await page.getByRole('link', { name: 'Users' }).click();
+    await page.getByRole('row').filter({ hasText: 'Anselm Tarrow' }).waitFor();
+    await saveScreenshot(page, '13-users-admin');
+
+    await page.setViewportSize({ width: 820, height: 1180 });
+    await page.getByRole('link', { name: 'Jobs', exact: true }).click();
+    await page.getByRole('link', { name: 'HFD-B-CW' }).click();
+    await page.getByRole('row').filter({ hasText: 'CW-201-S03' }).waitFor();
+    await saveScreenshot(page, '14-job-tablet');
+    await page.getByRole('link', { name: 'CW-201-S03' }).click();
+    await page.getByRole('heading', { name: 'Revisions' }).waitFor();
+    await saveScreenshot(page, '15-spool-admin-tablet');
+
+    await page.goto(`${app.baseUrl}/no-such-page`);
+    await page.getByRole('heading', { name: 'No such page' }).waitFor();
+    await saveScreenshot(page, '16-not-found');
+    await page.close();
+  });
+});
