@@ -24,11 +24,11 @@ export type SocketWeldDimensions = {
   socketDepthMm: number;
   /**
    * Elbows and tees: A, centre to bottom of socket. Coupling: half the laying length
-   * (centre of the coupling to either socket bottom). Half coupling: outside face to
-   * socket bottom.
+   * (centre of the coupling to either socket bottom). Half coupling: from the socket's
+   * outside face to the socket bottom (= socket depth J).
    */
   centreToBottomMm: number;
-  /** Coupling: laying length E (socket bottom to socket bottom). */
+  /** Coupling: laying length E (socket bottom to socket bottom). Half coupling: overall length. */
   lengthMm?: number;
   status: DataStatus;
   source: string;
@@ -36,32 +36,39 @@ export type SocketWeldDimensions = {
 
 type Row = {
   nps: Nps;
+  /** Socket bore B, minimum. */
   bore: number;
+  /** Socket depth J, minimum. */
   depth: number;
-  /** 90° elbow, tee and cross A. */
+  /** 90° elbow, tee and cross: centre to bottom of socket A. */
   a90: number;
-  /** 45° elbow A (from memory). */
+  /** 45° elbow: centre to bottom of socket A. */
   a45: number;
+  /** Coupling laying length E, socket bottom to socket bottom. */
+  couplingE: number;
+  /** Half coupling overall length (read as overall length: see the source note). */
+  halfCouplingLength: number;
 };
 
-const SOURCE_2016 = 'ASME B16.11-2016 Class 3000 socket-weld table (vaibhavfitting reproduction)';
+const SOURCE_2016 = 'ASME B16.11-2016 Class 3000 socket-weld tables (vaibhavfitting reproduction: 90° and 45° elbows, couplings; 45° elbow also creativepiping)';
+const SOURCE_HALF =
+  "half-coupling length from a fitting maker's B16.11 coupling table (mumbadevisteel), read as the overall length; it equals the B16.11 inch values 7/8 in … 1-7/8 in converted";
 
 /**
  * ASME B16.11-2016 Class 3000 socket-weld dimensions, metric (mm). Older metric editions
- * round J to 10 / 13 / 16 mm and give B as a mean (≈ 21.95 for NPS ½). NPS 2-1/2 and up
- * are not carried: socket welds above NPS 2 are rare and no checked table is at hand.
+ * round J to 10 / 13 / 16 mm and give B as a mean (≈ 21.95 for NPS ½).
  */
 const ROWS: readonly Row[] = [
-  { nps: '1/2', bore: 21.8, depth: 9.5, a90: 15.5, a45: 11.0 },
-  { nps: '3/4', bore: 27.2, depth: 12.5, a90: 19.0, a45: 13.0 },
-  { nps: '1', bore: 33.9, depth: 12.5, a90: 22.5, a45: 14.0 },
-  { nps: '1-1/4', bore: 42.7, depth: 12.5, a90: 27.0, a45: 17.0 },
-  { nps: '1-1/2', bore: 48.8, depth: 12.5, a90: 32.0, a45: 20.5 },
-  { nps: '2', bore: 61.2, depth: 16.0, a90: 38.0, a45: 25.5 },
+  { nps: '1/2', bore: 21.8, depth: 9.5, a90: 15.5, a45: 11.0, couplingE: 9.5, halfCouplingLength: 22.5 },
+  { nps: '3/4', bore: 27.2, depth: 12.5, a90: 19.0, a45: 13.0, couplingE: 9.5, halfCouplingLength: 24.0 },
+  { nps: '1', bore: 33.9, depth: 12.5, a90: 22.5, a45: 14.0, couplingE: 12.5, halfCouplingLength: 28.5 },
+  { nps: '1-1/4', bore: 42.7, depth: 12.5, a90: 27.0, a45: 17.5, couplingE: 12.5, halfCouplingLength: 30.0 },
+  { nps: '1-1/2', bore: 48.8, depth: 12.5, a90: 32.0, a45: 20.5, couplingE: 12.5, halfCouplingLength: 32.0 },
+  { nps: '2', bore: 61.2, depth: 16.0, a90: 38.0, a45: 25.5, couplingE: 19.0, halfCouplingLength: 41.0 },
+  { nps: '2-1/2', bore: 73.9, depth: 16.0, a90: 41.0, a45: 28.5, couplingE: 19.0, halfCouplingLength: 43.0 },
+  { nps: '3', bore: 89.8, depth: 16.0, a90: 57.0, a45: 32.0, couplingE: 19.0, halfCouplingLength: 44.5 },
+  { nps: '4', bore: 115.2, depth: 19.0, a90: 66.5, a45: 41.0, couplingE: 19.0, halfCouplingLength: 48.0 },
 ];
-
-/** Coupling laying length E (socket bottom to socket bottom), NPS ½–2, from memory. */
-const COUPLING_LAYING_MM = 6.5;
 
 const BY_NPS = new Map<Nps, Row>(ROWS.map((r) => [r.nps, r]));
 
@@ -75,23 +82,26 @@ export function socketWeldDimensions(nps: Nps, kind: SocketFittingKind): Lookup<
     case 'tee':
       return found({ ...socket, centreToBottomMm: row.a90, status: 'S', source: SOURCE_2016 });
     case 'elbow45':
-      return found({
-        ...socket,
-        centreToBottomMm: row.a45,
-        status: weakestStatus('S', 'M'),
-        source: `${SOURCE_2016}; 45° elbow A from memory`,
-      });
+      return found({ ...socket, centreToBottomMm: row.a45, status: 'S', source: SOURCE_2016 });
     case 'coupling':
       return found({
         ...socket,
-        centreToBottomMm: COUPLING_LAYING_MM / 2,
-        lengthMm: COUPLING_LAYING_MM,
-        status: 'M',
-        source: `${SOURCE_2016}; coupling laying length from memory`,
+        centreToBottomMm: row.couplingE / 2,
+        lengthMm: row.couplingE,
+        status: 'S',
+        source: `${SOURCE_2016}; coupling E also in a fitting maker's coupling table (mumbadevisteel)`,
       });
     case 'half-coupling':
+      // The pipe seats in the one socket; centreToBottom is measured from the socket's outside face.
+      return found({
+        ...socket,
+        centreToBottomMm: row.depth,
+        lengthMm: row.halfCouplingLength,
+        status: weakestStatus('S', 'S~'),
+        source: `${SOURCE_2016}; ${SOURCE_HALF}`,
+      });
     case 'cap':
-      return missing(`No ASME B16.11 Class 3000 socket-weld ${kind} data for NPS ${nps}: the lengths are not carried yet`);
+      return missing(`No ASME B16.11 Class 3000 socket-weld cap data for NPS ${nps}: cap lengths are not carried yet`);
   }
 }
 

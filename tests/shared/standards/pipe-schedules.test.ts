@@ -68,10 +68,22 @@ describe('pipeDimensions (ASME B36.10M)', () => {
     }
   });
 
-  it('marks NPS 10 Sch 80 (15.09 mm) and the XS wall above NPS 10 as from memory', () => {
-    // From memory: a source lists the XS value 12.70 under "Sch 80" for NPS 10; B36.10M gives 15.09.
-    expect(get('10', '80')).toMatchObject({ wallMm: 15.09, status: 'M' });
+  it('marks NPS 10 Sch 80 (15.09 mm) as secondary and the XS wall above NPS 10 as from memory', () => {
+    // One source lists the XS value 12.70 under "Sch 80" for NPS 10; a vendor Sch 80 table gives 0.593 in (15.06 mm).
+    expect(get('10', '80')).toMatchObject({ wallMm: 15.09, status: 'S~' });
+    expect(Math.abs(get('10', '80').wallMm - 0.593 * 25.4)).toBeLessThan(0.05);
     expect(get('12', 'XS')).toMatchObject({ wallMm: 12.7, status: 'M' });
+  });
+
+  // Secondary sources for sizes the primary tables skip (inch walls × 25.4, within 0.03 mm):
+  // Grinnell pipe-fitter's handbook "Steel Pipe Sizes and Wall Thicknesses"; vendor Sch 80 tables.
+  it.each([
+    ['1-1/4', 'STD', 0.14], ['2-1/2', 'STD', 0.203], ['5', 'STD', 0.258], ['8', '20', 0.25], ['8', '30', 0.277],
+    ['10', '20', 0.25], ['10', '30', 0.307], ['1-1/4', '80', 0.191], ['12', '80', 0.688],
+  ] as const)('NPS %s %s matches %f in', (nps, schedule, inches) => {
+    const p = get(nps, schedule);
+    expect(Math.abs(p.wallMm - inches * 25.4)).toBeLessThan(0.03);
+    expect(p.status).toBe('S~');
   });
 
   it('bore is OD − 2 × wall', () => {

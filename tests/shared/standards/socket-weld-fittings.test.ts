@@ -16,6 +16,8 @@ describe('socketWeldDimensions (ASME B16.11 Class 3000)', () => {
   const b1611: Array<[Nps, number, number, number]> = [
     ['1/2', 21.8, 9.5, 15.5], ['3/4', 27.2, 12.5, 19.0], ['1', 33.9, 12.5, 22.5],
     ['1-1/4', 42.7, 12.5, 27.0], ['1-1/2', 48.8, 12.5, 32.0], ['2', 61.2, 16.0, 38.0],
+    // vaibhavfitting "90D ELBOW" B16.11-2016 page, NPS 2-1/2 to 4.
+    ['2-1/2', 73.9, 16.0, 41.0], ['3', 89.8, 16.0, 57.0], ['4', 115.2, 19.0, 66.5],
   ];
   it.each(b1611)('NPS %s: bore %f, depth %f, centre to socket bottom %f mm', (nps, bore, depth, a) => {
     for (const kind of ['elbow90', 'tee'] as const) {
@@ -32,16 +34,34 @@ describe('socketWeldDimensions (ASME B16.11 Class 3000)', () => {
     }
   });
 
-  it('marks the 45° elbow and coupling lengths as from memory', () => {
-    expect(value(socketWeldDimensions('1', 'elbow45')).status).toBe('M');
-    const c = value(socketWeldDimensions('1', 'coupling'));
-    expect(c.status).toBe('M');
-    expect(c.centreToBottomMm * 2).toBe(c.lengthMm);
+  // vaibhavfitting "45 DEGREE ELBOW" B16.11-2016 page and creativepiping (same table): A, exact.
+  const elbow45: Array<[Nps, number]> = [
+    ['1/2', 11.0], ['3/4', 13.0], ['1', 14.0], ['1-1/4', 17.5], ['1-1/2', 20.5], ['2', 25.5], ['2-1/2', 28.5], ['3', 32.0], ['4', 41.0],
+  ];
+  it.each(elbow45)('45° elbow NPS %s: A = %f mm', (nps, a) => {
+    expect(value(socketWeldDimensions(nps, 'elbow45'))).toMatchObject({ centreToBottomMm: a, status: 'S' });
   });
 
-  it('misses sizes above NPS 2 and kinds not carried, naming them', () => {
-    expect(socketWeldDimensions('3', 'elbow90')).toEqual({ ok: false, missing: 'No ASME B16.11 Class 3000 socket-weld elbow90 data for NPS 3' });
-    expect(socketWeldDimensions('1', 'half-coupling').ok).toBe(false);
+  // vaibhavfitting "FULL COUPLING" B16.11-2016 page: laying length E (socket bottom to socket bottom), exact.
+  const couplingE: Array<[Nps, number]> = [['1/2', 9.5], ['3/4', 9.5], ['1', 12.5], ['1-1/4', 12.5], ['1-1/2', 12.5], ['2', 19.0]];
+  it.each(couplingE)('coupling NPS %s: laying length %f mm, centre to each socket bottom half of it', (nps, e) => {
+    const c = value(socketWeldDimensions(nps, 'coupling'));
+    expect(c.lengthMm).toBe(e);
+    expect(c.centreToBottomMm).toBe(e / 2);
+  });
+
+  // mumbadevisteel coupling table, half coupling: overall length (reading marked S~), socket depth J.
+  const half: Array<[Nps, number]> = [['1/2', 22.5], ['3/4', 24.0], ['1', 28.5], ['1-1/4', 30.0], ['1-1/2', 32.0], ['2', 41.0]];
+  it.each(half)('half coupling NPS %s: %f mm long, agreeing with the B16.11 inch lengths 7/8 … 1-5/8 in within 0.5 mm', (nps, len) => {
+    const h = value(socketWeldDimensions(nps, 'half-coupling'));
+    expect(h.lengthMm).toBe(len);
+    expect(h.status).toBe('S~');
+    expect(h.centreToBottomMm).toBe(h.socketDepthMm);
+    expect(h.lengthMm! - h.socketDepthMm).toBeGreaterThan(0);
+  });
+
+  it('misses sizes above NPS 4 and caps, naming them', () => {
+    expect(socketWeldDimensions('6', 'elbow90')).toEqual({ ok: false, missing: 'No ASME B16.11 Class 3000 socket-weld elbow90 data for NPS 6' });
     expect(socketWeldDimensions('1', 'cap').ok).toBe(false);
   });
 
