@@ -25,7 +25,7 @@ export interface RenderedPdf {
 }
 
 /** The job's defaults as engine spec overrides (only the values the engine's tables carry). */
-export function jobSpecOverrides(job: Job): SpecOverrides {
+export function jobSpecOverrides(job: Pick<Job, 'spec'>): SpecOverrides {
   const out: SpecOverrides = {
     material: job.spec.material,
     rootGapMm: job.spec.rootGapMm,
