@@ -1,8 +1,15 @@
 import type { Cell } from './b16-9-elbow-table';
+import type { DataStatus } from './data-status';
 import type { Nps } from './nps';
 
 /** Concentric/eccentric reducer length H (by large end) and the small ends B16.9 lists. */
-export type ReducerRow = { large: Nps; h: Cell; smallEnds: readonly Nps[] };
+export type ReducerRow = {
+  large: Nps;
+  h: Cell;
+  smallEnds: readonly Nps[];
+  /** Status of the small-end list (which combinations B16.9 makes). */
+  smallEndsStatus: DataStatus;
+};
 
 /** Cap length E up to the limiting wall, E1 above it, mm. */
 export type CapRow = { nps: Nps; e: Cell; e1: Cell; limitingWallMm: Cell };
@@ -10,7 +17,7 @@ export type CapRow = { nps: Nps; e: Cell; e1: Cell; limitingWallMm: Cell };
 /** Where the S values come from. */
 export const REDUCER_CAP_SOURCES = {
   reducer:
-    'ASME B16.9 reducer H: enggcyclopedia "Standard reducer dimensions" (NPS 1–10) and wermac butt-weld fittings part 4 (NPS 6 × 2½ = 140 mm); the small-end lists are from memory of the B16.9 table',
+    'ASME B16.9 Table 11 reducer H and the small ends made for each large end: enggcyclopedia "Standard reducer dimensions" (large ends NPS 3/4–10), wermac butt-weld fittings part 4 (NPS 6 × 2½ = 140 mm); large ends NPS 12–24 from memory',
   cap: 'ASME B16.9 Table 10 cap E / E1: wermac caps table (alloysteelfittings mirror, where the columns are headed H / H1); limiting walls from memory',
 } as const;
 
@@ -18,24 +25,24 @@ export const REDUCER_CAP_SOURCES = {
  * ASME B16.9 reducers, mm. H depends only on the large end. Tolerance on H ±2 mm (from memory).
  */
 export const REDUCER_TABLE: readonly ReducerRow[] = [
-  { large: '3/4', h: [38, 'M'], smallEnds: ['1/2'] },
-  { large: '1', h: [51, 'S'], smallEnds: ['3/4', '1/2'] },
-  { large: '1-1/4', h: [51, 'M'], smallEnds: ['1', '3/4', '1/2'] },
-  { large: '1-1/2', h: [64, 'M'], smallEnds: ['1-1/4', '1', '3/4', '1/2'] },
-  { large: '2', h: [76, 'S'], smallEnds: ['1-1/2', '1-1/4', '1', '3/4'] },
-  { large: '2-1/2', h: [89, 'M'], smallEnds: ['2', '1-1/2', '1-1/4', '1'] },
-  { large: '3', h: [89, 'S'], smallEnds: ['2-1/2', '2', '1-1/2', '1-1/4'] },
-  { large: '4', h: [102, 'S'], smallEnds: ['3', '2-1/2', '2', '1-1/2'] },
-  { large: '5', h: [127, 'M'], smallEnds: ['4', '3', '2-1/2', '2'] },
-  { large: '6', h: [140, 'S'], smallEnds: ['5', '4', '3', '2-1/2'] },
-  { large: '8', h: [152, 'S'], smallEnds: ['6', '5', '4'] },
-  { large: '10', h: [178, 'S'], smallEnds: ['8', '6', '5', '4'] },
-  { large: '12', h: [203, 'M'], smallEnds: ['10', '8', '6', '5'] },
-  { large: '14', h: [330, 'M'], smallEnds: ['12', '10', '8', '6'] },
-  { large: '16', h: [356, 'M'], smallEnds: ['14', '12', '10', '8'] },
-  { large: '18', h: [381, 'M'], smallEnds: ['16', '14', '12', '10'] },
-  { large: '20', h: [508, 'M'], smallEnds: ['18', '16', '14', '12'] },
-  { large: '24', h: [508, 'M'], smallEnds: ['20', '18', '16', '14'] },
+  { large: '3/4', h: [38, 'S'], smallEnds: ['1/2'], smallEndsStatus: 'S' },
+  { large: '1', h: [51, 'S'], smallEnds: ['3/4', '1/2'], smallEndsStatus: 'S' },
+  { large: '1-1/4', h: [51, 'S'], smallEnds: ['1', '3/4', '1/2'], smallEndsStatus: 'S' },
+  { large: '1-1/2', h: [64, 'S'], smallEnds: ['1-1/4', '1', '3/4', '1/2'], smallEndsStatus: 'S' },
+  { large: '2', h: [76, 'S'], smallEnds: ['1-1/2', '1-1/4', '1', '3/4'], smallEndsStatus: 'S' },
+  { large: '2-1/2', h: [89, 'S'], smallEnds: ['2', '1-1/2', '1-1/4', '1'], smallEndsStatus: 'S' },
+  { large: '3', h: [89, 'S'], smallEnds: ['2-1/2', '2', '1-1/2', '1-1/4'], smallEndsStatus: 'S' },
+  { large: '4', h: [102, 'S'], smallEnds: ['3', '2-1/2', '2', '1-1/2'], smallEndsStatus: 'S' },
+  { large: '5', h: [127, 'S'], smallEnds: ['4', '3', '2-1/2', '2'], smallEndsStatus: 'S' },
+  { large: '6', h: [140, 'S'], smallEnds: ['5', '4', '3', '2-1/2'], smallEndsStatus: 'S' },
+  { large: '8', h: [152, 'S'], smallEnds: ['6', '5', '4'], smallEndsStatus: 'S' },
+  { large: '10', h: [178, 'S'], smallEnds: ['8', '6', '5', '4'], smallEndsStatus: 'S' },
+  { large: '12', h: [203, 'M'], smallEnds: ['10', '8', '6', '5'], smallEndsStatus: 'M' },
+  { large: '14', h: [330, 'M'], smallEnds: ['12', '10', '8', '6'], smallEndsStatus: 'M' },
+  { large: '16', h: [356, 'M'], smallEnds: ['14', '12', '10', '8'], smallEndsStatus: 'M' },
+  { large: '18', h: [381, 'M'], smallEnds: ['16', '14', '12', '10'], smallEndsStatus: 'M' },
+  { large: '20', h: [508, 'M'], smallEnds: ['18', '16', '14', '12'], smallEndsStatus: 'M' },
+  { large: '24', h: [508, 'M'], smallEnds: ['20', '18', '16', '14'], smallEndsStatus: 'M' },
 ];
 
 /**

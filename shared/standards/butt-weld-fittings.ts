@@ -117,7 +117,7 @@ export function reducerDimensions(largeNps: Nps, smallNps: Nps): Lookup<ReducerD
   if (!row || !row.smallEnds.includes(smallNps)) {
     return missing(`No ASME B16.9 reducer data for NPS ${largeNps} × ${smallNps}`);
   }
-  return found({ lengthMm: row.h[0], status: row.h[1], source: REDUCER_CAP_SOURCES.reducer });
+  return found({ lengthMm: row.h[0], status: weakestStatus(row.h[1], row.smallEndsStatus), source: REDUCER_CAP_SOURCES.reducer });
 }
 
 /**

@@ -180,12 +180,19 @@ describe('teeDimensions (ASME B16.9)', () => {
 });
 
 describe('reducerDimensions (ASME B16.9)', () => {
-  // enggcyclopedia "Standard reducer dimensions" (NPS 1–10 large ends), exact.
-  const sourced: Array<[Nps, Nps, number]> = [
-    ['1', '3/4', 51], ['2', '1-1/2', 76], ['3', '2', 89], ['4', '3', 102], ['6', '4', 140], ['8', '6', 152], ['10', '8', 178],
+  // enggcyclopedia "Standard reducer dimensions" (B16.9 Table 11, large ends NPS 3/4–10): every
+  // listed pair in our size range, with H. NPS 3/8 and 3-1/2 ends are outside Tackline's sizes.
+  const enggcyclopedia: Array<[Nps, Nps[], number]> = [
+    ['3/4', ['1/2'], 38], ['1', ['3/4', '1/2'], 51], ['1-1/4', ['1', '3/4', '1/2'], 51],
+    ['1-1/2', ['1-1/4', '1', '3/4', '1/2'], 64], ['2', ['1-1/2', '1-1/4', '1', '3/4'], 76],
+    ['2-1/2', ['2', '1-1/2', '1-1/4', '1'], 89], ['3', ['2-1/2', '2', '1-1/2', '1-1/4'], 89],
+    ['4', ['3', '2-1/2', '2', '1-1/2'], 102], ['5', ['4', '3', '2-1/2', '2'], 127], ['6', ['5', '4', '3', '2-1/2'], 140],
+    ['8', ['6', '5', '4'], 152], ['10', ['8', '6', '5', '4'], 178],
   ];
-  it.each(sourced)('%s × %s: H = %i mm', (large, small, h) => {
-    expect(value(reducerDimensions(large, small))).toMatchObject({ lengthMm: h, status: 'S' });
+  it.each(enggcyclopedia)('large end NPS %s makes exactly %j, H = %i mm', (large, smalls, h) => {
+    const made = NPS_VALUES.filter((s) => reducerDimensions(large, s).ok);
+    expect(made.sort()).toEqual([...smalls].sort());
+    for (const s of smalls) expect(value(reducerDimensions(large, s))).toMatchObject({ lengthMm: h, status: 'S' });
   });
 
   it('NPS 6 × 2-1/2 is 140 mm (wermac butt-weld fittings part 4)', () => {
