@@ -50,7 +50,7 @@ export type JointKind = 'butt' | 'socket' | 'slip-on' | 'set-on' | 'flange-face'
 export type ComponentEnd = {
   /** The run that leaves or enters here; null for an open end (flange face, open socket). */
   runId: string | null;
-  /** Centre of the end (weld end, socket mouth or face), mm plant. */
+  /** Centre of the end: weld end for butt welds, where the pipe end sits for sockets and slip-ons, the face for flange faces; mm plant. */
   point: Vec3;
   /** Unit vector pointing out of the component through this end. */
   outward: Vec3;
@@ -160,8 +160,10 @@ export type EndPrep = {
 export type PipePiece = {
   /** P1, P2, … in tree order. */
   mark: string;
-  /** Runs this piece lies in (several when a header passes a branch connection). */
+  /** Runs this piece lies in (several when a header passes a branch connection; none for a mitre segment). */
   runIds: string[];
+  /** The mitred bend a segment belongs to; null for run pieces. */
+  nodeId: string | null;
   nps: Nps;
   schedule: Schedule;
   material: string;

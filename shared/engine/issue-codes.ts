@@ -25,6 +25,7 @@ export const ISSUE_CODES = [
   'cut-elbow',
   'weight-incomplete',
   'orientation-missing',
+  'internal-error',
 ] as const;
 
 /** One issue code. */

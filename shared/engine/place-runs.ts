@@ -1,0 +1,158 @@
+/**
+ * Places the spool: converts each run's stated length into a work-point distance (or a
+ * cut length into one), finds the pipe length left between the take-offs, detects fittings
+ * welded straight together, and walks the tree from the root to give every node and run
+ * end its plant position.
+ */
+import type { SpoolRun } from '../schemas/spool-design-run.schema';
+import type { Vec3 } from '../schemas/spool-design-primitives.schema';
+import type { SpoolGraph } from './build-graph';
+import { addError, addWarning, type IssueSink } from './issues';
+import type { NodeAnalysis, NodeEnd } from './node-analysis';
+import { add, addScaled, sub, ZERO } from './vec3-math';
+
+/** A run's lengths and its placement, mm / plant coordinates. */
+export type PlacedRun = {
+  run: SpoolRun;
+  direction: Vec3;
+  fromEnd: NodeEnd | null;
+  toEnd: NodeEnd | null;
+  /** Port-to-port distance along the run, mm. */
+  workPointDistanceMm: number;
+  takeOffFromMm: number | null;
+  takeOffToMm: number | null;
+  /** Root gaps on this run, mm (one when close-coupled, none at an open end). */
+  gapsMm: number;
+  /** Gap placed at each end, mm (for weld positions). */
+  gapFromMm: number;
+  gapToMm: number;
+  pipeLengthMm: number | null;
+  closeCoupled: boolean;
+  start: Vec3;
+  end: Vec3;
+};
+
+/** Distance tolerances, mm. */
+export type LengthTolerance = {
+  /** A computed pipe within this of zero (with one root gap) means the fittings weld straight together. */
+  closeCoupleMm: number;
+};
+
+/** Finds the end of `analysis` that joins `runId`. */
+export function endFor(analysis: NodeAnalysis | undefined, runId: string): NodeEnd | null {
+  if (!analysis) return null;
+  for (const e of analysis.ends) if (e.conn.run.id === runId) return e;
+  return null;
+}
+
+/** Places every reachable run and node. */
+export function placeRuns(
+  graph: SpoolGraph,
+  analyses: Map<string, NodeAnalysis>,
+  directions: Map<string, Vec3>,
+  origin: Vec3,
+  tol: LengthTolerance,
+  issues: IssueSink,
+): { runs: Map<string, PlacedRun>; positions: Map<string, Vec3> } {
+  const positions = new Map<string, Vec3>();
+  const runs = new Map<string, PlacedRun>();
+  if (graph.rootId === null) return { runs, positions };
+  positions.set(graph.rootId, origin);
+
+  for (const run of graph.runOrder) {
+    const from = positions.get(run.from);
+    if (!from) continue;
+    const d = directions.get(run.id)!;
+    const fromEnd = endFor(analyses.get(run.from), run.id);
+    const toEnd = endFor(analyses.get(run.to), run.id);
+    const len = runLengths(run, fromEnd, toEnd, tol, issues);
+    const start = add(from, fromEnd?.portOffset ?? ZERO);
+    const end = addScaled(start, d, len.workPointDistanceMm);
+    positions.set(run.to, sub(end, toEnd?.portOffset ?? ZERO));
+    runs.set(run.id, { run, direction: d, fromEnd, toEnd, start, end, ...len });
+    checkLengthKind(run, graph, issues);
+  }
+  return { runs, positions };
+}
+
+type Lengths = Omit<PlacedRun, 'run' | 'direction' | 'fromEnd' | 'toEnd' | 'start' | 'end'>;
+
+/** The lengths of one run from its stated length and its two ends' take-offs. */
+export function runLengths(run: SpoolRun, fromEnd: NodeEnd | null, toEnd: NodeEnd | null, tol: LengthTolerance, issues: IssueSink): Lengths {
+  const tF = fromEnd ? fromEnd.takeOffMm : null;
+  const tT = toEnd ? toEnd.takeOffMm : null;
+  const gF = fromEnd?.gapMm ?? 0;
+  const gT = toEnd?.gapMm ?? 0;
+  const openF = !fromEnd || fromEnd.joint === 'open';
+  const openT = !toEnd || toEnd.joint === 'open';
+  const single = openF || openT ? 0 : Math.max(gF, gT);
+  const cannotCouple = [fromEnd, toEnd].find((e) => e && (e.joint === 'socket' || e.joint === 'slip-on' || e.pipeContinues));
+  const bothOpen = openF && openT;
+  const known = tF !== null && tT !== null;
+  const stated = run.length.mm;
+  const base = { takeOffFromMm: tF, takeOffToMm: tT };
+
+  if (run.length.kind === 'cut') {
+    if (stated === 0 && !bothOpen) {
+      if (cannotCouple) {
+        addError(issues, 'overlapping-fittings', `Run ${run.id} has no pipe, but a ${cannotCouple.joint === 'set-on' ? 'branch connection' : cannotCouple.joint} joint needs pipe`, run.id);
+        return { ...base, workPointDistanceMm: (tF ?? 0) + (tT ?? 0), gapsMm: 0, gapFromMm: 0, gapToMm: 0, pipeLengthMm: null, closeCoupled: false };
+      }
+      return {
+        ...base,
+        workPointDistanceMm: (tF ?? 0) + (tT ?? 0) + single,
+        gapsMm: single,
+        gapFromMm: openF ? 0 : single / 2,
+        gapToMm: openT ? 0 : single / 2,
+        pipeLengthMm: known ? 0 : null,
+        closeCoupled: true,
+      };
+    }
+    return { ...base, workPointDistanceMm: stated + (tF ?? 0) + (tT ?? 0) + gF + gT, gapsMm: gF + gT, gapFromMm: gF, gapToMm: gT, pipeLengthMm: known ? stated : null, closeCoupled: false };
+  }
+
+  const two = { ...base, workPointDistanceMm: stated, gapsMm: gF + gT, gapFromMm: gF, gapToMm: gT };
+  if (!known) return { ...two, pipeLengthMm: null, closeCoupled: false };
+  const pipe = stated - tF - tT - gF - gT;
+  if (pipe >= 0) return { ...two, pipeLengthMm: pipe, closeCoupled: false };
+  const coupled = stated - tF - tT - single;
+  if (Math.abs(coupled) <= tol.closeCoupleMm && !cannotCouple && !bothOpen) {
+    return { ...base, workPointDistanceMm: stated, gapsMm: single, gapFromMm: openF ? 0 : single / 2, gapToMm: openT ? 0 : single / 2, pipeLengthMm: 0, closeCoupled: true };
+  }
+  if (coupled < 0) {
+    addError(
+      issues,
+      'overlapping-fittings',
+      `Run ${run.id}: ${round(stated)} mm is ${round(-coupled)} mm less than the fittings take up (take-offs ${round(tF)} + ${round(tT)} mm${single ? ` + ${round(single)} mm root gap` : ''}); the fittings would overlap`,
+      run.id,
+    );
+  } else {
+    addError(
+      issues,
+      'piece-too-short',
+      `Run ${run.id}: ${round(coupled + single)} mm between the fitting ends is more than one root gap but too short for a pipe piece with two welds`,
+      run.id,
+    );
+  }
+  return { ...two, pipeLengthMm: null, closeCoupled: false };
+}
+
+function checkLengthKind(run: SpoolRun, graph: SpoolGraph, issues: IssueSink): void {
+  const kind = run.length.kind;
+  if (kind !== 'centre-to-face' && kind !== 'face-to-face') return;
+  const isFace = (id: string) => {
+    const n = graph.nodes.get(id);
+    return n?.kind === 'end' && (n.end.type === 'weld-neck-flange' || n.end.type === 'slip-on-flange');
+  };
+  const faces = Number(isFace(run.from)) + Number(isFace(run.to));
+  if (kind === 'centre-to-face' && faces !== 1) {
+    addWarning(issues, 'length-kind-mismatch', `Run ${run.id} is dimensioned centre-to-face but ${faces === 0 ? 'neither end is' : 'both ends are'} a flange face`, run.id);
+  }
+  if (kind === 'face-to-face' && faces !== 2) {
+    addWarning(issues, 'length-kind-mismatch', `Run ${run.id} is dimensioned face-to-face but only ${faces} of its ends is a flange face`, run.id);
+  }
+}
+
+function round(x: number): number {
+  return Math.round(x * 10) / 10;
+}

@@ -1,0 +1,163 @@
+/**
+ * Take-offs of bends: butt-weld elbows (ASME B16.9 90° and 45°, any other angle up to 90°
+ * cut from a 90° with take-off R·tan(θ/2)), mitred bends, and 180° returns.
+ */
+import type { SpoolNode } from '../schemas/spool-design-node.schema';
+import { elbowDimensions } from '../standards/butt-weld-fittings';
+import { npsInches } from '../standards/nps';
+import { scheduleLabel } from '../standards/pipe-schedules';
+import type { Connection } from './classify-nodes';
+import { addError, addWarning } from './issues';
+import { buttEnd } from './node-end-builders';
+import type { NodeAnalysis, NodeContext } from './node-analysis';
+import { cross, normalise, rejectFrom, scale } from './vec3-math';
+
+type ElbowNode = Extract<SpoolNode, { kind: 'elbow' }>;
+type ReturnNode = Extract<SpoolNode, { kind: 'return' }>;
+
+const DEG = Math.PI / 180;
+
+/** Largest deflection one elbow or mitred bend makes, degrees. */
+export const MAX_BEND_DEG = 90;
+
+/** Centre-to-end of an elbow of radius R (mm) cut to θ degrees: R·tan(θ/2), mm. */
+export function cutElbowTakeOffMm(bendRadiusMm: number, angleDeg: number): number {
+  return bendRadiusMm * Math.tan((angleDeg * DEG) / 2);
+}
+
+/** Analyses an elbow between legs `a` and `b` meeting at `angleDeg` of deflection. */
+export function analyseElbow(ctx: NodeContext, node: ElbowNode, a: Connection, b: Connection, angleDeg: number): NodeAnalysis {
+  const pipe = ctx.pipe(a.run.id);
+  const nps = pipe.nps;
+  const radius = node.radius ?? 'long';
+  const rr = radius === 'long' ? 'LR' : 'SR';
+  const mitre = node.construction === 'mitre';
+  const tol = ctx.angleToleranceDeg;
+  const gA = ctx.specAt(a.run.id).rootGapMm;
+  const gB = ctx.specAt(b.run.id).rootGapMm;
+  const sched = scheduleLabel(pipe.schedule);
+  const spec = ctx.specAt(a.run.id);
+  const fail = (msg: string): NodeAnalysis => {
+    addError(ctx.issues, 'angle-not-made', msg, node.id);
+    return {
+      node, role: ctx.role, nps, ends: [buttEnd(a, nps, null, gA), buttEnd(b, nps, null, gB)],
+      description: `Elbow ${rr}, NPS ${nps ?? '?'}`, bom: null, source: null, internalWelds: [],
+      detail: { type: 'elbow', angleDeg, bendRadiusMm: null, construction: mitre ? 'mitre' : 'fitting', mitreWelds: null, mitreSegmentMm: null },
+    };
+  };
+  if (angleDeg < tol) return fail(`Elbow ${node.id}: its runs are in a straight line (${round(angleDeg)}° of bend); remove the elbow or turn a run`);
+  if (angleDeg > MAX_BEND_DEG + tol) {
+    return fail(`Elbow ${node.id}: a ${round(angleDeg)}° bend is more than one elbow makes (90° at most); use two elbows or a return`);
+  }
+  if (!nps) return fail(`Elbow ${node.id}: size unknown`);
+
+  const is90 = Math.abs(angleDeg - 90) <= tol;
+  const is45 = Math.abs(angleDeg - 45) <= tol;
+  const base90 = elbowDimensions(nps, radius === 'long' ? 'LR90' : 'SR90');
+
+  if (mitre) {
+    const welds = node.mitreWelds ?? 2;
+    // Mitres are laid out on the radius of the matching elbow, else the nominal 1.5D / 1D.
+    const R = base90.ok ? base90.value.bendRadiusMm : npsInches(nps) * 25.4 * (radius === 'long' ? 1.5 : 1);
+    const per = angleDeg / welds;
+    const tHalf = R * Math.tan((per * DEG) / 2);
+    const takeOff = cutElbowTakeOffMm(R, angleDeg) - tHalf;
+    const g = spec.rootGapMm;
+    const segment = welds > 1 ? 2 * tHalf - g : null;
+    if (segment !== null && segment <= 0) {
+      addError(ctx.issues, 'overlapping-fittings', `Mitred bend ${node.id}: ${welds} welds on radius ${round(R)} mm leave no room for the segments`, node.id);
+    }
+    const end = (c: Connection, gap: number) => ({
+      ...buttEnd(c, nps, takeOff, gap / 2),
+      prep: 'mitre' as const,
+      mitreCutDeg: per / 2,
+    });
+    return {
+      node, role: ctx.role, nps,
+      // A single mitre is one weld, listed once (at the first leg).
+      ends: [end(a, g), welds === 1 ? { ...end(b, g), weldType: null, weldCount: 0 } : end(b, g)],
+      description: `Mitred bend ${round(angleDeg)}°, ${welds + 1} pieces, R ${round(R)} mm, NPS ${nps} ${sched}`,
+      bom: null,
+      source: base90.ok ? `radius from ${base90.value.source}` : 'radius 1.5 × NPS (long) / 1.0 × NPS (short), nominal',
+      internalWelds: welds > 1 ? [{ type: 'butt', nps, count: welds - 2 >= 0 ? welds - 2 : 0, joins: `mitre segments of ${node.id}` }] : [],
+      detail: { type: 'elbow', angleDeg, bendRadiusMm: R, construction: 'mitre', mitreWelds: welds, mitreSegmentMm: segment !== null && segment > 0 ? segment : null },
+    };
+  }
+
+  let takeOff: number | null = null;
+  let source: string | null = null;
+  let R: number | null = base90.ok ? base90.value.bendRadiusMm : null;
+  let what: string;
+  if (is90) {
+    if (!base90.ok) addError(ctx.issues, 'standard-data-missing', base90.missing, node.id);
+    else ({ centreToEndMm: takeOff, source } = base90.value);
+    what = `Elbow 90° ${rr}`;
+  } else if (is45 && radius === 'long') {
+    const e45 = elbowDimensions(nps, 'LR45');
+    if (!e45.ok) addError(ctx.issues, 'standard-data-missing', e45.missing, node.id);
+    else {
+      ({ centreToEndMm: takeOff, source } = e45.value);
+      R = e45.value.bendRadiusMm;
+    }
+    what = `Elbow 45° ${rr}`;
+  } else {
+    if (!base90.ok) addError(ctx.issues, 'standard-data-missing', base90.missing, node.id);
+    else {
+      takeOff = cutElbowTakeOffMm(base90.value.bendRadiusMm, angleDeg);
+      source = `${base90.value.source}; cut to ${round(angleDeg)}°, take-off R·tan(θ/2)`;
+    }
+    what = `Elbow ${rr} cut to ${round(angleDeg)}° (from 90°)`;
+    addWarning(ctx.issues, 'cut-elbow', `Elbow ${node.id} is cut from a 90° ${rr} elbow to ${round(angleDeg)}°: mark and trim it before fit-up`, node.id);
+  }
+  return {
+    node, role: ctx.role, nps,
+    ends: [buttEnd(a, nps, takeOff, gA), buttEnd(b, nps, takeOff, gB)],
+    description: `${what}, NPS ${nps} ${sched}, ASME B16.9`,
+    bom: { category: 'fitting', description: `${what} ${sched}, ${spec.fittingMaterial}, ASME B16.9`, nps },
+    source,
+    internalWelds: [],
+    detail: { type: 'elbow', angleDeg, bendRadiusMm: R, construction: 'fitting', mitreWelds: null, mitreSegmentMm: null },
+  };
+}
+
+/**
+ * Analyses a 180° return. `a` is the incoming leg. Both faces lie in the plane through the
+ * centre of the bend, so take-off 0 from the ports, which sit ±O/2 along the offset.
+ */
+export function analyseReturn(ctx: NodeContext, node: ReturnNode, a: Connection, b: Connection): NodeAnalysis {
+  const pipe = ctx.pipe(a.run.id);
+  const nps = pipe.nps;
+  const radius = node.radius ?? 'long';
+  const rr = radius === 'long' ? 'LR' : 'SR';
+  const spec = ctx.specAt(a.run.id);
+  const sched = scheduleLabel(pipe.schedule);
+  const u = normalise(rejectFrom(node.offsetDirection, a.outward));
+  if (!u) {
+    addError(ctx.issues, 'direction-mismatch', `Return ${node.id}: its offset direction must not be along the legs`, node.id);
+  }
+  const look = nps ? elbowDimensions(nps, radius === 'long' ? 'LR180' : 'SR180') : null;
+  if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
+  const O = look?.ok ? look.value.centreToEndMm : null;
+  const half = O !== null && u ? scale(u, O / 2) : { x: 0, y: 0, z: 0 };
+  const takeOff = O !== null && u ? 0 : null;
+  const endA = { ...buttEnd(a, nps, takeOff, ctx.specAt(a.run.id).rootGapMm), portOffset: scale(half, -1) };
+  const endB = { ...buttEnd(b, nps, takeOff, ctx.specAt(b.run.id).rootGapMm), portOffset: half };
+  return {
+    node, role: ctx.role, nps,
+    ends: [endA, endB],
+    description: `Return 180° ${rr}, NPS ${nps ?? '?'} ${sched}, ASME B16.9`,
+    bom: nps ? { category: 'fitting', description: `Return 180° ${rr} ${sched}, ${spec.fittingMaterial}, ASME B16.9`, nps } : null,
+    source: look?.ok ? look.value.source : null,
+    internalWelds: [],
+    detail: {
+      type: 'return',
+      bendRadiusMm: O !== null ? O / 2 : null,
+      centreToCentreMm: O,
+      offset: u ?? normalise(cross(a.outward, { x: 0, y: 0, z: 1 })) ?? { x: 1, y: 0, z: 0 },
+    },
+  };
+}
+
+function round(x: number): number {
+  return Math.round(x * 100) / 100;
+}

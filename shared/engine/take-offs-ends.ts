@@ -1,0 +1,122 @@
+/**
+ * Take-offs of open ends: flanges (ASME B16.5), caps (ASME B16.9 / B16.11), bevelled and
+ * plain pipe ends. An end node's work point is its face: the flange's raised face, the
+ * cap's tip, or the pipe end itself.
+ */
+import type { SpoolNode } from '../schemas/spool-design-node.schema';
+import { flangeDimensions } from '../standards/flanges';
+import { capDimensions } from '../standards/butt-weld-fittings';
+import { socketWeldDimensions } from '../standards/socket-weld-fittings';
+import { scheduleLabel } from '../standards/pipe-schedules';
+import type { Connection } from './classify-nodes';
+import { addError } from './issues';
+import { buttEnd, openEnd, socketEnd } from './node-end-builders';
+import type { NodeAnalysis, NodeContext } from './node-analysis';
+
+type EndNode = Extract<SpoolNode, { kind: 'end' }>;
+
+/** Analyses an end node with its one connection. */
+export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): NodeAnalysis {
+  const pipe = ctx.pipe(conn.run.id);
+  const spec = ctx.specAt(conn.run.id);
+  const nps = pipe.nps;
+  const sched = scheduleLabel(pipe.schedule);
+  const base = { node, role: ctx.role, nps, internalWelds: [] as NodeAnalysis['internalWelds'] };
+  const end = node.end;
+
+  switch (end.type) {
+    case 'weld-neck-flange':
+    case 'slip-on-flange': {
+      const cls = end.flangeClass ?? spec.flangeClass;
+      const wn = end.type === 'weld-neck-flange';
+      const look = nps
+        ? flangeDimensions(nps, cls, wn ? 'weld-neck' : 'slip-on', pipe.dims ? { pipeWallMm: pipe.dims.wallMm } : {})
+        : null;
+      if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
+      const d = look?.ok ? look.value : null;
+      const takeOff = d ? (wn ? d.hubLengthMm + d.raisedFaceMm : (d.slipOnSetbackMm ?? null)) : null;
+      if (d && !wn && d.slipOnSetbackMm === undefined) {
+        addError(ctx.issues, 'standard-data-missing', `No slip-on setback for NPS ${nps}`, node.id);
+      }
+      const e = wn
+        ? buttEnd(conn, nps, takeOff, spec.rootGapMm, 'flange')
+        : { ...socketEnd(conn, nps, takeOff), joint: 'slip-on' as const, weldType: 'slip-on-fillet' as const, weldCount: 2 };
+      const kind = wn ? 'weld neck' : 'slip-on';
+      const blind = end.blind === true;
+      const description = `Flange ${kind} RF Class ${cls}, NPS ${nps ?? '?'}${wn ? ` ${sched} bore` : ''}, ASME B16.5${blind ? ', with blind flange' : ''}`;
+      return {
+        ...base,
+        ends: [e],
+        description,
+        bom: nps ? { category: 'flange', description: `Flange ${kind} RF Class ${cls}${wn ? ` ${sched} bore` : ''}, ${spec.flangeMaterial}, ASME B16.5`, nps } : null,
+        source: d?.source ?? null,
+        detail: {
+          type: 'flange',
+          flangeType: end.type,
+          flangeClass: cls,
+          blind,
+          odMm: d?.odMm ?? null,
+          thicknessMm: d?.thicknessMm ?? null,
+          hubLengthMm: d?.hubLengthMm ?? null,
+          raisedFaceMm: d?.raisedFaceMm ?? null,
+          raisedFaceDiaMm: d?.raisedFaceDiaMm ?? null,
+          hubDiaAtBaseMm: d?.hubDiaAtBaseMm ?? null,
+          boltCircleMm: d?.boltCircleMm ?? null,
+          boltCount: d?.boltCount ?? null,
+          boltHoleDiaMm: d?.boltHoleDiaMm ?? null,
+        },
+      };
+    }
+    case 'cap': {
+      const look = nps && pipe.dims ? capDimensions(nps, pipe.dims.wallMm) : null;
+      if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
+      const len = look?.ok ? look.value.lengthMm : null;
+      return {
+        ...base,
+        ends: [buttEnd(conn, nps, len, spec.rootGapMm)],
+        description: `Cap, NPS ${nps ?? '?'} ${sched}, ASME B16.9`,
+        bom: nps ? { category: 'fitting', description: `Cap ${sched}, ${spec.fittingMaterial}, ASME B16.9`, nps } : null,
+        source: look?.ok ? look.value.source : null,
+        detail: { type: 'cap', lengthMm: len, socket: false },
+      };
+    }
+    case 'socket-cap': {
+      const look = nps ? socketWeldDimensions(nps, 'cap') : null;
+      if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
+      const d = look?.ok ? look.value : null;
+      // Work point at the cap's tip: the pipe end sits (length − socket depth) + gap from it.
+      const len = d?.lengthMm ?? null;
+      const takeOff = d && len !== null ? len - d.socketDepthMm + spec.socketGapMm : null;
+      if (d && len === null) addError(ctx.issues, 'standard-data-missing', `No socket-weld cap length for NPS ${nps}`, node.id);
+      return {
+        ...base,
+        ends: [socketEnd(conn, nps, takeOff)],
+        description: `Socket-weld cap Class 3000, NPS ${nps ?? '?'}, ASME B16.11`,
+        bom: nps ? { category: 'socket-fitting', description: `Socket-weld cap Class 3000, ${spec.flangeMaterial}, ASME B16.11`, nps } : null,
+        source: d?.source ?? null,
+        detail: { type: 'cap', lengthMm: len, socket: true },
+      };
+    }
+    case 'bevel': {
+      const fieldWeld = end.fieldWeld ?? true;
+      const allowance = end.fieldFitAllowanceMm ?? 0;
+      return {
+        ...base,
+        ends: [openEnd(conn, nps, 'weld-bevel')],
+        description: `Open end, bevelled${fieldWeld ? ' for field weld' : ''}${allowance > 0 ? `, ${allowance} mm field-fit allowance` : ''}`,
+        bom: null,
+        source: null,
+        detail: { type: 'open-end', endType: 'bevel', fieldWeld, fieldFitAllowanceMm: allowance },
+      };
+    }
+    case 'plain':
+      return {
+        ...base,
+        ends: [openEnd(conn, nps, 'square')],
+        description: 'Open end, square cut',
+        bom: null,
+        source: null,
+        detail: { type: 'open-end', endType: 'plain', fieldWeld: false, fieldFitAllowanceMm: 0 },
+      };
+  }
+}
