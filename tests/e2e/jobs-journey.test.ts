@@ -72,6 +72,26 @@ describe('jobs and spools in the browser', () => {
     await page.getByText('1/8" (2.4 mm)').waitFor();
     await saveScreenshot(page, '06-job-empty');
 
+    // Someone else saves the job while this detailer is editing it: 409, the entries stay, reload, save again.
+    const jobId = page.url().split('/').pop()!;
+    await page.getByRole('button', { name: 'Edit job' }).click();
+    const editDialog = page.getByRole('dialog', { name: /Edit job/ });
+    await editDialog.getByLabel('Title').fill('Chilled water, Hall C, level 2');
+    const current = (await (await page.request.get(`${app.baseUrl}/api/jobs/${jobId}`)).json()) as { version: number };
+    const other = await page.request.patch(`${app.baseUrl}/api/jobs/${jobId}`, {
+      data: { site: 'Hall C east', version: current.version },
+    });
+    expect(other.status()).toBe(200);
+    await editDialog.getByRole('button', { name: 'Save changes' }).click();
+    await editDialog.getByText(/Someone else changed this job/).waitFor();
+    await expect(editDialog.getByLabel('Title').inputValue()).resolves.toBe('Chilled water, Hall C, level 2');
+    await saveScreenshot(page, '06b-job-edit-stale');
+    await editDialog.getByRole('button', { name: 'Load latest version' }).click();
+    await editDialog.getByText(/Someone else changed this job/).waitFor({ state: 'detached' });
+    await editDialog.getByRole('button', { name: 'Save changes' }).click();
+    await editDialog.waitFor({ state: 'hidden' });
+    await page.getByRole('heading', { name: /Chilled water, Hall C, level 2/ }).waitFor();
+
     await page.getByRole('button', { name: 'New spool' }).first().click();
     const spoolDialog = page.getByRole('dialog', { name: /New spool/ });
     await spoolDialog.getByLabel('Spool mark').fill('CHW-110-S01');
@@ -98,6 +118,7 @@ describe('jobs and spools in the browser', () => {
     await page.getByRole('heading', { name: 'CHW-110-S01' }).waitFor();
     await page.getByRole('heading', { name: 'Revisions' }).waitFor();
     await page.getByRole('complementary', { name: 'Before lifting, welding or testing' }).getByText(/competent person/).waitFor();
+    await page.getByText('Loading the editor…').waitFor({ state: 'detached' });
     await saveScreenshot(page, '09-spool-detailer');
 
     await signOut(page);
@@ -139,7 +160,41 @@ describe('jobs and spools in the browser', () => {
     for (const name of [/Edit mark/, /Archive/, /Start/, /Issue revision/, /Mark /]) {
       await expect(page.getByRole('button', { name }).count()).resolves.toBe(0);
     }
+    await page.getByText('Loading the editor…').waitFor({ state: 'detached' });
     await saveScreenshot(page, '12-spool-viewer');
+    await page.close();
+  });
+
+  it('a detailer issues a revision and a fabricator records the cut', { timeout: 60_000 }, async () => {
+    await browser.context.clearCookies();
+    const page = await browser.context.newPage();
+    await page.goto(`${app.baseUrl}/`);
+    await signInAs(page, DEMO_USERS.detailer);
+    await page.getByRole('link', { name: 'HFD-B-CW' }).click();
+    await page.getByRole('link', { name: 'CW-410-S02' }).click();
+    await page.getByRole('button', { name: 'Issue revision A' }).click();
+    const dialog = page.getByRole('dialog', { name: /Issue revision A/ });
+    await dialog.getByLabel(/What changed/).fill('Issued for fabrication');
+    await dialog.getByRole('button', { name: 'Issue revision A' }).click();
+    await dialog.waitFor({ state: 'hidden' });
+    await page.getByText('Issued to bay').first().waitFor();
+    await page.getByRole('row').filter({ hasText: 'Issued for fabrication' }).filter({ hasText: 'Current issue' }).waitFor();
+    await page.getByText('Loading the editor…').waitFor({ state: 'detached' });
+    await saveScreenshot(page, '17-spool-issued');
+    const spoolUrl = page.url();
+    await signOut(page);
+
+    await page.goto(spoolUrl);
+    await signInAs(page, DEMO_USERS.fabricator);
+    await page.getByRole('heading', { name: 'CW-410-S02' }).waitFor();
+    // A fabricator records shop progress only: no design or archive controls.
+    await expect(page.getByRole('button', { name: /Issue revision|Start|Edit mark|Archive/ }).count()).resolves.toBe(0);
+    await page.getByText('Loading the editor…').waitFor({ state: 'detached' });
+    await saveScreenshot(page, '18-spool-fabricator');
+    await page.getByRole('button', { name: 'Mark cut' }).click();
+    await page.getByRole('button', { name: 'Mark fitted up' }).waitFor();
+    await page.getByText('Cut', { exact: true }).first().waitFor();
+    await saveScreenshot(page, '19-spool-cut');
     await page.close();
   });
 

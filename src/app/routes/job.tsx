@@ -71,7 +71,7 @@ export function Component() {
             </span>
           ) : null}
           <span>
-            <span className="font-mono">{j.spoolCount}</span> spools
+            <span className="font-mono">{j.spoolCount}</span> {j.spoolCount === 1 ? 'spool' : 'spools'}
           </span>
         </div>
       </PageHeader>

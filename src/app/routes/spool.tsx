@@ -70,11 +70,14 @@ export function Component() {
           <span>
             Line <strong className="font-mono text-ink-800">{s.lineNumber}</strong>
           </span>
-          <span>
-            Issued revision{' '}
-            <strong className="font-mono text-ink-800">{s.currentRevision ? s.currentRevision.letter : 'none yet'}</strong>
-            {s.currentRevision ? ` · ${formatDateTime(s.currentRevision.issuedAt)}` : null}
-          </span>
+          {s.currentRevision ? (
+            <span>
+              Issued revision <strong className="font-mono text-ink-800">{s.currentRevision.letter}</strong> ·{' '}
+              {formatDateTime(s.currentRevision.issuedAt)}
+            </span>
+          ) : (
+            <span>Not issued yet</span>
+          )}
           {job.data ? (
             <span>
               Dimensions in <strong className="text-ink-800">{unitsLabel(job.data.units)}</strong>

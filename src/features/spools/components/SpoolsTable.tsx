@@ -24,13 +24,20 @@ const columns: Column<Spool>[] = [
       s.currentRevision ? (
         <span className="font-mono font-bold">{s.currentRevision.letter}</span>
       ) : (
-        <span className="text-steel-500">none yet</span>
+        <span className="text-steel-500">not issued</span>
       ),
   },
   {
     key: 'draft',
     header: 'Draft',
-    cell: (s) => (s.draft ? <span className="font-mono">{s.draft.letter} open</span> : <span className="text-steel-500">—</span>),
+    cell: (s) =>
+      s.draft ? (
+        <span>
+          Rev. <span className="font-mono font-bold">{s.draft.letter}</span> in progress
+        </span>
+      ) : (
+        <span className="text-steel-500">—</span>
+      ),
     className: 'hidden sm:table-cell',
   },
   { key: 'updatedAt', header: 'Updated', sortable: true, cell: (s) => formatDateTime(s.updatedAt), className: 'hidden md:table-cell' },
