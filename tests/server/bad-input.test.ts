@@ -23,19 +23,20 @@ afterAll(async () => {
   await db?.drop();
 });
 
+interface ErrorAnswer {
+  error?: { code: string; message: string; details?: { issues?: Array<{ path: PropertyKey[] }> } };
+}
+
 /** Sends a request and checks: the status, the one error shape, and that no row changed. */
-async function refused(
-  send: () => PromiseLike<{ status: number; body: { error?: { code: string; message: string } } }>,
-  status: number,
-  code: string,
-) {
+async function refused(send: () => PromiseLike<{ status: number; body: unknown }>, status: number, code: string) {
   const before = await snapshot(db.dataSource);
   const res = await send();
-  expect(res.status, JSON.stringify(res.body)).toBe(status);
-  expect(res.body.error?.code).toBe(code);
-  expect(res.body.error?.message).toEqual(expect.any(String));
+  const body = res.body as ErrorAnswer;
+  expect(res.status, JSON.stringify(body)).toBe(status);
+  expect(body.error?.code).toBe(code);
+  expect(body.error?.message).toEqual(expect.any(String));
   expect(await snapshot(db.dataSource)).toBe(before);
-  return res;
+  return { status: res.status, body };
 }
 
 const validJob = () => ({ number: `N-${Math.random().toString(36).slice(2, 8)}`, title: 'T', client: 'C', spec: SPEC });
@@ -56,8 +57,7 @@ describe('bad input', () => {
       400,
       'invalid_request',
     );
-    const issues = (res.body as { error: { details: { issues: Array<{ path: string[] }> } } }).error.details.issues;
-    expect(issues[0]!.path).toEqual(['spec', 'rootGapMm']);
+    expect(res.body.error?.details?.issues?.[0]?.path).toEqual(['spec', 'rootGapMm']);
   });
 
   it('unknown fields at the top level and inside the spec: 400', async () => {
@@ -119,7 +119,7 @@ describe('bad input', () => {
       422,
       'unprocessable',
     );
-    expect((res.body as { error: { details: { issues: unknown[] } } }).error.details.issues.length).toBeGreaterThan(0);
+    expect(res.body.error?.details?.issues?.length).toBeGreaterThan(0);
   });
 
   it('unknown API paths: 404 in the error shape', async () => {
