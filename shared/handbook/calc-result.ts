@@ -17,7 +17,8 @@ export function fail<T>(message: string): Calc<T> {
 
 /** Message for a length that must be a positive finite number of mm, or null when fine. */
 export function positiveLengthProblem(name: string, value: unknown): string | null {
-  if (typeof value !== 'number' || !Number.isFinite(value)) return `${name} must be a number of mm (got ${String(value)})`;
+  if (typeof value !== 'number' || !Number.isFinite(value))
+    return `${name} must be a number of mm (got ${String(value)})`;
   if (value <= 0) return `${name} must be more than 0 mm (got ${value})`;
   return null;
 }

@@ -10,7 +10,9 @@ export function elbowTakeOff(bendRadiusMm: number, angleDeg: number): Calc<numbe
   const problem = positiveLengthProblem('Bend radius', bendRadiusMm);
   if (problem) return fail(problem);
   if (!Number.isFinite(angleDeg) || angleDeg <= 0 || angleDeg > 90) {
-    return fail(`An elbow cut from a 90° elbow turns more than 0° and at most 90° (got ${String(angleDeg)}°)`);
+    return fail(
+      `An elbow cut from a 90° elbow turns more than 0° and at most 90° (got ${String(angleDeg)}°)`,
+    );
   }
   return ok(bendRadiusMm * Math.tan(degToRad(angleDeg) / 2));
 }

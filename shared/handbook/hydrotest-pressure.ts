@@ -28,11 +28,16 @@ export type HydrotestPressure = {
  * ST/S is the ratio of allowable stress at test temperature to that at design temperature
  * (default 1, i.e. PT = 1.5 × P). Never below 1.5 × P; ST/S limited to 6.5.
  */
-export function hydrotestPressure(input: { designPressureBar: number; stressRatio?: number }): Calc<HydrotestPressure> {
+export function hydrotestPressure(input: {
+  designPressureBar: number;
+  stressRatio?: number;
+}): Calc<HydrotestPressure> {
   const p = input.designPressureBar;
-  if (!Number.isFinite(p) || p <= 0) return fail(`Design pressure must be more than 0 bar gauge (got ${String(p)})`);
+  if (!Number.isFinite(p) || p <= 0)
+    return fail(`Design pressure must be more than 0 bar gauge (got ${String(p)})`);
   const ratio = input.stressRatio ?? 1;
-  if (!Number.isFinite(ratio) || ratio <= 0) return fail(`Stress ratio ST/S must be a positive number (got ${String(ratio)})`);
+  if (!Number.isFinite(ratio) || ratio <= 0)
+    return fail(`Stress ratio ST/S must be a positive number (got ${String(ratio)})`);
   const notes: string[] = [];
   let used = ratio;
   if (ratio < 1) {

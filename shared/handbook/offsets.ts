@@ -55,9 +55,13 @@ export function rollingOffset(input: {
   fittingAngleDeg?: number;
 }): Calc<RollingOffset> {
   const { riseMm, rollMm, runMm, fittingAngleDeg } = input;
-  for (const [name, v] of [['Rise', riseMm], ['Roll', rollMm]] as const) {
+  for (const [name, v] of [
+    ['Rise', riseMm],
+    ['Roll', rollMm],
+  ] as const) {
     if (!Number.isFinite(v)) return fail(`${name} must be a number of mm (got ${String(v)})`);
-    if (v < 0) return fail(`${name} must be 0 or more mm: give its size, the drawing gives its direction (got ${v})`);
+    if (v < 0)
+      return fail(`${name} must be 0 or more mm: give its size, the drawing gives its direction (got ${v})`);
   }
   const trueOffset = Math.hypot(riseMm, rollMm);
   if (trueOffset === 0) return fail('Rise and roll are both 0: there is no offset');
@@ -78,7 +82,12 @@ export function rollingOffset(input: {
   if (problem) return fail(problem);
   const simple = simpleOffset({ setMm: trueOffset, fittingAngleDeg: angle });
   if (!simple.ok) return simple;
-  return ok({ trueOffsetMm: trueOffset, travelMm: simple.value.travelMm, runMm: simple.value.runMm, angleDeg: angle });
+  return ok({
+    trueOffsetMm: trueOffset,
+    travelMm: simple.value.travelMm,
+    runMm: simple.value.runMm,
+    angleDeg: angle,
+  });
 }
 
 /**
@@ -92,9 +101,11 @@ export function offsetAngleFor(input: { setMm: number; runMm: number }): Calc<{
 }> {
   const problem = positiveLengthProblem('Set', input.setMm);
   if (problem) return fail(problem);
-  if (!Number.isFinite(input.runMm) || input.runMm < 0) return fail(`Run must be 0 or more mm (got ${String(input.runMm)})`);
+  if (!Number.isFinite(input.runMm) || input.runMm < 0)
+    return fail(`Run must be 0 or more mm (got ${String(input.runMm)})`);
   const angleDeg = radToDeg(Math.atan2(input.setMm, input.runMm));
   let nearest: number = COMMON_FITTING_ANGLES_DEG[0];
-  for (const a of COMMON_FITTING_ANGLES_DEG) if (Math.abs(a - angleDeg) < Math.abs(nearest - angleDeg)) nearest = a;
+  for (const a of COMMON_FITTING_ANGLES_DEG)
+    if (Math.abs(a - angleDeg) < Math.abs(nearest - angleDeg)) nearest = a;
   return ok({ angleDeg, travelMm: Math.hypot(input.setMm, input.runMm), nearestCommonAngleDeg: nearest });
 }

@@ -41,13 +41,41 @@ export type FlangeRow = {
   note?: string;
 };
 
-type Raw = [Nps, number, number, number, string, string, number, number, number, number, number, DataStatus, DataStatus, DataStatus, string?];
+type Raw = [
+  Nps,
+  number,
+  number,
+  number,
+  string,
+  string,
+  number,
+  number,
+  number,
+  number,
+  number,
+  DataStatus,
+  DataStatus,
+  DataStatus,
+  string?,
+];
 
 function rows(raw: readonly Raw[]): FlangeRow[] {
   return raw.map(([nps, od, bc, n, hole, bolt, tf, ywn, yso, x, r, dS, yS, bS, note]) => ({
-    nps, odMm: od, boltCircleMm: bc, boltCount: n, holeIn: hole, boltIn: bolt, tfMm: tf,
-    yWeldNeckMm: ywn, ySlipOnMm: yso, hubBaseMm: x, raisedFaceDiaMm: r,
-    drillingStatus: dS, yWeldNeckStatus: yS, bodyStatus: bS, ...(note ? { note } : {}),
+    nps,
+    odMm: od,
+    boltCircleMm: bc,
+    boltCount: n,
+    holeIn: hole,
+    boltIn: bolt,
+    tfMm: tf,
+    yWeldNeckMm: ywn,
+    ySlipOnMm: yso,
+    hubBaseMm: x,
+    raisedFaceDiaMm: r,
+    drillingStatus: dS,
+    yWeldNeckStatus: yS,
+    bodyStatus: bS,
+    ...(note ? { note } : {}),
   }));
 }
 
@@ -58,6 +86,7 @@ export const FLANGE_SOURCES = {
 } as const;
 
 // Columns: nps, O, W, bolts, hole, bolt, tf, Y(WN), Y(SO), X, R, drilling, Y(WN), body status
+// prettier-ignore
 const C150: readonly Raw[] = [
   ['1/2', 90, 60.3, 4, '5/8', '1/2', 9.6, 46, 14, 30, 34.9, 'M', 'C', 'C'],
   ['3/4', 100, 69.9, 4, '5/8', '1/2', 11.2, 51, 14, 38, 42.9, 'M', 'C', 'C'],
@@ -83,6 +112,7 @@ const C150: readonly Raw[] = [
 const ROUNDED_BC =
   'bolt circle is the exact conversion of the B16.5 fractional inch value; one source converts a two-decimal inch figure and differs by about 0.2 mm';
 
+// prettier-ignore
 const C300: readonly Raw[] = [
   ['1/2', 95, 66.7, 4, '5/8', '1/2', 12.7, 51, 21, 38, 34.9, 'S~', 'S~', 'S~', ROUNDED_BC],
   ['3/4', 115, 82.6, 4, '3/4', '5/8', 14.3, 56, 24, 48, 42.9, 'S~', 'S~', 'S~', 'source lists OD 117 (converted inch); B16.5 metric 115'],

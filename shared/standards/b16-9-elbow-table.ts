@@ -33,6 +33,7 @@ export const ELBOW_SOURCES = {
  * on O ±6 mm (NPS ≤ 8) or ±10 mm (NPS 10–24); on K ±6 mm.
  * Do not derive B from A·tan 22.5°: B16.9 45° elbows are longer than the pure arc.
  */
+// prettier-ignore
 export const ELBOW_TABLE: readonly ElbowRow[] = [
   // NPS 1/2 LR 90° A = 38, the same as NPS 1: a real anomaly of the table, not a typo.
   { nps: '1/2', lr90: [38, 'S'], lr45: [16, 'S'], lr180: { o: [76, 'S'], k: [48, 'S'] } },

@@ -24,6 +24,7 @@ export const REDUCER_CAP_SOURCES = {
 /**
  * ASME B16.9 reducers, mm. H depends only on the large end. Tolerance on H ±2 mm (from memory).
  */
+// prettier-ignore
 export const REDUCER_TABLE: readonly ReducerRow[] = [
   { large: '3/4', h: [38, 'S'], smallEnds: ['1/2'], smallEndsStatus: 'S' },
   { large: '1', h: [51, 'S'], smallEnds: ['3/4', '1/2'], smallEndsStatus: 'S' },
@@ -49,6 +50,7 @@ export const REDUCER_TABLE: readonly ReducerRow[] = [
  * ASME B16.9 caps, mm. E applies to walls up to the limiting wall, E1 above it.
  * Tolerance on E: ±3 mm for NPS ≤ 4, ±6 mm for NPS 5–24.
  */
+// prettier-ignore
 export const CAP_TABLE: readonly CapRow[] = (
   [
     ['1/2', 25, 25, 4.57, 'S'], ['3/4', 25, 25, 3.81, 'S'], ['1', 38, 38, 4.57, 'S'],

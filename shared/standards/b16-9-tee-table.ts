@@ -8,13 +8,16 @@ export type TeeRow = { run: Nps; branch: Nps; c: Cell; m: Cell };
 
 /** Where the S values come from. */
 export const TEE_SOURCES = {
-  straight: 'ASME B16.9 straight tee C = M: wermac straight-tee table (alloysteelfittings mirror), also emirerristeel B16.9 tee page',
-  reducing: 'ASME B16.9 Table 8 reducing outlet tee C and M: pipingengineer.org metric reducing-tee table up to NPS 12 × 6; larger runs from memory (status M)',
+  straight:
+    'ASME B16.9 straight tee C = M: wermac straight-tee table (alloysteelfittings mirror), also emirerristeel B16.9 tee page',
+  reducing:
+    'ASME B16.9 Table 8 reducing outlet tee C and M: pipingengineer.org metric reducing-tee table up to NPS 12 × 6; larger runs from memory (status M)',
 } as const;
 
 /**
  * Straight tees (run = branch), ASME B16.9, mm. Tolerance on C and M: ±2 mm for NPS ½–24.
  */
+// prettier-ignore
 export const STRAIGHT_TEE_TABLE: readonly TeeRow[] = (
   [
     ['1/2', 25, 'S'], ['3/4', 29, 'S'], ['1', 38, 'S'], ['1-1/4', 48, 'S'], ['1-1/2', 57, 'S'],
@@ -28,6 +31,7 @@ export const STRAIGHT_TEE_TABLE: readonly TeeRow[] = (
  * Reducing outlet tees, ASME B16.9, mm: C is the run's straight-tee value, M the outlet.
  * Only the outlet sizes B16.9 lists for each run (down three to five steps) are present.
  */
+// prettier-ignore
 export const REDUCING_TEE_TABLE: readonly TeeRow[] = (
   [
     ['3/4', '1/2', 29, 29],

@@ -25,7 +25,12 @@ export type ElbowDimensions = {
 };
 
 /** Run and outlet centre-to-end of a tee, mm. */
-export type TeeDimensions = { runCentreToEndMm: number; branchCentreToEndMm: number; status: DataStatus; source: string };
+export type TeeDimensions = {
+  runCentreToEndMm: number;
+  branchCentreToEndMm: number;
+  status: DataStatus;
+  source: string;
+};
 
 /** Reducer end-to-end length H, mm. */
 export type ReducerDimensions = { lengthMm: number; status: DataStatus; source: string };
@@ -42,7 +47,9 @@ const KIND_WORDS: Record<ElbowKind, string> = {
 };
 
 const ELBOWS = new Map<Nps, ElbowRow>(ELBOW_TABLE.map((r) => [r.nps, r]));
-const TEES = new Map<string, TeeRow>([...STRAIGHT_TEE_TABLE, ...REDUCING_TEE_TABLE].map((t) => [`${t.run}|${t.branch}`, t]));
+const TEES = new Map<string, TeeRow>(
+  [...STRAIGHT_TEE_TABLE, ...REDUCING_TEE_TABLE].map((t) => [`${t.run}|${t.branch}`, t]),
+);
 const REDUCERS = new Map(REDUCER_TABLE.map((r) => [r.large, r]));
 const CAPS = new Map(CAP_TABLE.map((r) => [r.nps, r]));
 
@@ -54,10 +61,20 @@ export function elbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensio
   switch (kind) {
     case 'LR90':
       if (!row.lr90) return missing(none);
-      return found({ centreToEndMm: row.lr90[0], bendRadiusMm: row.lr90[0], status: row.lr90[1], source: ELBOW_SOURCES.lr90 });
+      return found({
+        centreToEndMm: row.lr90[0],
+        bendRadiusMm: row.lr90[0],
+        status: row.lr90[1],
+        source: ELBOW_SOURCES.lr90,
+      });
     case 'SR90':
       if (!row.sr90) return missing(none);
-      return found({ centreToEndMm: row.sr90[0], bendRadiusMm: row.sr90[0], status: row.sr90[1], source: ELBOW_SOURCES.sr90 });
+      return found({
+        centreToEndMm: row.sr90[0],
+        bendRadiusMm: row.sr90[0],
+        status: row.sr90[1],
+        source: ELBOW_SOURCES.sr90,
+      });
     case 'LR45':
       if (!row.lr45 || !row.lr90) return missing(none);
       return found({
@@ -90,7 +107,9 @@ export function elbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensio
 /** ASME B16.9 tee, straight (run = branch) or reducing outlet (branch smaller), mm. */
 export function teeDimensions(runNps: Nps, branchNps: Nps): Lookup<TeeDimensions> {
   if (compareNps(branchNps, runNps) > 0) {
-    return missing(`No ASME B16.9 tee has an NPS ${branchNps} outlet on an NPS ${runNps} run (the outlet cannot be larger than the run)`);
+    return missing(
+      `No ASME B16.9 tee has an NPS ${branchNps} outlet on an NPS ${runNps} run (the outlet cannot be larger than the run)`,
+    );
   }
   const tee = TEES.get(`${runNps}|${branchNps}`);
   if (!tee) {
@@ -111,13 +130,19 @@ export function teeDimensions(runNps: Nps, branchNps: Nps): Lookup<TeeDimensions
 /** ASME B16.9 concentric or eccentric reducer length H, mm (same for both). */
 export function reducerDimensions(largeNps: Nps, smallNps: Nps): Lookup<ReducerDimensions> {
   if (compareNps(smallNps, largeNps) >= 0) {
-    return missing(`A reducer from NPS ${largeNps} to NPS ${smallNps} is not a reduction: the large end must be the larger size`);
+    return missing(
+      `A reducer from NPS ${largeNps} to NPS ${smallNps} is not a reduction: the large end must be the larger size`,
+    );
   }
   const row = REDUCERS.get(largeNps);
   if (!row || !row.smallEnds.includes(smallNps)) {
     return missing(`No ASME B16.9 reducer data for NPS ${largeNps} × ${smallNps}`);
   }
-  return found({ lengthMm: row.h[0], status: weakestStatus(row.h[1], row.smallEndsStatus), source: REDUCER_CAP_SOURCES.reducer });
+  return found({
+    lengthMm: row.h[0],
+    status: weakestStatus(row.h[1], row.smallEndsStatus),
+    source: REDUCER_CAP_SOURCES.reducer,
+  });
 }
 
 /**

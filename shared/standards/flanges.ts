@@ -122,7 +122,9 @@ export function flangeDimensions(
     case 'slip-on': {
       const wall = options.pipeWallMm ?? stdWall(nps);
       if (wall === undefined || !Number.isFinite(wall) || wall <= 0) {
-        return missing(`A slip-on flange setback needs the pipe wall as a positive number of mm for NPS ${nps}`);
+        return missing(
+          `A slip-on flange setback needs the pipe wall as a positive number of mm for NPS ${nps}`,
+        );
       }
       return found({
         ...base,
@@ -133,7 +135,11 @@ export function flangeDimensions(
       });
     }
     case 'blind':
-      return found({ ...base, hubLengthMm: row.tfMm, status: weakestStatus(row.drillingStatus, row.bodyStatus) });
+      return found({
+        ...base,
+        hubLengthMm: row.tfMm,
+        status: weakestStatus(row.drillingStatus, row.bodyStatus),
+      });
   }
 }
 

@@ -4,6 +4,7 @@ import { z } from 'zod';
  * Nominal pipe sizes Tackline has standards data for, smallest first.
  * NPS 3-1/2 and 22 are left out on purpose: rarely used and not tabulated here.
  */
+// prettier-ignore
 export const NPS_VALUES = [
   '1/2', '3/4', '1', '1-1/4', '1-1/2', '2', '2-1/2', '3', '4', '5',
   '6', '8', '10', '12', '14', '16', '18', '20', '24',
@@ -17,6 +18,7 @@ export const npsSchema = z.enum(NPS_VALUES, {
   error: () => `NPS must be one of ${NPS_VALUES.join(', ')}`,
 });
 
+// prettier-ignore
 const NPS_INCHES: Record<Nps, number> = {
   '1/2': 0.5, '3/4': 0.75, '1': 1, '1-1/4': 1.25, '1-1/2': 1.5, '2': 2, '2-1/2': 2.5,
   '3': 3, '4': 4, '5': 5, '6': 6, '8': 8, '10': 10, '12': 12, '14': 14, '16': 16,
@@ -24,6 +26,7 @@ const NPS_INCHES: Record<Nps, number> = {
 };
 
 // DN (metric designation) for each NPS, per ASME B36.10M / ISO 6708.
+// prettier-ignore
 const DN: Record<Nps, number> = {
   '1/2': 15, '3/4': 20, '1': 25, '1-1/4': 32, '1-1/2': 40, '2': 50, '2-1/2': 65,
   '3': 80, '4': 100, '5': 125, '6': 150, '8': 200, '10': 250, '12': 300, '14': 350,

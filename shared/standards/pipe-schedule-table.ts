@@ -28,6 +28,7 @@ const MEM = 'Other schedules are from memory (status M); Sch 10 up to NPS 12 equ
  * Standard and Sch 40 are identical up to NPS 10; XS and Sch 80 up to NPS 8 (from memory:
  * the sourced text is cut off there). Larger STD walls are 9.53 mm, larger XS 12.70 mm.
  */
+// prettier-ignore
 export const PIPE_TABLE: readonly PipeRow[] = [
   { nps: '1/2', odMm: 21.3, odStatus: 'S', source: `${SRC_SMALL}. ${MEM}`,
     walls: { '10': [2.11, 'M'], STD: [2.77, 'S'], '40': [2.77, 'S'], XS: [3.73, 'S'], '80': [3.73, 'S'], '160': [4.78, 'M'], XXS: [7.47, 'M'] } },

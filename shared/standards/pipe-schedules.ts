@@ -5,7 +5,19 @@ import type { Nps } from './nps';
 import { PIPE_TABLE, type PipeRow } from './pipe-schedule-table';
 
 /** Wall designations of ASME B36.10M carried here: weight classes, then schedule numbers. */
-export const SCHEDULE_VALUES = ['STD', 'XS', 'XXS', '10', '20', '30', '40', '60', '80', '120', '160'] as const;
+export const SCHEDULE_VALUES = [
+  'STD',
+  'XS',
+  'XXS',
+  '10',
+  '20',
+  '30',
+  '40',
+  '60',
+  '80',
+  '120',
+  '160',
+] as const;
 
 /** A wall designation: weight class (STD, XS, XXS) or schedule number. */
 export type Schedule = (typeof SCHEDULE_VALUES)[number];

@@ -6,7 +6,14 @@ import type { Nps } from './nps';
 export type SocketFittingKind = 'elbow90' | 'elbow45' | 'tee' | 'coupling' | 'half-coupling' | 'cap';
 
 /** All kinds, for schemas and pickers. */
-export const SOCKET_FITTING_KINDS = ['elbow90', 'elbow45', 'tee', 'coupling', 'half-coupling', 'cap'] as const satisfies readonly SocketFittingKind[];
+export const SOCKET_FITTING_KINDS = [
+  'elbow90',
+  'elbow45',
+  'tee',
+  'coupling',
+  'half-coupling',
+  'cap',
+] as const satisfies readonly SocketFittingKind[];
 
 /**
  * Gap left between the pipe end and the socket bottom before welding, mm.
@@ -50,7 +57,8 @@ type Row = {
   halfCouplingLength: number;
 };
 
-const SOURCE_2016 = 'ASME B16.11-2016 Class 3000 socket-weld tables (vaibhavfitting reproduction: 90° and 45° elbows, couplings; 45° elbow also creativepiping)';
+const SOURCE_2016 =
+  'ASME B16.11-2016 Class 3000 socket-weld tables (vaibhavfitting reproduction: 90° and 45° elbows, couplings; 45° elbow also creativepiping)';
 const SOURCE_HALF =
   "half-coupling length from a fitting maker's B16.11 coupling table (mumbadevisteel), read as the overall length; it equals the B16.11 inch values 7/8 in … 1-7/8 in converted";
 
@@ -58,6 +66,7 @@ const SOURCE_HALF =
  * ASME B16.11-2016 Class 3000 socket-weld dimensions, metric (mm). Older metric editions
  * round J to 10 / 13 / 16 mm and give B as a mean (≈ 21.95 for NPS ½).
  */
+// prettier-ignore
 const ROWS: readonly Row[] = [
   { nps: '1/2', bore: 21.8, depth: 9.5, a90: 15.5, a45: 11.0, couplingE: 9.5, halfCouplingLength: 22.5 },
   { nps: '3/4', bore: 27.2, depth: 12.5, a90: 19.0, a45: 13.0, couplingE: 9.5, halfCouplingLength: 24.0 },
@@ -101,7 +110,9 @@ export function socketWeldDimensions(nps: Nps, kind: SocketFittingKind): Lookup<
         source: `${SOURCE_2016}; ${SOURCE_HALF}`,
       });
     case 'cap':
-      return missing(`No ASME B16.11 Class 3000 socket-weld cap data for NPS ${nps}: cap lengths are not carried yet`);
+      return missing(
+        `No ASME B16.11 Class 3000 socket-weld cap data for NPS ${nps}: cap lengths are not carried yet`,
+      );
   }
 }
 

@@ -74,7 +74,10 @@ export function mitreTemplate(input: MitreInput): Calc<MitreTemplate> {
   const welds = input.pieces - 1;
   const deflection = input.bendAngleDeg / welds;
   const cut = deflection / 2;
-  if (cut > 45) return fail(`A ${input.bendAngleDeg}° bend in ${input.pieces} pieces needs ${cut}° cuts: use more pieces (45° at most)`);
+  if (cut > 45)
+    return fail(
+      `A ${input.bendAngleDeg}° bend in ${input.pieces} pieces needs ${cut}° cuts: use more pieces (45° at most)`,
+    );
   const tanCut = Math.tan(degToRad(cut));
   const od = input.odMm;
   const stations: MitreStation[] = [];
@@ -102,10 +105,19 @@ export function mitreTemplate(input: MitreInput): Calc<MitreTemplate> {
     const rProblem = positiveLengthProblem('Bend radius', input.radiusMm);
     if (rProblem) return fail(rProblem);
     const R = input.radiusMm;
-    if (R <= od / 2) return fail(`Bend radius ${R} mm must be more than half the OD (${od / 2} mm) or the throat has no length`);
+    if (R <= od / 2)
+      return fail(
+        `Bend radius ${R} mm must be more than half the OD (${od / 2} mm) or the throat has no length`,
+      );
     const piece = (kind: 'end' | 'middle', index: number): MitrePiece => {
       const n = kind === 'end' ? 1 : 2;
-      return { index, kind, centrelineMm: n * R * tanCut, throatMm: n * (R - od / 2) * tanCut, backMm: n * (R + od / 2) * tanCut };
+      return {
+        index,
+        kind,
+        centrelineMm: n * R * tanCut,
+        throatMm: n * (R - od / 2) * tanCut,
+        backMm: n * (R + od / 2) * tanCut,
+      };
     };
     result.pieces = Array.from({ length: input.pieces }, (_, i) =>
       piece(i === 0 || i === input.pieces - 1 ? 'end' : 'middle', i),

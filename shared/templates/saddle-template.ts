@@ -76,29 +76,41 @@ export function setOnBranchTemplate(input: SetOnBranchInput): Calc<SetOnBranchTe
   const R = input.headerOdMm / 2;
   const r = input.branchOdMm / 2;
   if (r > R) {
-    return fail(`A set-on branch cannot be larger than its header (branch OD ${input.branchOdMm} mm > header OD ${input.headerOdMm} mm)`);
+    return fail(
+      `A set-on branch cannot be larger than its header (branch OD ${input.branchOdMm} mm > header OD ${input.headerOdMm} mm)`,
+    );
   }
   const beta = input.branchAngleDeg ?? 90;
   if (!Number.isFinite(beta) || beta <= 0 || beta > 90) {
-    return fail(`Branch angle must be more than 0° and at most 90°, the acute angle between the axes (got ${String(input.branchAngleDeg)}°)`);
+    return fail(
+      `Branch angle must be more than 0° and at most 90°, the acute angle between the axes (got ${String(input.branchAngleDeg)}°)`,
+    );
   }
   let holeR = r;
   const notes: string[] = [];
   if (input.wallMm !== undefined) {
     const wallProblem = positiveLengthProblem('Branch wall', input.wallMm);
     if (wallProblem) return fail(wallProblem);
-    if (input.wallMm >= r) return fail(`Branch wall ${input.wallMm} mm leaves no bore in a ${input.branchOdMm} mm OD branch`);
+    if (input.wallMm >= r)
+      return fail(`Branch wall ${input.wallMm} mm leaves no bore in a ${input.branchOdMm} mm OD branch`);
     holeR = r - input.wallMm;
     notes.push('Header hole laid out to the branch bore (OD − 2 × wall).');
   } else {
-    notes.push('No branch wall given: header hole laid out to the branch OD; cut it to the bore for a set-on branch.');
+    notes.push(
+      'No branch wall given: header hole laid out to the branch OD; cut it to the bore for a set-on branch.',
+    );
   }
-  if (beta < 90 && r === R) notes.push('Equal-size angled branch: check the fit-up at the flanks, the cut runs to the header centreline there.');
+  if (beta < 90 && r === R)
+    notes.push(
+      'Equal-size angled branch: check the fit-up at the flanks, the cut runs to the header centreline there.',
+    );
 
   const b = degToRad(beta);
   const sinB = Math.sin(b);
   const cosB = beta === 90 ? 0 : Math.cos(b);
-  const w = (t: number, radius: number) => (-radius * Math.cos(t) * cosB + Math.sqrt(Math.max(0, R * R - radius * radius * Math.sin(t) ** 2))) / sinB;
+  const w = (t: number, radius: number) =>
+    (-radius * Math.cos(t) * cosB + Math.sqrt(Math.max(0, R * R - radius * radius * Math.sin(t) ** 2))) /
+    sinB;
   // w is largest at θ = 180° when angled (both terms peak there) and at θ = 0 when square.
   const wMax = beta === 90 ? R : (R + r * cosB) / sinB;
   const axisMeetsSurfaceAlong = R * (cosB / sinB);

@@ -28,7 +28,10 @@ export function parseLength(text: string, defaultUnits: LengthUnits): ParsedLeng
   if (raw === '') return { ok: false, message: 'Enter a length' };
   // "1,200" could be 1200 or 1.2: refuse rather than guess.
   if (raw.includes(',')) {
-    return { ok: false, message: `"${text.trim()}" has a comma: use a point for decimals and no thousands separators` };
+    return {
+      ok: false,
+      message: `"${text.trim()}" has a comma: use a point for decimals and no thousands separators`,
+    };
   }
   let sign = 1;
   let body = raw;
@@ -55,7 +58,10 @@ export function parseLength(text: string, defaultUnits: LengthUnits): ParsedLeng
     const inches = readInches(rest);
     if (!inches.ok) return inches.message ? { ok: false, message: inches.message } : junk(text);
     if (inches.value >= 12) {
-      return { ok: false, message: `"${text.trim()}" has ${inches.value} inches after the feet: inches after feet must be under 12` };
+      return {
+        ok: false,
+        message: `"${text.trim()}" has ${inches.value} inches after the feet: inches after feet must be under 12`,
+      };
     }
     return finite(sign * (ft * 12 + inches.value) * MM_PER_INCH, text);
   }
@@ -75,8 +81,7 @@ export function parseLength(text: string, defaultUnits: LengthUnits): ParsedLeng
 }
 
 type InchRead =
-  | { ok: true; value: number; fraction: boolean; marked: boolean }
-  | { ok: false; message?: string };
+  { ok: true; value: number; fraction: boolean; marked: boolean } | { ok: false; message?: string };
 
 function readInches(text: string): InchRead {
   const m = INCHES.exec(text);
@@ -86,9 +91,13 @@ function readInches(text: string): InchRead {
   const whole = m[1] !== undefined ? Number(m[1]) : 0;
   const num = Number(m[2] ?? m[4]);
   const den = Number(m[3] ?? m[5]);
-  if (den === 0) return { ok: false, message: `${num}/${den} is not a fraction: the bottom number cannot be 0` };
+  if (den === 0)
+    return { ok: false, message: `${num}/${den} is not a fraction: the bottom number cannot be 0` };
   if (m[1] !== undefined && num >= den) {
-    return { ok: false, message: `${num}/${den} after a whole number must be less than 1 (write ${whole + Math.floor(num / den)} ${num % den}/${den})` };
+    return {
+      ok: false,
+      message: `${num}/${den} after a whole number must be less than 1 (write ${whole + Math.floor(num / den)} ${num % den}/${den})`,
+    };
   }
   return { ok: true, value: whole + num / den, fraction: true, marked };
 }

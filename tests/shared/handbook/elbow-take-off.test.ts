@@ -3,7 +3,7 @@ import { elbowTakeOff } from '../../../shared/handbook/elbow-take-off';
 import { elbowDimensions } from '../../../shared/standards/butt-weld-fittings';
 
 describe('elbowTakeOff', () => {
-  it('NPS 4 LR elbow cut to 60°: 152 × tan 30° = 87.8 mm (fitting maker\'s worked example)', () => {
+  it("NPS 4 LR elbow cut to 60°: 152 × tan 30° = 87.8 mm (fitting maker's worked example)", () => {
     const r = elbowTakeOff(152, 60);
     expect(r.ok && r.value).toBeCloseTo(87.76, 2);
   });
@@ -16,7 +16,14 @@ describe('elbowTakeOff', () => {
   });
 
   it('rejects angles outside (0°, 90°] and bad radii', () => {
-    for (const [radius, angle] of [[152, 0], [152, 91], [152, Number.NaN], [0, 45], [-1, 45], [Number.NaN, 45]] as const) {
+    for (const [radius, angle] of [
+      [152, 0],
+      [152, 91],
+      [152, Number.NaN],
+      [0, 45],
+      [-1, 45],
+      [Number.NaN, 45],
+    ] as const) {
       const r = elbowTakeOff(radius, angle);
       expect(r.ok).toBe(false);
     }

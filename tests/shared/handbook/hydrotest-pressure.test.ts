@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { HYDROTEST_CAUTION, hydrotestPressure, MAX_STRESS_RATIO } from '../../../shared/handbook/hydrotest-pressure';
+import {
+  HYDROTEST_CAUTION,
+  hydrotestPressure,
+  MAX_STRESS_RATIO,
+} from '../../../shared/handbook/hydrotest-pressure';
 
 describe('hydrotestPressure (ASME B31.3 §345.4.2, via industrialmonitordirect summary)', () => {
   it('is 1.5 × design pressure when test and design temperatures give ST/S = 1: 10 bar → 15 bar', () => {
@@ -28,7 +32,12 @@ describe('hydrotestPressure (ASME B31.3 §345.4.2, via industrialmonitordirect s
   });
 
   it('rejects zero, negative and non-numeric inputs', () => {
-    for (const input of [{ designPressureBar: 0 }, { designPressureBar: -3 }, { designPressureBar: Number.NaN }, { designPressureBar: 10, stressRatio: 0 }]) {
+    for (const input of [
+      { designPressureBar: 0 },
+      { designPressureBar: -3 },
+      { designPressureBar: Number.NaN },
+      { designPressureBar: 10, stressRatio: 0 },
+    ]) {
       expect(hydrotestPressure(input).ok).toBe(false);
     }
   });

@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { compareNps, dnOf, isNps, NPS_VALUES, npsInches, npsSchema, smallerSizes } from '../../../shared/standards/nps';
+import {
+  compareNps,
+  dnOf,
+  isNps,
+  NPS_VALUES,
+  npsInches,
+  npsSchema,
+  smallerSizes,
+} from '../../../shared/standards/nps';
 
 describe('nps', () => {
   it('lists sizes smallest first', () => {

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { NPS_VALUES, type Nps } from '../../../shared/standards/nps';
-import { pipeDimensions, pipeOdMm, scheduleSchema, SCHEDULE_VALUES } from '../../../shared/standards/pipe-schedules';
+import {
+  pipeDimensions,
+  pipeOdMm,
+  scheduleSchema,
+  SCHEDULE_VALUES,
+} from '../../../shared/standards/pipe-schedules';
 
 // Published ASME B36.10M metric values. Sources per row:
 // - NPS 1/2, 3/4, 1: steeltube.sk B36.10M table (mm), follincraft "Pipe Schedule Quick Charts" (inch walls)
@@ -9,7 +14,14 @@ import { pipeDimensions, pipeOdMm, scheduleSchema, SCHEDULE_VALUES } from '../..
 // - NPS 4: Engineering ToolBox "ASME/ANSI B36.10/19 … Metric Units"
 // - NPS 10: follincraft (Sch 40 and XS)
 // - NPS 12–24: B36.10M text ("all larger sizes of Standard have 3/8 in (9.53 mm) wall") and follincraft (Sch 40)
-const PUBLISHED: Array<{ nps: Nps; od: number; std: number; xs?: number; sch40: number; stdKgPerM?: number }> = [
+const PUBLISHED: Array<{
+  nps: Nps;
+  od: number;
+  std: number;
+  xs?: number;
+  sch40: number;
+  stdKgPerM?: number;
+}> = [
   { nps: '1/2', od: 21.3, std: 2.77, xs: 3.73, sch40: 2.77, stdKgPerM: 1.27 },
   { nps: '3/4', od: 26.7, std: 2.87, xs: 3.91, sch40: 2.87, stdKgPerM: 1.69 },
   { nps: '1', od: 33.4, std: 3.38, xs: 4.55, sch40: 3.38, stdKgPerM: 2.5 },
@@ -78,8 +90,15 @@ describe('pipeDimensions (ASME B36.10M)', () => {
   // Secondary sources for sizes the primary tables skip (inch walls × 25.4, within 0.03 mm):
   // Grinnell pipe-fitter's handbook "Steel Pipe Sizes and Wall Thicknesses"; vendor Sch 80 tables.
   it.each([
-    ['1-1/4', 'STD', 0.14], ['2-1/2', 'STD', 0.203], ['5', 'STD', 0.258], ['8', '20', 0.25], ['8', '30', 0.277],
-    ['10', '20', 0.25], ['10', '30', 0.307], ['1-1/4', '80', 0.191], ['12', '80', 0.688],
+    ['1-1/4', 'STD', 0.14],
+    ['2-1/2', 'STD', 0.203],
+    ['5', 'STD', 0.258],
+    ['8', '20', 0.25],
+    ['8', '30', 0.277],
+    ['10', '20', 0.25],
+    ['10', '30', 0.307],
+    ['1-1/4', '80', 0.191],
+    ['12', '80', 0.688],
   ] as const)('NPS %s %s matches %f in', (nps, schedule, inches) => {
     const p = get(nps, schedule);
     expect(Math.abs(p.wallMm - inches * 25.4)).toBeLessThan(0.03);
@@ -106,7 +125,10 @@ describe('pipeDimensions (ASME B36.10M)', () => {
   it('misses, with a sentence, a schedule B36.10M does not give for a size', () => {
     const r = pipeDimensions('16', 'XXS');
     expect(r).toEqual({ ok: false, missing: 'No ASME B36.10M wall for NPS 16 XXS' });
-    expect(pipeDimensions('2', '20')).toMatchObject({ ok: false, missing: 'No ASME B36.10M wall for NPS 2 Sch 20' });
+    expect(pipeDimensions('2', '20')).toMatchObject({
+      ok: false,
+      missing: 'No ASME B36.10M wall for NPS 2 Sch 20',
+    });
   });
 
   it('has an OD for every NPS', () => {

@@ -34,7 +34,9 @@ describe('mitreTemplate', () => {
     expect(t.pieces).toHaveLength(3);
     expect(t.pieces!.map((p) => p.kind)).toEqual(['end', 'middle', 'end']);
     // Walk the centreline polyline from one tangent point and check it lands on the other.
-    let x = 0, y = 0, heading = 0;
+    let x = 0,
+      y = 0,
+      heading = 0;
     t.pieces!.forEach((p, i) => {
       x += p.centrelineMm * Math.cos(heading);
       y += p.centrelineMm * Math.sin(heading);
@@ -55,7 +57,13 @@ describe('mitreTemplate', () => {
         fc.integer({ min: 2, max: 12 }),
         fc.double({ min: 0.51, max: 5, noNaN: true }),
         (od, bend, pieces, radiusInOds) => {
-          const r = mitreTemplate({ odMm: od, bendAngleDeg: bend, pieces, stations: 16, radiusMm: od * radiusInOds });
+          const r = mitreTemplate({
+            odMm: od,
+            bendAngleDeg: bend,
+            pieces,
+            stations: 16,
+            radiusMm: od * radiusInOds,
+          });
           if (!r.ok) {
             expect(r.message).toMatch(/more pieces/);
             return;

@@ -9,11 +9,14 @@ function template(input: SetOnBranchInput) {
 }
 
 /** Published ordinates are rounded to 0.01 mm; allow the rounding plus float dust. */
-const closeTo2dp = (a: number | undefined, b: number) => expect(Math.abs((a ?? Number.NaN) - b)).toBeLessThanOrEqual(0.0051);
+const closeTo2dp = (a: number | undefined, b: number) =>
+  expect(Math.abs((a ?? Number.NaN) - b)).toBeLessThanOrEqual(0.0051);
 
 /** Cut-backs at θ = 0, 22.5, 45, 67.5, 90° from a 16-station template. */
 function quarter(input: Omit<SetOnBranchInput, 'stations'>) {
-  return template({ ...input, stations: 16 }).stations.slice(0, 5).map((s) => s.branchCutBackMm);
+  return template({ ...input, stations: 16 })
+    .stations.slice(0, 5)
+    .map((s) => s.branchCutBackMm);
 }
 
 describe('setOnBranchTemplate, square branch', () => {
@@ -88,10 +91,13 @@ describe('setOnBranchTemplate, angled branch', () => {
     const R = 168.3 / 2;
     const r = 114.3 / 2;
     const beta = (45 * Math.PI) / 180;
-    const w = (t: number) => (-r * Math.cos(t) * Math.cos(beta) + Math.sqrt(R * R - r * r * Math.sin(t) ** 2)) / Math.sin(beta);
+    const w = (t: number) =>
+      (-r * Math.cos(t) * Math.cos(beta) + Math.sqrt(R * R - r * r * Math.sin(t) ** 2)) / Math.sin(beta);
     const maxW = (R + r * Math.cos(beta)) / Math.sin(beta);
     const t = template({ headerOdMm: 168.3, branchOdMm: 114.3, stations: 8, branchAngleDeg: 45 });
-    t.stations.forEach((s) => expect(s.branchCutBackMm).toBeCloseTo(maxW - w((s.angleDeg * Math.PI) / 180), 9));
+    t.stations.forEach((s) =>
+      expect(s.branchCutBackMm).toBeCloseTo(maxW - w((s.angleDeg * Math.PI) / 180), 9),
+    );
     // Long point (heel) at station 0: 2 r cos β / sin β = 114.3 mm at 45°; shortest point (toe) at 180°.
     expect(t.stations[0]!.branchCutBackMm).toBeCloseTo(114.3, 9);
     expect(t.stations[4]!.branchCutBackMm).toBe(0);
@@ -106,11 +112,17 @@ describe('setOnBranchTemplate, angled branch', () => {
         fc.integer({ min: 4, max: 128 }),
         fc.double({ min: 5, max: 90, noNaN: true }),
         (headerOd, ratio, stations, angle) => {
-          const r = setOnBranchTemplate({ headerOdMm: headerOd, branchOdMm: headerOd * ratio, stations, branchAngleDeg: angle });
+          const r = setOnBranchTemplate({
+            headerOdMm: headerOd,
+            branchOdMm: headerOd * ratio,
+            stations,
+            branchAngleDeg: angle,
+          });
           expect(r.ok).toBe(true);
           if (!r.ok) return;
           for (const s of r.value.stations) {
-            for (const v of [s.branchCutBackMm, s.headerHoleAlongMm, s.headerHoleArcMm]) expect(Number.isFinite(v)).toBe(true);
+            for (const v of [s.branchCutBackMm, s.headerHoleAlongMm, s.headerHoleArcMm])
+              expect(Number.isFinite(v)).toBe(true);
             expect(s.branchCutBackMm).toBeGreaterThanOrEqual(0);
             expect(s.branchCutBackMm).toBeLessThanOrEqual(r.value.maxCutBackMm + 1e-9);
           }
