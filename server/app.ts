@@ -5,6 +5,7 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { Pool } from 'pg';
 import type { DataSource } from 'typeorm';
+import { AppError } from './common/app-error';
 import { apiNotFound, errorMiddleware } from './common/error.middleware';
 import type { ServerConfig } from './config/env';
 import { writeAuditEvent, type AuditWriter } from './modules/audit/audit.service';
@@ -58,6 +59,7 @@ export function createApp(options: AppOptions): Express {
 
   const api = express.Router();
   api.use(express.json({ limit: config.jsonBodyLimit }));
+  api.use(jsonBodiesOnly);
   api.use('/health', healthRouter(ds));
 
   const PgStore = connectPgSimple(session);
@@ -118,6 +120,19 @@ export function createApp(options: AppOptions): Express {
   app.use(errorMiddleware(options.log));
   return app;
 }
+
+/**
+ * A write whose body is not JSON is refused, even where every field is optional: form
+ * and text/plain posts are what another site can send without a CORS preflight.
+ */
+const jsonBodiesOnly: RequestHandler = (req, _res, next) => {
+  // Content-Length: 0 (a bodiless POST such as sign-out) is no body.
+  const hasBody = req.headers['transfer-encoding'] !== undefined || Number(req.headers['content-length'] ?? 0) > 0;
+  if (hasBody && req.method !== 'GET' && req.method !== 'HEAD' && !req.is('application/json')) {
+    return next(new AppError(400, 'invalid_request', 'Send the request body as JSON (Content-Type: application/json)'));
+  }
+  next();
+};
 
 const securityHeaders: RequestHandler = (_req, res, next) => {
   res.set('X-Content-Type-Options', 'nosniff');

@@ -72,6 +72,15 @@ describe('bad input', () => {
     await refused(() => admin.post('/api/jobs').set('Content-Type', 'text/plain').send('number=1'), 400, 'invalid_request');
   });
 
+  it('a form or text body on a route whose fields are all optional: 400, nothing archived', async () => {
+    await refused(
+      () => admin.post(`/api/jobs/${jobId}/archive`).set('Content-Type', 'application/x-www-form-urlencoded').send('a=1'),
+      400,
+      'invalid_request',
+    );
+    await refused(() => admin.post(`/api/spools/${spoolId}/archive`).set('Content-Type', 'text/plain').send('x'), 400, 'invalid_request');
+  });
+
   it('values out of range: negative root gap, unknown flange class, unknown role, short password', async () => {
     await refused(() => admin.post('/api/jobs').send({ ...validJob(), spec: { ...SPEC, rootGapMm: -1 } }), 400, 'invalid_request');
     await refused(() => admin.post('/api/jobs').send({ ...validJob(), spec: { ...SPEC, flangeClass: 125 } }), 400, 'invalid_request');

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '../../shared/schemas/role.schema';
-import { createShop, PASSWORD, ROLES, snapshot, type Shop } from './helpers/fixtures';
+import { auditCount, createShop, PASSWORD, ROLES, snapshot, type Shop } from './helpers/fixtures';
 import { ROUTES, type RouteCase } from './helpers/route-table';
 import { createTestDatabase, type TestDatabase } from './helpers/test-db';
 import { signedIn, testApp } from './helpers/test-app';
@@ -38,10 +38,15 @@ describe('role × route matrix', () => {
     const { path, body } = await route.prepare(db.dataSource, shop, role);
     const allowed = route.allowed === 'public' || route.allowed.includes(role);
     const before = await snapshot(db.dataSource);
+    const eventsBefore = await auditCount(db.dataSource);
     const res = await call(agents[role], route, path, body);
     if (allowed) {
       expect(res.status, JSON.stringify(res.body)).toBeGreaterThanOrEqual(200);
       expect(res.status, JSON.stringify(res.body)).toBeLessThan(300);
+      // every write leaves an audit event (opening an already open draft writes nothing)
+      if (route.method !== 'get' && route.name !== 'POST /api/spools/:id/draft') {
+        expect(await auditCount(db.dataSource)).toBeGreaterThan(eventsBefore);
+      }
     } else {
       expect(res.status, JSON.stringify(res.body)).toBe(403);
       expect(res.body.error.code).toBe('forbidden');

@@ -63,7 +63,7 @@ function expectJsonError(res: request.Response, status: number, code: string) {
 describe('GET /api/spools/:id/sheet.pdf', () => {
   it('gives every role the PDF, with the engine cut lengths in it', async () => {
     const { spool, design, job } = await sampleSpool(shop);
-    const result = computeSpool(design, { jobDefaults: jobSpecOverrides({ spec: job.spec as never }) });
+    const result = computeSpool(design, { jobSpec: jobSpecOverrides({ spec: job.spec as never }) });
     for (const role of ROLES) {
       const agent = await signedIn(app, shop.email(role), PASSWORD);
       const res = await agent.get(`/api/spools/${spool.id}/sheet.pdf`).buffer(true).parse(binary);
@@ -123,7 +123,7 @@ describe('GET /api/jobs/:id/saw-list.pdf', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const text = (await readPdfText(res.body as Buffer)).map((p) => p.text).join(' ');
-    const result = computeSpool(a.design, { jobDefaults: jobSpecOverrides({ spec: a.job.spec as never }) });
+    const result = computeSpool(a.design, { jobSpec: jobSpecOverrides({ spec: a.job.spec as never }) });
     for (const piece of result.pieces) expect(text).toContain(formatMm(piece.cutLengthMm!));
     const b = await sampleSpool(shop);
     expectJsonError(await agent.get(`/api/jobs/${a.job.id}/saw-list.pdf?spools=${b.spool.id}`), 404, 'not_found');
