@@ -88,9 +88,13 @@ describe('jobs and spools in the browser', () => {
     await saveScreenshot(page, '06b-job-edit-stale');
     await editDialog.getByRole('button', { name: 'Load latest version' }).click();
     await editDialog.getByText(/Someone else changed this job/).waitFor({ state: 'detached' });
+    // Their site change comes in; this user's title stays.
+    await expect(editDialog.getByLabel('Site').inputValue()).resolves.toBe('Hall C east');
+    await expect(editDialog.getByLabel('Title').inputValue()).resolves.toBe('Chilled water, Hall C, level 2');
     await editDialog.getByRole('button', { name: 'Save changes' }).click();
     await editDialog.waitFor({ state: 'hidden' });
     await page.getByRole('heading', { name: /Chilled water, Hall C, level 2/ }).waitFor();
+    await page.getByText('Hall C east').waitFor();
 
     await page.getByRole('button', { name: 'New spool' }).first().click();
     const spoolDialog = page.getByRole('dialog', { name: /New spool/ });
@@ -122,7 +126,7 @@ describe('jobs and spools in the browser', () => {
     await saveScreenshot(page, '09-spool-detailer');
 
     await signOut(page);
-    expect(problems).toEqual([]);
+    expect(problems, problems.join('\n')).toEqual([]);
     await page.close();
   });
 
@@ -192,6 +196,10 @@ describe('jobs and spools in the browser', () => {
     await page.getByText('Loading the editor…').waitFor({ state: 'detached' });
     await saveScreenshot(page, '18-spool-fabricator');
     await page.getByRole('button', { name: 'Mark cut' }).click();
+    const confirm = page.getByRole('dialog', { name: 'Record CW-410-S02 as Cut?' });
+    await saveScreenshot(page, '18b-confirm-cut');
+    await confirm.getByRole('button', { name: 'Mark cut' }).click();
+    await confirm.waitFor({ state: 'hidden' });
     await page.getByRole('button', { name: 'Mark fitted up' }).waitFor();
     await page.getByText('Cut', { exact: true }).first().waitFor();
     await saveScreenshot(page, '19-spool-cut');

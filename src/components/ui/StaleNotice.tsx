@@ -12,8 +12,8 @@ export function StaleNotice({ what, onReload, reloading }: StaleNoticeProps) {
     <div role="alert" className="flex flex-col gap-2 rounded-md border border-spark-500/50 bg-spark-100 p-3 text-sm">
       <p className="font-semibold text-ink-900">Someone else changed this {what} while you were editing.</p>
       <p className="text-ink-800">
-        Nothing of yours was saved, and your entries are still here. Load the latest version, check your changes against
-        it, then save again.
+        Nothing of yours was saved, and your entries are still here. Load the latest version: the fields you did not touch
+        take the new values, yours stay as you typed them. Check them, then save again.
       </p>
       <div>
         <Button variant="secondary" onClick={onReload} busy={reloading}>

@@ -1,6 +1,6 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import type { Job } from '../../../../shared/schemas/job.schema';
+import type { Job, JobCreate } from '../../../../shared/schemas/job.schema';
 import { Button } from '../../../components/ui/Button';
 import { Dialog } from '../../../components/ui/Dialog';
 import { StaleNotice } from '../../../components/ui/StaleNotice';
@@ -47,7 +47,12 @@ export function EditJobDialog({ job }: { job: Job }) {
           error={updateJob.error}
           onCancel={close}
           notice={stale ? <StaleNotice what="job" onReload={reload} reloading={reloading} /> : null}
-          onSubmit={(values) => updateJob.mutate({ ...values, version: job.version }, { onSuccess: close })}
+          onSubmit={(values, changed) => {
+            if (changed.length === 0) return close();
+            // Only what this user changed, so a save never undoes someone else's edit of another field.
+            const patch = Object.fromEntries(changed.map((key) => [key, values[key]])) as Partial<JobCreate>;
+            updateJob.mutate({ ...patch, version: job.version }, { onSuccess: close });
+          }}
         />
       </Dialog>
     </>

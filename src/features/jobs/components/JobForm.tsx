@@ -68,7 +68,8 @@ interface JobFormProps {
   submitLabel: string;
   busy: boolean;
   error: unknown;
-  onSubmit: (values: JobCreate) => void;
+  /** `changed` lists the top-level fields the user edited (spec counts as one). */
+  onSubmit: (values: JobCreate, changed: (keyof JobCreate)[]) => void;
   onCancel: () => void;
   /** Shown above the buttons, e.g. the stale-version notice. */
   notice?: ReactNode;
@@ -81,8 +82,16 @@ export function JobForm({ job, submitLabel, busy, error, onSubmit, onCancel, not
     handleSubmit,
     setError,
     watch,
-    formState: { errors },
+    reset,
+    formState: { errors, dirtyFields },
   } = useForm({ resolver: zodResolver(jobCreateSchema), defaultValues: job ? valuesOf(job) : newJobDefaults });
+
+  // A newer record (after a 409 and reload): untouched fields take its values, the user's edits stay.
+  const version = job?.version;
+  useEffect(() => {
+    if (job) reset(valuesOf(job), { keepDirtyValues: true });
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- only a new version should reset
+  }, [version, reset]);
 
   useEffect(() => {
     if (error) applyServerIssues(error, setError, FIELDS);
@@ -99,7 +108,11 @@ export function JobForm({ job, submitLabel, busy, error, onSubmit, onCancel, not
     Boolean(error) && !placedOnField && !(error instanceof ApiError && (error.isStale || error.code === 'duplicate'));
 
   return (
-    <form noValidate onSubmit={handleSubmit(onSubmit)} className="flex flex-col gap-5">
+    <form
+      noValidate
+      onSubmit={handleSubmit((values) => onSubmit(values, Object.keys(dirtyFields) as (keyof JobCreate)[]))}
+      className="flex flex-col gap-5"
+    >
       <fieldset className="grid gap-4 md:grid-cols-2">
         <legend className="mb-2 font-display text-lg font-semibold text-ink-800">Job</legend>
         <TextField label="Job number" mono placeholder="KPS-2041" error={errors.number?.message} {...register('number')} />

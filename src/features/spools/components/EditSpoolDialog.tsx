@@ -36,7 +36,11 @@ export function EditSpoolDialog({ spool }: { spool: Spool }) {
           error={update.error}
           onCancel={close}
           notice={stale ? <StaleNotice what="spool" onReload={reload} /> : null}
-          onSubmit={(values) => update.mutate({ ...values, version: spool.version }, { onSuccess: close })}
+          onSubmit={(values, changed) => {
+            if (changed.length === 0) return close();
+            const patch = Object.fromEntries(changed.map((key) => [key, values[key]]));
+            update.mutate({ ...patch, version: spool.version }, { onSuccess: close });
+          }}
         />
       </Dialog>
     </>

@@ -15,7 +15,8 @@ interface SpoolFormProps {
   submitLabel: string;
   busy: boolean;
   error: unknown;
-  onSubmit: (values: SpoolCreate) => void;
+  /** `changed` lists the fields the user edited. */
+  onSubmit: (values: SpoolCreate, changed: (keyof SpoolCreate)[]) => void;
   onCancel: () => void;
   notice?: ReactNode;
 }
@@ -26,8 +27,18 @@ export function SpoolForm({ initial, submitLabel, busy, error, onSubmit, onCance
     register,
     handleSubmit,
     setError,
-    formState: { errors },
+    reset,
+    formState: { errors, dirtyFields },
   } = useForm({ resolver: zodResolver(spoolCreateSchema), defaultValues: initial ?? { mark: '', lineNumber: '' } });
+
+  // A newer record (after a 409 and reload): untouched fields take its values, the user's edits stay.
+  const initialMark = initial?.mark;
+  const initialLine = initial?.lineNumber;
+  useEffect(() => {
+    if (initialMark !== undefined && initialLine !== undefined) {
+      reset({ mark: initialMark, lineNumber: initialLine }, { keepDirtyValues: true });
+    }
+  }, [initialMark, initialLine, reset]);
 
   useEffect(() => {
     if (error) applyServerIssues(error, setError, FIELDS);
@@ -40,7 +51,11 @@ export function SpoolForm({ initial, submitLabel, busy, error, onSubmit, onCance
   const showGeneral = Boolean(error) && !placed && !(error instanceof ApiError && (error.isStale || error.code === 'duplicate'));
 
   return (
-    <form noValidate onSubmit={handleSubmit(onSubmit)} className="flex flex-col gap-4">
+    <form
+      noValidate
+      onSubmit={handleSubmit((values) => onSubmit(values, Object.keys(dirtyFields) as (keyof SpoolCreate)[]))}
+      className="flex flex-col gap-4"
+    >
       <TextField
         label="Spool mark"
         mono

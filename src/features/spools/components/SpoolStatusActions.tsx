@@ -4,6 +4,7 @@ import type { Role } from '../../../../shared/schemas/role.schema';
 import type { Spool } from '../../../../shared/schemas/spool.schema';
 import { allowedSpoolStatusTargets, spoolStatusSchema, type SpoolStatus } from '../../../../shared/schemas/spool-status.schema';
 import { Button } from '../../../components/ui/Button';
+import { Dialog } from '../../../components/ui/Dialog';
 import { InlineError } from '../../../components/ui/ErrorState';
 import { SelectField } from '../../../components/ui/Field';
 import { StaleNotice } from '../../../components/ui/StaleNotice';
@@ -21,11 +22,14 @@ export function SpoolStatusActions({ spool, role }: { spool: Spool; role: Role }
   const queryClient = useQueryClient();
   const targets = allowedSpoolStatusTargets(role, spool.status);
   const [adminTarget, setAdminTarget] = useState<SpoolStatus | ''>('');
+  // Non-admins cannot step back, so each move is confirmed once (a gloved misclick is not a record).
+  const [confirming, setConfirming] = useState<SpoolStatus | null>(null);
   const stale = change.error instanceof ApiError && change.error.isStale;
 
   if (targets.length === 0) return null;
 
-  const move = (status: SpoolStatus) => change.mutate({ status, version: spool.version });
+  const move = (status: SpoolStatus) =>
+    change.mutate({ status, version: spool.version }, { onSettled: () => setConfirming(null) });
   const reload = async () => {
     await queryClient.refetchQueries({ queryKey: spoolKeys.detail(spool.id), exact: true });
     change.reset();
@@ -33,9 +37,15 @@ export function SpoolStatusActions({ spool, role }: { spool: Spool; role: Role }
 
   return (
     <section aria-labelledby="status-actions" className="flex flex-col gap-3 rounded-lg border border-steel-200 bg-white p-4">
-      <h2 id="status-actions" className="text-xl font-semibold text-ink-800">
-        Record progress
-      </h2>
+      <div>
+        <h2 id="status-actions" className="text-xl font-semibold text-ink-800">
+          Record progress
+        </h2>
+        <p className="text-sm text-steel-600">
+          Now <strong className="text-ink-800">{spoolStatusDisplay[spool.status].label}</strong>.{' '}
+          {role === 'admin' ? 'As admin you may set any status.' : 'Record the next step when it is done.'}
+        </p>
+      </div>
       {role === 'admin' ? (
         <div className="flex flex-wrap items-end gap-2">
           <div className="min-w-56">
@@ -58,12 +68,25 @@ export function SpoolStatusActions({ spool, role }: { spool: Spool; role: Role }
       ) : (
         <div className="flex flex-wrap gap-2">
           {targets.map((t) => (
-            <Button key={t} variant="primary" busy={change.isPending && change.variables?.status === t} disabled={change.isPending} onClick={() => move(t)}>
+            <Button key={t} variant="primary" disabled={change.isPending} onClick={() => setConfirming(t)}>
               {spoolStatusDisplay[t].action}
             </Button>
           ))}
         </div>
       )}
+      <Dialog open={confirming !== null} onClose={() => setConfirming(null)} title={`Record ${spool.mark} as ${confirming ? spoolStatusDisplay[confirming].label : ''}?`}>
+        <p className="text-sm text-ink-800">
+          This goes on the spool's record with your name and the time. Only an admin can move it back.
+        </p>
+        <div className="mt-4 flex justify-end gap-2">
+          <Button variant="ghost" onClick={() => setConfirming(null)}>
+            Cancel
+          </Button>
+          <Button variant="primary" busy={change.isPending} onClick={() => confirming && move(confirming)}>
+            {confirming ? spoolStatusDisplay[confirming].action : ''}
+          </Button>
+        </div>
+      </Dialog>
       {stale ? <StaleNotice what="spool" onReload={reload} /> : <InlineError error={change.error} />}
     </section>
   );
