@@ -17,6 +17,8 @@ import { jobRouter } from './modules/jobs/job.router';
 import { JobService } from './modules/jobs/job.service';
 import { revisionRouter } from './modules/revisions/revision.router';
 import { RevisionService } from './modules/revisions/revision.service';
+import { sheetsRouter } from './modules/sheets/sheets.router';
+import { SheetsService } from './modules/sheets/sheets.service';
 import { jobSpoolRouter, spoolRouter } from './modules/spools/spool.router';
 import { SpoolService } from './modules/spools/spool.service';
 import { userRouter } from './modules/users/user.router';
@@ -102,6 +104,7 @@ export function createApp(options: AppOptions): Express {
   api.use('/jobs/:jobId/spools', jobSpoolRouter(spools));
   api.use('/spools', spoolRouter(spools));
   api.use('/spools', revisionRouter(revisions));
+  api.use(sheetsRouter(new SheetsService(ds, jobs, spools, revisions, config.publicUrl)));
   api.use(apiNotFound);
 
   app.use('/api', api);

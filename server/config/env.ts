@@ -11,6 +11,8 @@ const envSchema = z.object({
   HOST: z.string().min(1).default('127.0.0.1'),
   SESSION_SECRET: z.string().min(16).optional(),
   PUBLIC_URL: z.url().optional(),
+  // auto: Secure cookies when PUBLIC_URL is https. false: e.g. tests over plain http.
+  COOKIE_SECURE: z.enum(['auto', 'true', 'false']).default('auto'),
   SIGN_IN_MAX_ATTEMPTS: z.coerce.number().int().min(1).default(10),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(10),
@@ -27,7 +29,7 @@ export interface ServerConfig {
   /** True when SESSION_SECRET was not set and the development value is in use. */
   usingDevSessionSecret: boolean;
   publicUrl: string;
-  /** Cookies get `Secure` when the public URL is https. */
+  /** Cookies get `Secure` when the public URL is https (COOKIE_SECURE=auto), or as COOKIE_SECURE says. */
   secureCookies: boolean;
   signIn: { maxAttemptsPerAccount: number; maxAttemptsPerIp: number; windowMs: number };
   bcryptCost: number;
@@ -57,7 +59,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     sessionSecret: e.SESSION_SECRET ?? DEV_SESSION_SECRET,
     usingDevSessionSecret: !e.SESSION_SECRET,
     publicUrl,
-    secureCookies: publicUrl.startsWith('https:'),
+    secureCookies: e.COOKIE_SECURE === 'auto' ? publicUrl.startsWith('https:') : e.COOKIE_SECURE === 'true',
     signIn: {
       maxAttemptsPerAccount: e.SIGN_IN_MAX_ATTEMPTS,
       // A looser per-address cap stops one client spraying many e-mails.

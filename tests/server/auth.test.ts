@@ -142,4 +142,12 @@ describe('GET /api/auth/me and POST /api/auth/sign-out', () => {
     expect(res.status).toBe(200);
     expect(String(res.headers['set-cookie'])).toMatch(/Secure/i);
   });
+
+  it('COOKIE_SECURE=false keeps the cookie usable over plain http behind an https public URL', async () => {
+    const plain = testApp(db.dataSource, db.url, {
+      env: { PUBLIC_URL: 'https://tackline.kestrel.example', COOKIE_SECURE: 'false' },
+    });
+    const agent = await signedIn(plain, shop.email('viewer'), PASSWORD);
+    await agent.get('/api/auth/me').expect(200);
+  });
 });
