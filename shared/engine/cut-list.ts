@@ -5,6 +5,7 @@
  * at or below; compound bevel above 22 mm).
  */
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
+import { pipeOdMm } from '../standards/pipe-schedules';
 import type { EndPrep, PipePiece } from './compute-result';
 import type { SpoolGraph } from './build-graph';
 import { addError, addWarning, type IssueSink } from './issues';
@@ -128,6 +129,7 @@ export function buildCutList(
     };
     if (!first.nps) continue;
     checkLength(piece, first, issues);
+    checkBranchClearance(runIds, placed, analyses, pipes, issues);
     pieces.push(piece);
     for (const id of runIds) marks.set(id, mark);
   }
@@ -202,6 +204,45 @@ export function mitreVertices(wp: Vec3, oa: Vec3, ob: Vec3, R: number, angleDeg:
     out.push(addScaled(centre, dir, reach));
   }
   return out;
+}
+
+/**
+ * A branch connection needs pipe on both sides of it: at least the branch's outside radius
+ * between its centre and the header pipe's end, or the branch would hang off the pipe end
+ * or run into the next weld.
+ */
+function checkBranchClearance(
+  runIds: string[],
+  placed: Map<string, PlacedRun>,
+  analyses: Map<string, NodeAnalysis>,
+  pipes: Map<string, RunPipe>,
+  issues: IssueSink,
+): void {
+  for (const id of runIds) {
+    const p = placed.get(id)!;
+    if (p.pipeLengthMm === null) continue;
+    const through = p.fromEnd?.pipeContinues ? p.run.from : p.toEnd?.pipeContinues ? p.run.to : null;
+    const otherContinues = p.fromEnd?.pipeContinues && p.toEnd?.pipeContinues;
+    if (!through || otherContinues) continue;
+    const a = analyses.get(through);
+    const branchEnd = a?.ends.find((e) => !e.pipeContinues);
+    const branchNps = a?.detail.type === 'branch' ? a.detail.branchNps : null;
+    const branchOd = branchEnd ? pipes.get(branchEnd.conn.run.id)?.dims?.odMm : branchNps ? pipeOdOf(branchNps) : null;
+    if (!branchOd) continue;
+    if (p.pipeLengthMm < branchOd / 2) {
+      addError(
+        issues,
+        'overlapping-fittings',
+        `Branch ${through} sits ${round(p.pipeLengthMm)} mm from the end of the header pipe on run ${id}; it needs at least ${round(branchOd / 2)} mm (the branch's outside radius)`,
+        through,
+      );
+    }
+  }
+}
+
+function pipeOdOf(nps: NonNullable<RunPipe['nps']>): number | null {
+  const l = pipeOdMm(nps);
+  return l.ok ? l.value.odMm : null;
 }
 
 function checkLength(piece: PipePiece, pipe: RunPipe, issues: IssueSink): void {
