@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_ORGANISATIONS, DEMO_PASSWORD } from '../../server/db/seed/demo-data';
 import { seedDemo } from '../../server/db/seed/seed-demo';
 import { starterDesign } from '../../server/modules/revisions/starter-design';
+import { spoolDesignSchema } from '../../shared/schemas/spool-design.schema';
 import { createTestDatabase, type TestDatabase } from './helpers/test-db';
 import { testApp } from './helpers/test-app';
 
@@ -59,6 +60,17 @@ describe('demo seed', () => {
     const byMark = Object.fromEntries(rows.map((r: { mark: string; design: unknown }) => [r.mark, r.design]));
     expect(byMark['CW-201-S03']).toEqual(SAMPLE);
     expect(byMark['CW-305-S01']).toEqual(starterDesign({ mark: 'CW-305-S01', lineNumber: 'CW-305' }));
+  });
+
+  it('names sample files that exist in samples/ and pass the spool design schema', () => {
+    const repoSamples = path.resolve(import.meta.dirname, '../../samples');
+    const files = DEMO_ORGANISATIONS.flatMap((o) => o.jobs.flatMap((j) => j.spools.map((s) => s.sampleFile)));
+    expect(files.filter(Boolean).length).toBe(5);
+    for (const file of files) {
+      if (!file) continue;
+      const design: unknown = JSON.parse(readFileSync(path.join(repoSamples, file), 'utf8'));
+      expect(spoolDesignSchema.safeParse(design).success, file).toBe(true);
+    }
   });
 
   it('every demo account signs in with the demo password', async () => {
