@@ -59,7 +59,7 @@ export class EditorModel {
   private result: SpoolResult | null = null;
 
   constructor(
-    private readonly compute: ComputeFn,
+    private compute: ComputeFn,
     options: { design?: SpoolDesign | null; readOnly?: boolean } = {},
   ) {
     this.design = options.design ?? null;
@@ -176,6 +176,14 @@ export class EditorModel {
     this.lastError = null;
     this.lastMessage = options.label ?? null;
     this.designRevision += 1;
+    this.emit();
+  }
+
+  /** Swaps the engine call (e.g. when the job's spec arrives); results are recomputed. */
+  setCompute(compute: ComputeFn): void {
+    this.compute = compute;
+    this.resultFor = null;
+    this.result = null;
     this.emit();
   }
 

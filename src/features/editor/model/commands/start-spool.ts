@@ -9,7 +9,7 @@ import type { Vec3 } from '../../../../../shared/schemas/spool-design-primitives
 import type { Nps } from '../../../../../shared/standards/nps';
 import type { IdAllocator } from '../id-allocator';
 import { selectNode } from '../editor-selection';
-import { done, type CommandResult } from './command-result';
+import { done, fail, type CommandResult } from './command-result';
 
 /** Arguments of {@link startSpool}. */
 export type StartSpoolArgs = {
@@ -38,4 +38,16 @@ export function startSpool(args: StartSpoolArgs, ids: IdAllocator): CommandResul
     runs: [],
   };
   return done(design, `Start NPS ${args.nps} spool`, { select: selectNode(id) });
+}
+
+/**
+ * Begins the line on a design that is still just one open end (a new draft): sets the
+ * main size and what sits at that end, keeping the document's mark and origin.
+ */
+export function beginLine(design: SpoolDesign, args: { nps: Nps; end: EndSpec }): CommandResult {
+  if (design.runs.length > 0 || design.nodes.length !== 1) return fail('The spool is already begun: extend it from an open end');
+  const start = design.nodes[0]!;
+  if (start.kind !== 'end') return fail('The start must be an open end');
+  const next: SpoolDesign = { ...design, spec: { ...design.spec, nps: args.nps }, nodes: [{ ...start, end: args.end }] };
+  return done(next, `Start NPS ${args.nps} line`, { select: selectNode(start.id) });
 }

@@ -1,0 +1,21 @@
+import type { Job } from '../../../../shared/schemas/job.schema';
+import type { SpecOverrides } from '../../../../shared/schemas/spool-design-spec.schema';
+import { scheduleSchema } from '../../../../shared/standards/pipe-schedules';
+
+/**
+ * The job's default spec as engine overrides. Values the spool design tables do not
+ * carry (a schedule or class without data) are left to the design and built-in defaults,
+ * so the engine never sees an unknown value.
+ */
+export function jobSpecOverrides(spec: Job['spec'] | undefined): SpecOverrides {
+  if (!spec) return {};
+  const schedule = scheduleSchema.safeParse(spec.schedule);
+  return {
+    material: spec.material,
+    ...(schedule.success ? { schedule: schedule.data } : {}),
+    ...(spec.flangeClass === 150 || spec.flangeClass === 300 ? { flangeClass: spec.flangeClass } : {}),
+    rootGapMm: spec.rootGapMm,
+    sawKerfMm: spec.sawKerfMm,
+    minPieceLengthMm: spec.minPieceLengthMm,
+  };
+}

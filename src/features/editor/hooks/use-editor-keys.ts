@@ -1,0 +1,41 @@
+import { useEffect, useRef } from 'react';
+import { shortcutFor, type ShortcutAction } from '../panels/editor-shortcuts';
+
+function isTextBox(target: EventTarget | null): boolean {
+  if (!(target instanceof HTMLElement)) return false;
+  if (target.isContentEditable) return true;
+  const tag = target.tagName;
+  if (tag === 'TEXTAREA' || tag === 'SELECT') return true;
+  if (tag === 'INPUT') {
+    const type = (target as HTMLInputElement).type;
+    return !['checkbox', 'radio', 'button', 'submit'].includes(type);
+  }
+  return false;
+}
+
+/**
+ * Routes key presses to editor actions while the editor is on the page and no dialog is
+ * open. Escape leaves a text box first, so the next key is a command again.
+ */
+export function useEditorKeys(onAction: (action: ShortcutAction, event: KeyboardEvent) => void, enabled = true): void {
+  const handler = useRef(onAction);
+  handler.current = onAction;
+  useEffect(() => {
+    if (!enabled) return;
+    const onKeyDown = (event: KeyboardEvent) => {
+      if (event.defaultPrevented) return;
+      if (document.querySelector('dialog[open]')) return;
+      const inBox = isTextBox(event.target);
+      if (inBox && event.key === 'Escape') {
+        (event.target as HTMLElement).blur();
+        return;
+      }
+      const action = shortcutFor(event, inBox);
+      if (!action) return;
+      event.preventDefault();
+      handler.current(action, event);
+    };
+    window.addEventListener('keydown', onKeyDown);
+    return () => window.removeEventListener('keydown', onKeyDown);
+  }, [enabled]);
+}
