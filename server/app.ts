@@ -55,8 +55,8 @@ export function createApp(options: AppOptions): Express {
 
   const app = express();
   app.disable('x-powered-by');
-  // Behind a local reverse proxy the client address comes from X-Forwarded-For.
-  app.set('trust proxy', 'loopback');
+  // Behind a reverse proxy the client address and protocol come from X-Forwarded-*.
+  app.set('trust proxy', config.trustProxy);
   app.use(securityHeaders);
 
   const api = express.Router();

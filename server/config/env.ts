@@ -13,6 +13,8 @@ const envSchema = z.object({
   PUBLIC_URL: z.url().optional(),
   // auto: Secure cookies when PUBLIC_URL is https. false: e.g. tests over plain http.
   COOKIE_SECURE: z.enum(['auto', 'true', 'false']).default('auto'),
+  // Express "trust proxy". Unset: trust a loopback proxy only when PUBLIC_URL is https.
+  TRUST_PROXY: z.string().min(1).optional(),
   SIGN_IN_MAX_ATTEMPTS: z.coerce.number().int().min(1).default(10),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(10),
@@ -31,6 +33,11 @@ export interface ServerConfig {
   publicUrl: string;
   /** Cookies get `Secure` when the public URL is https (COOKIE_SECURE=auto), or as COOKIE_SECURE says. */
   secureCookies: boolean;
+  /**
+   * Express "trust proxy" value. Off unless configured or behind an https public URL,
+   * so a client cannot pick its own address (and dodge the sign-in limit) with X-Forwarded-For.
+   */
+  trustProxy: boolean | string;
   signIn: { maxAttemptsPerAccount: number; maxAttemptsPerIp: number; windowMs: number };
   bcryptCost: number;
   jsonBodyLimit: string;
@@ -60,6 +67,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     usingDevSessionSecret: !e.SESSION_SECRET,
     publicUrl,
     secureCookies: e.COOKIE_SECURE === 'auto' ? publicUrl.startsWith('https:') : e.COOKIE_SECURE === 'true',
+    trustProxy:
+      e.TRUST_PROXY === undefined
+        ? publicUrl.startsWith('https:') && 'loopback'
+        : e.TRUST_PROXY === 'true' || (e.TRUST_PROXY === 'false' ? false : e.TRUST_PROXY),
     signIn: {
       maxAttemptsPerAccount: e.SIGN_IN_MAX_ATTEMPTS,
       // A looser per-address cap stops one client spraying many e-mails.

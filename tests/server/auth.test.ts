@@ -96,6 +96,20 @@ describe('POST /api/auth/sign-in', () => {
     await request(limited).post('/api/auth/sign-in').send({ email: shop.email('viewer'), password: PASSWORD }).expect(200);
   });
 
+  it('cannot be dodged by sending a different X-Forwarded-For each time', async () => {
+    const limited = testApp(db.dataSource, db.url, { env: { SIGN_IN_MAX_ATTEMPTS: '2' } });
+    const email = shop.email('detailer');
+    const statuses: number[] = [];
+    for (let i = 0; i < 4; i++) {
+      const res = await request(limited)
+        .post('/api/auth/sign-in')
+        .set('X-Forwarded-For', `203.0.113.${i + 1}`)
+        .send({ email, password: 'wrong-password' });
+      statuses.push(res.status);
+    }
+    expect(statuses).toEqual([401, 401, 429, 429]);
+  });
+
   it('does not count successful sign-ins against the limit', async () => {
     const limited = testApp(db.dataSource, db.url, { env: { SIGN_IN_MAX_ATTEMPTS: '2' } });
     for (let i = 0; i < 4; i++) {

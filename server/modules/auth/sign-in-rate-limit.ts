@@ -24,6 +24,8 @@ export function signInRateLimits(limits: SignInLimits): RequestHandler[] {
     standardHeaders: 'draft-8' as const,
     legacyHeaders: false,
     skipSuccessfulRequests: true,
+    // "trust proxy" is set on purpose from config; X-Forwarded-For without it is simply ignored.
+    validate: { xForwardedForHeader: false },
     handler: ((_req, _res, next) => next(tooMany(limits.windowMs))) as RequestHandler,
   };
   const ip = (req: Parameters<RequestHandler>[0]) => ipKeyGenerator(req.ip ?? 'unknown');
