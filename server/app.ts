@@ -130,9 +130,12 @@ export function createApp(options: AppOptions): Express {
  */
 const jsonBodiesOnly: RequestHandler = (req, _res, next) => {
   // Content-Length: 0 (a bodiless POST such as sign-out) is no body.
-  const hasBody = req.headers['transfer-encoding'] !== undefined || Number(req.headers['content-length'] ?? 0) > 0;
+  const hasBody =
+    req.headers['transfer-encoding'] !== undefined || Number(req.headers['content-length'] ?? 0) > 0;
   if (hasBody && req.method !== 'GET' && req.method !== 'HEAD' && !req.is('application/json')) {
-    return next(new AppError(400, 'invalid_request', 'Send the request body as JSON (Content-Type: application/json)'));
+    return next(
+      new AppError(400, 'invalid_request', 'Send the request body as JSON (Content-Type: application/json)'),
+    );
   }
   next();
 };

@@ -27,20 +27,28 @@ export function toAppError(err: unknown): AppError {
   const parser = err as BodyParserError;
   if (parser && typeof parser === 'object' && typeof parser.type === 'string') {
     if (parser.type === 'entity.too.large') {
-      return new AppError(413, 'payload_too_large', 'The request body is too large', { limitBytes: parser.limit });
+      return new AppError(413, 'payload_too_large', 'The request body is too large', {
+        limitBytes: parser.limit,
+      });
     }
     if (parser.type === 'entity.parse.failed') {
-      return new AppError(400, 'invalid_request', 'The request body is not valid JSON', { reason: 'malformed_json' });
+      return new AppError(400, 'invalid_request', 'The request body is not valid JSON', {
+        reason: 'malformed_json',
+      });
     }
     if (typeof parser.status === 'number' && parser.status >= 400 && parser.status < 500) {
-      return new AppError(parser.status === 413 ? 413 : 400, parser.status === 413 ? 'payload_too_large' : 'invalid_request',
-        'The request body could not be read');
+      return new AppError(
+        parser.status === 413 ? 413 : 400,
+        parser.status === 413 ? 'payload_too_large' : 'invalid_request',
+        'The request body could not be read',
+      );
     }
   }
   if (err instanceof QueryFailedError) {
     const driver = err.driverError as { code?: string; constraint?: string };
     if (driver.code === '23505') {
-      const message = (driver.constraint && DUPLICATE_MESSAGES[driver.constraint]) ?? 'This record already exists';
+      const message =
+        (driver.constraint && DUPLICATE_MESSAGES[driver.constraint]) ?? 'This record already exists';
       return new AppError(409, 'duplicate', message);
     }
   }
@@ -48,7 +56,9 @@ export function toAppError(err: unknown): AppError {
 }
 
 /** The one error middleware: every error leaves as `{ error: { code, message, details } }`. */
-export function errorMiddleware(log: (message: string, err: unknown) => void = console.error): ErrorRequestHandler {
+export function errorMiddleware(
+  log: (message: string, err: unknown) => void = console.error,
+): ErrorRequestHandler {
   return (err, req, res, next) => {
     if (res.headersSent) return next(err);
     const appError = toAppError(err);

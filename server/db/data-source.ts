@@ -9,7 +9,14 @@ import { UserEntity } from '../modules/users/user.entity';
 import { InitialSchema1764626400000 } from './migrations/1764626400000-initial-schema';
 
 /** Every entity, listed (not globbed) so tsx and the bundler both find them. */
-export const ENTITIES = [OrganisationEntity, UserEntity, JobEntity, SpoolEntity, SpoolRevisionEntity, AuditEventEntity];
+export const ENTITIES = [
+  OrganisationEntity,
+  UserEntity,
+  JobEntity,
+  SpoolEntity,
+  SpoolRevisionEntity,
+  AuditEventEntity,
+];
 /** Every migration in order. Add new ones at the end. */
 export const MIGRATIONS = [InitialSchema1764626400000];
 

@@ -9,7 +9,9 @@ async function main(): Promise<void> {
   try {
     const applied = await ds.runMigrations({ transaction: 'each' });
     console.log(
-      applied.length ? `[tackline] applied migrations: ${applied.map((m) => m.name).join(', ')}` : '[tackline] schema up to date',
+      applied.length
+        ? `[tackline] applied migrations: ${applied.map((m) => m.name).join(', ')}`
+        : '[tackline] schema up to date',
     );
   } finally {
     await ds.destroy();

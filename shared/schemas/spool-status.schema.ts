@@ -20,7 +20,9 @@ export type SpoolStatus = z.infer<typeof spoolStatusSchema>;
  * The status moves each non-admin role may make through `POST /api/spools/:id/status`.
  * Admins may set any status. Issuing a revision moves a drafting spool to `issued`.
  */
-export const SPOOL_STATUS_MOVES: Readonly<Partial<Record<Role, ReadonlyArray<readonly [SpoolStatus, SpoolStatus]>>>> = {
+export const SPOOL_STATUS_MOVES: Readonly<
+  Partial<Record<Role, ReadonlyArray<readonly [SpoolStatus, SpoolStatus]>>>
+> = {
   fabricator: [
     ['issued', 'cut'],
     ['cut', 'fitted'],

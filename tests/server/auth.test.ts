@@ -20,7 +20,9 @@ const app = () => testApp(db.dataSource, db.url);
 
 describe('POST /api/auth/sign-in', () => {
   it('signs in with the right password, sets an HttpOnly SameSite=Lax session cookie and returns the user', async () => {
-    const res = await request(app()).post('/api/auth/sign-in').send({ email: shop.email('detailer'), password: PASSWORD });
+    const res = await request(app())
+      .post('/api/auth/sign-in')
+      .send({ email: shop.email('detailer'), password: PASSWORD });
     expect(res.status).toBe(200);
     expect(res.body.user).toMatchObject({
       email: shop.email('detailer'),
@@ -48,9 +50,15 @@ describe('POST /api/auth/sign-in', () => {
   it('gives a wrong password, an unknown e-mail and an inactive account the very same 401', async () => {
     const inactive = await createUser(db.dataSource, shop, 'fabricator', false);
     const a = app();
-    const wrong = await request(a).post('/api/auth/sign-in').send({ email: shop.email('admin'), password: 'not-the-password' });
-    const unknown = await request(a).post('/api/auth/sign-in').send({ email: 'nobody@nowhere.example', password: PASSWORD });
-    const off = await request(a).post('/api/auth/sign-in').send({ email: inactive.email, password: PASSWORD });
+    const wrong = await request(a)
+      .post('/api/auth/sign-in')
+      .send({ email: shop.email('admin'), password: 'not-the-password' });
+    const unknown = await request(a)
+      .post('/api/auth/sign-in')
+      .send({ email: 'nobody@nowhere.example', password: PASSWORD });
+    const off = await request(a)
+      .post('/api/auth/sign-in')
+      .send({ email: inactive.email, password: PASSWORD });
     for (const res of [wrong, unknown, off]) {
       expect(res.status).toBe(401);
       expect(res.headers['set-cookie']).toBeUndefined();
@@ -62,9 +70,15 @@ describe('POST /api/auth/sign-in', () => {
 
   it('issues a new session id at sign-in (no session fixation)', async () => {
     const agent = request.agent(app());
-    await agent.post('/api/auth/sign-in').send({ email: shop.email('admin'), password: PASSWORD }).expect(200);
+    await agent
+      .post('/api/auth/sign-in')
+      .send({ email: shop.email('admin'), password: PASSWORD })
+      .expect(200);
     const first = (await db.dataSource.query(`SELECT sid FROM session`)) as Array<{ sid: string }>;
-    await agent.post('/api/auth/sign-in').send({ email: shop.email('admin'), password: PASSWORD }).expect(200);
+    await agent
+      .post('/api/auth/sign-in')
+      .send({ email: shop.email('admin'), password: PASSWORD })
+      .expect(200);
     const second = (await db.dataSource.query(`SELECT sid FROM session`)) as Array<{ sid: string }>;
     const newSids = second.map((r) => r.sid).filter((sid) => !first.some((f) => f.sid === sid));
     expect(newSids).toHaveLength(1);
@@ -75,8 +89,12 @@ describe('POST /api/auth/sign-in', () => {
   it('refuses a body with unknown fields or a missing password with 400, and records nothing', async () => {
     const before = await snapshot(db.dataSource);
     const a = app();
-    const extra = await request(a).post('/api/auth/sign-in').send({ email: shop.email('admin'), password: PASSWORD, role: 'admin' });
-    const missing = await request(a).post('/api/auth/sign-in').send({ email: shop.email('admin') });
+    const extra = await request(a)
+      .post('/api/auth/sign-in')
+      .send({ email: shop.email('admin'), password: PASSWORD, role: 'admin' });
+    const missing = await request(a)
+      .post('/api/auth/sign-in')
+      .send({ email: shop.email('admin') });
     expect(extra.status).toBe(400);
     expect(missing.status).toBe(400);
     expect(extra.body.error.code).toBe('invalid_request');
@@ -87,13 +105,19 @@ describe('POST /api/auth/sign-in', () => {
     const limited = testApp(db.dataSource, db.url, { env: { SIGN_IN_MAX_ATTEMPTS: '3' } });
     const email = shop.email('inspector');
     for (let i = 0; i < 3; i++) {
-      await request(limited).post('/api/auth/sign-in').send({ email, password: 'wrong-password' }).expect(401);
+      await request(limited)
+        .post('/api/auth/sign-in')
+        .send({ email, password: 'wrong-password' })
+        .expect(401);
     }
     const blocked = await request(limited).post('/api/auth/sign-in').send({ email, password: PASSWORD });
     expect(blocked.status).toBe(429);
     expect(blocked.body.error.code).toBe('too_many_attempts');
     // another account from the same address is not locked by the first one's failures
-    await request(limited).post('/api/auth/sign-in').send({ email: shop.email('viewer'), password: PASSWORD }).expect(200);
+    await request(limited)
+      .post('/api/auth/sign-in')
+      .send({ email: shop.email('viewer'), password: PASSWORD })
+      .expect(200);
   });
 
   it('cannot be dodged by sending a different X-Forwarded-For each time', async () => {
@@ -113,7 +137,10 @@ describe('POST /api/auth/sign-in', () => {
   it('does not count successful sign-ins against the limit', async () => {
     const limited = testApp(db.dataSource, db.url, { env: { SIGN_IN_MAX_ATTEMPTS: '2' } });
     for (let i = 0; i < 4; i++) {
-      await request(limited).post('/api/auth/sign-in').send({ email: shop.email('admin'), password: PASSWORD }).expect(200);
+      await request(limited)
+        .post('/api/auth/sign-in')
+        .send({ email: shop.email('admin'), password: PASSWORD })
+        .expect(200);
     }
   });
 });
@@ -133,9 +160,10 @@ describe('GET /api/auth/me and POST /api/auth/sign-out', () => {
     const out = await agent.post('/api/auth/sign-out');
     expect(out.status).toBe(204);
     await agent.get('/api/auth/me').expect(401);
-    const rows = (await db.dataSource.query(`SELECT count(*)::int AS n FROM session WHERE sess -> 'passport' ->> 'user' = $1`, [
-      shop.users.fabricator.id,
-    ])) as Array<{ n: number }>;
+    const rows = (await db.dataSource.query(
+      `SELECT count(*)::int AS n FROM session WHERE sess -> 'passport' ->> 'user' = $1`,
+      [shop.users.fabricator.id],
+    )) as Array<{ n: number }>;
     expect(rows[0]!.n).toBe(0);
   });
 
@@ -148,7 +176,9 @@ describe('GET /api/auth/me and POST /api/auth/sign-out', () => {
   });
 
   it('sets Secure on the cookie when the public URL is https', async () => {
-    const secure = testApp(db.dataSource, db.url, { env: { PUBLIC_URL: 'https://tackline.kestrel.example' } });
+    const secure = testApp(db.dataSource, db.url, {
+      env: { PUBLIC_URL: 'https://tackline.kestrel.example' },
+    });
     const res = await request(secure)
       .post('/api/auth/sign-in')
       .set('X-Forwarded-Proto', 'https')

@@ -28,7 +28,11 @@ interface ErrorAnswer {
 }
 
 /** Sends a request and checks: the status, the one error shape, and that no row changed. */
-async function refused(send: () => PromiseLike<{ status: number; body: unknown }>, status: number, code: string) {
+async function refused(
+  send: () => PromiseLike<{ status: number; body: unknown }>,
+  status: number,
+  code: string,
+) {
   const before = await snapshot(db.dataSource);
   const res = await send();
   const body = res.body as ErrorAnswer;
@@ -39,7 +43,12 @@ async function refused(send: () => PromiseLike<{ status: number; body: unknown }
   return { status: res.status, body };
 }
 
-const validJob = () => ({ number: `N-${Math.random().toString(36).slice(2, 8)}`, title: 'T', client: 'C', spec: SPEC });
+const validJob = () => ({
+  number: `N-${Math.random().toString(36).slice(2, 8)}`,
+  title: 'T',
+  client: 'C',
+  spec: SPEC,
+});
 
 describe('bad input', () => {
   it('malformed JSON: 400 invalid_request', async () => {
@@ -61,36 +70,74 @@ describe('bad input', () => {
   });
 
   it('unknown fields at the top level and inside the spec: 400', async () => {
-    await refused(() => admin.post('/api/jobs').send({ ...validJob(), organisationId: shop.id }), 400, 'invalid_request');
-    await refused(() => admin.post('/api/jobs').send({ ...validJob(), spec: { ...SPEC, colour: 'red' } }), 400, 'invalid_request');
-    await refused(() => admin.patch(`/api/spools/${spoolId}`).send({ status: 'shipped', version: 1 }), 400, 'invalid_request');
+    await refused(
+      () => admin.post('/api/jobs').send({ ...validJob(), organisationId: shop.id }),
+      400,
+      'invalid_request',
+    );
+    await refused(
+      () => admin.post('/api/jobs').send({ ...validJob(), spec: { ...SPEC, colour: 'red' } }),
+      400,
+      'invalid_request',
+    );
+    await refused(
+      () => admin.patch(`/api/spools/${spoolId}`).send({ status: 'shipped', version: 1 }),
+      400,
+      'invalid_request',
+    );
   });
 
   it('a body that is not an object, or no body where one is needed: 400', async () => {
     await refused(() => admin.post('/api/jobs').send([validJob()]), 400, 'invalid_request');
     await refused(() => admin.post('/api/jobs'), 400, 'invalid_request');
-    await refused(() => admin.post('/api/jobs').set('Content-Type', 'text/plain').send('number=1'), 400, 'invalid_request');
+    await refused(
+      () => admin.post('/api/jobs').set('Content-Type', 'text/plain').send('number=1'),
+      400,
+      'invalid_request',
+    );
   });
 
   it('a form or text body on a route whose fields are all optional: 400, nothing archived', async () => {
     await refused(
-      () => admin.post(`/api/jobs/${jobId}/archive`).set('Content-Type', 'application/x-www-form-urlencoded').send('a=1'),
+      () =>
+        admin
+          .post(`/api/jobs/${jobId}/archive`)
+          .set('Content-Type', 'application/x-www-form-urlencoded')
+          .send('a=1'),
       400,
       'invalid_request',
     );
-    await refused(() => admin.post(`/api/spools/${spoolId}/archive`).set('Content-Type', 'text/plain').send('x'), 400, 'invalid_request');
+    await refused(
+      () => admin.post(`/api/spools/${spoolId}/archive`).set('Content-Type', 'text/plain').send('x'),
+      400,
+      'invalid_request',
+    );
   });
 
   it('values out of range: negative root gap, unknown flange class, unknown role, short password', async () => {
-    await refused(() => admin.post('/api/jobs').send({ ...validJob(), spec: { ...SPEC, rootGapMm: -1 } }), 400, 'invalid_request');
-    await refused(() => admin.post('/api/jobs').send({ ...validJob(), spec: { ...SPEC, flangeClass: 125 } }), 400, 'invalid_request');
     await refused(
-      () => admin.post('/api/users').send({ email: 'x@bad.example', displayName: 'X', role: 'owner', password: 'long-enough-1' }),
+      () => admin.post('/api/jobs').send({ ...validJob(), spec: { ...SPEC, rootGapMm: -1 } }),
       400,
       'invalid_request',
     );
     await refused(
-      () => admin.post('/api/users').send({ email: 'x@bad.example', displayName: 'X', role: 'viewer', password: 'short' }),
+      () => admin.post('/api/jobs').send({ ...validJob(), spec: { ...SPEC, flangeClass: 125 } }),
+      400,
+      'invalid_request',
+    );
+    await refused(
+      () =>
+        admin
+          .post('/api/users')
+          .send({ email: 'x@bad.example', displayName: 'X', role: 'owner', password: 'long-enough-1' }),
+      400,
+      'invalid_request',
+    );
+    await refused(
+      () =>
+        admin
+          .post('/api/users')
+          .send({ email: 'x@bad.example', displayName: 'X', role: 'viewer', password: 'short' }),
       400,
       'invalid_request',
     );
@@ -98,20 +145,37 @@ describe('bad input', () => {
 
   it('oversize body: 413 payload_too_large', async () => {
     const design = { format: 'tackline.spool', padding: 'x'.repeat(100_000) };
-    await refused(() => admin.put(`/api/spools/${spoolId}/draft`).send({ design, version: 1 }), 413, 'payload_too_large');
+    await refused(
+      () => admin.put(`/api/spools/${spoolId}/draft`).send({ design, version: 1 }),
+      413,
+      'payload_too_large',
+    );
   });
 
   it('bad ids in the path: 400 invalid_request, for every kind of record', async () => {
-    for (const path of ['/api/jobs/123', '/api/spools/not-a-uuid', `/api/spools/${spoolId}/revisions/xyz`, '/api/users/1']) {
+    for (const path of [
+      '/api/jobs/123',
+      '/api/spools/not-a-uuid',
+      `/api/spools/${spoolId}/revisions/xyz`,
+      '/api/users/1',
+    ]) {
       await refused(() => admin.get(path), 400, 'invalid_request');
     }
-    await refused(() => admin.patch('/api/jobs/%27%20OR%201%3D1').send({ title: 'x', version: 1 }), 400, 'invalid_request');
+    await refused(
+      () => admin.patch('/api/jobs/%27%20OR%201%3D1').send({ title: 'x', version: 1 }),
+      400,
+      'invalid_request',
+    );
   });
 
   it('well-formed ids that do not exist: 404 not_found', async () => {
     const none = '3f1c2b9a-0d4e-4c1b-9a7e-2b6c8d0e1f23';
     await refused(() => admin.get(`/api/jobs/${none}`), 404, 'not_found');
-    await refused(() => admin.post(`/api/jobs/${none}/spools`).send({ mark: 'A-1', lineNumber: 'L' }), 404, 'not_found');
+    await refused(
+      () => admin.post(`/api/jobs/${none}/spools`).send({ mark: 'A-1', lineNumber: 'L' }),
+      404,
+      'not_found',
+    );
     await refused(() => admin.get(`/api/spools/${spoolId}/revisions/${none}`), 404, 'not_found');
   });
 
@@ -140,7 +204,11 @@ describe('bad input', () => {
     const job = await createJob(db.dataSource, shop, { number: 'DUP-1' });
     await refused(() => admin.post('/api/jobs').send({ ...validJob(), number: 'dup-1' }), 409, 'duplicate');
     const { spool } = await createSpool(db.dataSource, shop, job, { mark: 'M-1' });
-    await refused(() => admin.post(`/api/jobs/${job.id}/spools`).send({ mark: 'm-1', lineNumber: 'L' }), 409, 'duplicate');
+    await refused(
+      () => admin.post(`/api/jobs/${job.id}/spools`).send({ mark: 'm-1', lineNumber: 'L' }),
+      409,
+      'duplicate',
+    );
     expect(spool.id).toBeTruthy();
   });
 });

@@ -49,7 +49,7 @@ describe("another shop's records", () => {
     },
   );
 
-  it('answers a missing id and another shop\'s id identically', async () => {
+  it("answers a missing id and another shop's id identically", async () => {
     const job = await createJob(db.dataSource, kestrel);
     const theirs = await fenwickAdmin.get(`/api/jobs/${job.id}`);
     const none = await fenwickAdmin.get(`/api/jobs/00000000-0000-4000-8000-000000000000`);
@@ -58,7 +58,10 @@ describe("another shop's records", () => {
   });
 
   it('leaves other shops out of every list', async () => {
-    const job = await createJob(db.dataSource, kestrel, { number: 'KESTREL-ONLY', title: 'Kestrel secret job' });
+    const job = await createJob(db.dataSource, kestrel, {
+      number: 'KESTREL-ONLY',
+      title: 'Kestrel secret job',
+    });
     await createSpool(db.dataSource, kestrel, job);
     const jobs = await fenwickAdmin.get('/api/jobs?includeArchived=true&pageSize=100');
     expect(jobs.status).toBe(200);
@@ -74,15 +77,28 @@ describe("another shop's records", () => {
 
   it('lets a job number and a user e-mail exist in two shops', async () => {
     await createJob(db.dataSource, kestrel, { number: 'SHARED-1' });
-    const res = await fenwickAdmin
-      .post('/api/jobs')
-      .send({ number: 'SHARED-1', title: 'Same number, other shop', client: 'Client', spec: {
-        material: 'ASTM A106 Gr B', schedule: 'STD', flangeClass: 150, rootGapMm: 3, sawKerfMm: 3, minPieceLengthMm: 100,
-      } });
+    const res = await fenwickAdmin.post('/api/jobs').send({
+      number: 'SHARED-1',
+      title: 'Same number, other shop',
+      client: 'Client',
+      spec: {
+        material: 'ASTM A106 Gr B',
+        schedule: 'STD',
+        flangeClass: 150,
+        rootGapMm: 3,
+        sawKerfMm: 3,
+        minPieceLengthMm: 100,
+      },
+    });
     expect(res.status).toBe(201);
     const user = await fenwickAdmin
       .post('/api/users')
-      .send({ email: kestrel.email('viewer'), displayName: 'Same address', role: 'viewer', password: 'another-password' });
+      .send({
+        email: kestrel.email('viewer'),
+        displayName: 'Same address',
+        role: 'viewer',
+        password: 'another-password',
+      });
     expect(user.status).toBe(201);
   });
 });

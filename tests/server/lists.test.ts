@@ -21,9 +21,15 @@ beforeAll(async () => {
   for (const s of specs) {
     const job = await createJob(db.dataSource, shop, { number: s.number, title: s.title, client: s.client });
     jobIds[s.number] = job.id;
-    for (let i = 0; i < s.spools; i++) await createSpool(db.dataSource, shop, job, { mark: `${s.number}-S${i + 1}` });
+    for (let i = 0; i < s.spools; i++)
+      await createSpool(db.dataSource, shop, job, { mark: `${s.number}-S${i + 1}` });
   }
-  await createJob(db.dataSource, shop, { number: 'Z-999', title: 'Old', status: 'archived', archivedAt: new Date() });
+  await createJob(db.dataSource, shop, {
+    number: 'Z-999',
+    title: 'Old',
+    status: 'archived',
+    archivedAt: new Date(),
+  });
 });
 afterAll(async () => {
   await db?.drop();
@@ -34,7 +40,9 @@ describe('GET /api/jobs', () => {
     const res = await viewer.get('/api/jobs');
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ total: 3, page: 1, pageSize: 25 });
-    expect(res.body.items.map((j: { number: string; spoolCount: number }) => [j.number, j.spoolCount])).toEqual([
+    expect(
+      res.body.items.map((j: { number: string; spoolCount: number }) => [j.number, j.spoolCount]),
+    ).toEqual([
       ['A-100', 1],
       ['B-200', 3],
       ['C-300', 0],
@@ -62,7 +70,7 @@ describe('GET /api/jobs', () => {
 });
 
 describe('GET /api/jobs/:jobId/spools', () => {
-  it('lists the job\'s spools sorted by mark with their draft, and drops archived ones from list and count', async () => {
+  it("lists the job's spools sorted by mark with their draft, and drops archived ones from list and count", async () => {
     const res = await viewer.get(`/api/jobs/${jobIds['B-200']}/spools?order=desc`);
     expect(res.status).toBe(200);
     expect(res.body.items.map((s: { mark: string }) => s.mark)).toEqual(['B-200-S3', 'B-200-S2', 'B-200-S1']);

@@ -1,5 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createJob, createShop, createSpool, createUser, PASSWORD, snapshot, type Shop } from './helpers/fixtures';
+import {
+  createJob,
+  createShop,
+  createSpool,
+  createUser,
+  PASSWORD,
+  snapshot,
+  type Shop,
+} from './helpers/fixtures';
 import { createTestDatabase, type TestDatabase } from './helpers/test-db';
 import { signedIn, testApp } from './helpers/test-app';
 
@@ -43,7 +51,11 @@ describe('optimistic locking', () => {
     const status = await admin.post(`/api/spools/${spool.id}/status`).send({ status: 'cut', version: 1 });
     for (const res of [patch, status]) {
       expect(res.status).toBe(409);
-      expect(res.body.error.details.current).toMatchObject({ lineNumber: 'CW-2', version: 2, status: 'issued' });
+      expect(res.body.error.details.current).toMatchObject({
+        lineNumber: 'CW-2',
+        version: 2,
+        status: 'issued',
+      });
     }
     expect(await snapshot(db.dataSource)).toBe(before);
   });
@@ -69,7 +81,10 @@ describe('optimistic locking', () => {
   it('issuing with a stale draft version gets 409 and issues nothing', async () => {
     const job = await createJob(db.dataSource, shop);
     const { spool, draft } = await createSpool(db.dataSource, shop, job);
-    await detailer.put(`/api/spools/${spool.id}/draft`).send({ design: draft.design, version: 1 }).expect(200);
+    await detailer
+      .put(`/api/spools/${spool.id}/draft`)
+      .send({ design: draft.design, version: 1 })
+      .expect(200);
     const before = await snapshot(db.dataSource);
     const res = await detailer.post(`/api/spools/${spool.id}/draft/issue`).send({ version: 1 });
     expect(res.status).toBe(409);
@@ -99,7 +114,9 @@ describe('optimistic locking', () => {
     const { spool, draft } = await createSpool(db.dataSource, shop, job);
     const results = await Promise.all(
       ['racer one', 'racer two'].map((d) =>
-        detailer.put(`/api/spools/${spool.id}/draft`).send({ design: { ...draft.design, description: d }, version: 1 }),
+        detailer
+          .put(`/api/spools/${spool.id}/draft`)
+          .send({ design: { ...draft.design, description: d }, version: 1 }),
       ),
     );
     expect(results.map((r) => r.status).sort()).toEqual([200, 409]);

@@ -20,7 +20,9 @@ afterAll(async () => {
 
 async function newSpool() {
   const job = await createJob(db.dataSource, shop);
-  const res = await detailer.post(`/api/jobs/${job.id}/spools`).send({ mark: 'CW-201-S03', lineNumber: 'CW-201' });
+  const res = await detailer
+    .post(`/api/jobs/${job.id}/spools`)
+    .send({ mark: 'CW-201-S03', lineNumber: 'CW-201' });
   expect(res.status).toBe(201);
   return res.body as { id: string; draft: unknown; currentRevision: unknown; status: string };
 }
@@ -46,14 +48,23 @@ describe('spool revisions', () => {
     const spool = await newSpool();
     const a = (await detailer.post(`/api/spools/${spool.id}/draft`)).body;
     const designA = { ...a.design, description: 'rev A design' };
-    await detailer.put(`/api/spools/${spool.id}/draft`).send({ design: designA, note: 'first', version: 1 }).expect(200);
-    const issuedA = await detailer.post(`/api/spools/${spool.id}/draft/issue`).send({ note: 'Issued for fabrication' });
+    await detailer
+      .put(`/api/spools/${spool.id}/draft`)
+      .send({ design: designA, note: 'first', version: 1 })
+      .expect(200);
+    const issuedA = await detailer
+      .post(`/api/spools/${spool.id}/draft/issue`)
+      .send({ note: 'Issued for fabrication' });
     expect(issuedA.status).toBe(200);
     expect(issuedA.body).toMatchObject({ letter: 'A', state: 'issued', note: 'Issued for fabrication' });
     expect(issuedA.body.issuedAt).not.toBeNull();
 
     const spoolAfterA = (await detailer.get(`/api/spools/${spool.id}`)).body;
-    expect(spoolAfterA).toMatchObject({ status: 'issued', draft: null, currentRevision: { id: a.id, letter: 'A' } });
+    expect(spoolAfterA).toMatchObject({
+      status: 'issued',
+      draft: null,
+      currentRevision: { id: a.id, letter: 'A' },
+    });
 
     const b = await detailer.post(`/api/spools/${spool.id}/draft`);
     expect(b.status).toBe(201);
@@ -91,9 +102,9 @@ describe('spool revisions', () => {
     await expect(
       db.dataSource.query(`UPDATE spool_revision SET note = 'tampered' WHERE id = $1`, [issued.id]),
     ).rejects.toThrow(/cannot be changed/);
-    await expect(db.dataSource.query(`DELETE FROM spool_revision WHERE id = $1`, [issued.id])).rejects.toThrow(
-      /cannot be deleted/,
-    );
+    await expect(
+      db.dataSource.query(`DELETE FROM spool_revision WHERE id = $1`, [issued.id]),
+    ).rejects.toThrow(/cannot be deleted/);
   });
 
   it('refuses to issue a draft whose stored design is not a valid spool design (422)', async () => {
@@ -118,15 +129,20 @@ describe('spool revisions', () => {
   it('writes an audit event for each draft open, save and issue', async () => {
     const spool = await newSpool();
     const draft = (await detailer.post(`/api/spools/${spool.id}/draft`)).body;
-    await detailer.put(`/api/spools/${spool.id}/draft`).send({ design: draft.design, version: 1 }).expect(200);
+    await detailer
+      .put(`/api/spools/${spool.id}/draft`)
+      .send({ design: draft.design, version: 1 })
+      .expect(200);
     await detailer.post(`/api/spools/${spool.id}/draft/issue`).send({}).expect(200);
     const rows = await db.dataSource.query(
       `SELECT action, actor_id FROM audit_event WHERE entity_id = $1 ORDER BY at, action`,
       [draft.id],
     );
-    expect(rows.map((r: { action: string }) => r.action).sort()).toEqual(
-      ['revision.issue', 'revision.open-draft', 'revision.save-draft'],
-    );
+    expect(rows.map((r: { action: string }) => r.action).sort()).toEqual([
+      'revision.issue',
+      'revision.open-draft',
+      'revision.save-draft',
+    ]);
     for (const r of rows) expect(r.actor_id).toBe(shop.users.detailer.id);
   });
 });

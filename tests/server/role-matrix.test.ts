@@ -21,7 +21,12 @@ afterAll(async () => {
   await db?.drop();
 });
 
-function call(agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, route: RouteCase, path: string, body: unknown) {
+function call(
+  agent: ReturnType<typeof request.agent> | ReturnType<typeof request>,
+  route: RouteCase,
+  path: string,
+  body: unknown,
+) {
   const req = (agent as ReturnType<typeof request.agent>)[route.method](path);
   return body === undefined ? req : req.send(body as object);
 }
@@ -34,25 +39,28 @@ describe('role × route matrix', () => {
     expect(cases.length).toBe(ROUTES.length * ROLES.length);
   });
 
-  it.each(cases.map((c) => [c.route.name, c.role, c] as const))('%s as %s', async (_name, role, { route }) => {
-    const { path, body } = await route.prepare(db.dataSource, shop, role);
-    const allowed = route.allowed === 'public' || route.allowed.includes(role);
-    const before = await snapshot(db.dataSource);
-    const eventsBefore = await auditCount(db.dataSource);
-    const res = await call(agents[role], route, path, body);
-    if (allowed) {
-      expect(res.status, JSON.stringify(res.body)).toBeGreaterThanOrEqual(200);
-      expect(res.status, JSON.stringify(res.body)).toBeLessThan(300);
-      // every write leaves an audit event (opening an already open draft writes nothing)
-      if (route.method !== 'get' && route.name !== 'POST /api/spools/:id/draft') {
-        expect(await auditCount(db.dataSource)).toBeGreaterThan(eventsBefore);
+  it.each(cases.map((c) => [c.route.name, c.role, c] as const))(
+    '%s as %s',
+    async (_name, role, { route }) => {
+      const { path, body } = await route.prepare(db.dataSource, shop, role);
+      const allowed = route.allowed === 'public' || route.allowed.includes(role);
+      const before = await snapshot(db.dataSource);
+      const eventsBefore = await auditCount(db.dataSource);
+      const res = await call(agents[role], route, path, body);
+      if (allowed) {
+        expect(res.status, JSON.stringify(res.body)).toBeGreaterThanOrEqual(200);
+        expect(res.status, JSON.stringify(res.body)).toBeLessThan(300);
+        // every write leaves an audit event (opening an already open draft writes nothing)
+        if (route.method !== 'get' && route.name !== 'POST /api/spools/:id/draft') {
+          expect(await auditCount(db.dataSource)).toBeGreaterThan(eventsBefore);
+        }
+      } else {
+        expect(res.status, JSON.stringify(res.body)).toBe(403);
+        expect(res.body.error.code).toBe('forbidden');
+        expect(await snapshot(db.dataSource)).toBe(before);
       }
-    } else {
-      expect(res.status, JSON.stringify(res.body)).toBe(403);
-      expect(res.body.error.code).toBe('forbidden');
-      expect(await snapshot(db.dataSource)).toBe(before);
-    }
-  });
+    },
+  );
 });
 
 describe('without a session', () => {

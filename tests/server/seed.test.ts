@@ -13,7 +13,10 @@ import { testApp } from './helpers/test-app';
 let db: TestDatabase;
 let samplesDir: string;
 
-const SAMPLE = { ...starterDesign({ mark: 'CW-201-S03', lineNumber: 'CW-201' }), description: 'sample file design' };
+const SAMPLE = {
+  ...starterDesign({ mark: 'CW-201-S03', lineNumber: 'CW-201' }),
+  description: 'sample file design',
+};
 
 beforeAll(async () => {
   db = await createTestDatabase();
@@ -39,17 +42,38 @@ describe('demo seed', () => {
   it('loads the scenario: two shops, six Kestrel users and one Fenwick admin, one job, five spools with drafts', async () => {
     const report = await seedDemo(db.dataSource, { samplesDir, bcryptCost: 4 });
     expect(report).toMatchObject({ organisations: 2, users: 7, jobs: 1, spools: 5, revisions: 5 });
-    expect(await counts()).toMatchObject({ organisation: 2, app_user: 7, job: 1, spool: 5, spool_revision: 5 });
+    expect(await counts()).toMatchObject({
+      organisation: 2,
+      app_user: 7,
+      job: 1,
+      spool: 5,
+      spool_revision: 5,
+    });
     const roles = await db.dataSource.query(
       `SELECT u.role FROM app_user u JOIN organisation o ON o.id = u.organisation_id WHERE o.slug = 'kestrel' ORDER BY u.role`,
     );
     expect(roles.map((r: { role: string }) => r.role)).toEqual([
-      'admin', 'detailer', 'fabricator', 'fabricator', 'inspector', 'viewer',
+      'admin',
+      'detailer',
+      'fabricator',
+      'fabricator',
+      'inspector',
+      'viewer',
     ]);
     const [job] = await db.dataSource.query(`SELECT * FROM job`);
-    expect(job).toMatchObject({ number: 'HFD-B-CW', title: 'Condenser water, Hall B', client: 'Harrow Fields Data Centre', units: 'mm' });
+    expect(job).toMatchObject({
+      number: 'HFD-B-CW',
+      title: 'Condenser water, Hall B',
+      client: 'Harrow Fields Data Centre',
+      units: 'mm',
+    });
     expect(job.spec).toEqual({
-      material: 'ASTM A106 Gr B', schedule: 'STD', flangeClass: 150, rootGapMm: 3, sawKerfMm: 3, minPieceLengthMm: 100,
+      material: 'ASTM A106 Gr B',
+      schedule: 'STD',
+      flangeClass: 150,
+      rootGapMm: 3,
+      sawKerfMm: 3,
+      minPieceLengthMm: 100,
     });
   });
 
@@ -77,7 +101,9 @@ describe('demo seed', () => {
     const app = testApp(db.dataSource, db.url);
     for (const org of DEMO_ORGANISATIONS) {
       for (const u of org.users) {
-        const res = await request(app).post('/api/auth/sign-in').send({ email: u.email, password: DEMO_PASSWORD });
+        const res = await request(app)
+          .post('/api/auth/sign-in')
+          .send({ email: u.email, password: DEMO_PASSWORD });
         expect(res.status, u.email).toBe(200);
         expect(res.body.user).toMatchObject({ role: u.role, organisation: { name: org.name } });
       }
@@ -92,8 +118,12 @@ describe('demo seed', () => {
   });
 
   it('a re-seed keeps what users changed and does not bring back what they renamed', async () => {
-    await db.dataSource.query(`UPDATE job SET title = 'Condenser water, Hall B (rev)' WHERE number = 'HFD-B-CW'`);
-    await db.dataSource.query(`UPDATE app_user SET display_name = 'Renamed Detailer', role = 'inspector' WHERE email = 'detailer@kestrel.example'`);
+    await db.dataSource.query(
+      `UPDATE job SET title = 'Condenser water, Hall B (rev)' WHERE number = 'HFD-B-CW'`,
+    );
+    await db.dataSource.query(
+      `UPDATE app_user SET display_name = 'Renamed Detailer', role = 'inspector' WHERE email = 'detailer@kestrel.example'`,
+    );
     await db.dataSource.query(`UPDATE spool SET line_number = 'CW-201A' WHERE mark = 'CW-201-S03'`);
     await db.dataSource.query(`UPDATE spool_revision SET note = 'edited by a user'`);
     const before = await counts();
@@ -101,7 +131,9 @@ describe('demo seed', () => {
     expect(await counts()).toEqual(before);
     const [job] = await db.dataSource.query(`SELECT title FROM job WHERE number = 'HFD-B-CW'`);
     expect(job.title).toBe('Condenser water, Hall B (rev)');
-    const [user] = await db.dataSource.query(`SELECT display_name, role FROM app_user WHERE email = 'detailer@kestrel.example'`);
+    const [user] = await db.dataSource.query(
+      `SELECT display_name, role FROM app_user WHERE email = 'detailer@kestrel.example'`,
+    );
     expect(user).toEqual({ display_name: 'Renamed Detailer', role: 'inspector' });
     const notes = await db.dataSource.query(`SELECT DISTINCT note FROM spool_revision`);
     expect(notes).toEqual([{ note: 'edited by a user' }]);

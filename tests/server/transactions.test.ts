@@ -56,18 +56,57 @@ describe('a crash in the middle of a multi-row write', () => {
   });
 
   it.each([
-    ['job.create', 'post', () => '/api/jobs', () => ({ number: 'TX-1', title: 'T', client: 'C', spec: {
-      material: 'ASTM A106 Gr B', schedule: 'STD', flangeClass: 150, rootGapMm: 3, sawKerfMm: 3, minPieceLengthMm: 100,
-    } })],
-    ['spool.create', 'post', (ids: Ids) => `/api/jobs/${ids.job}/spools`, () => ({ mark: 'TX-S1', lineNumber: 'TX' })],
-    ['spool.update', 'patch', (ids: Ids) => `/api/spools/${ids.spool}`, () => ({ mark: 'TX-S2', version: 1 })],
-    ['revision.save-draft', 'put', (ids: Ids) => `/api/spools/${ids.spool}/draft`, (ids: Ids) => ({ design: ids.design, note: 'x', version: 1 })],
-    ['user.create', 'post', () => '/api/users', () => ({ email: 'tx@tx.example', displayName: 'Tx', role: 'viewer', password: 'long-password-1' })],
+    [
+      'job.create',
+      'post',
+      () => '/api/jobs',
+      () => ({
+        number: 'TX-1',
+        title: 'T',
+        client: 'C',
+        spec: {
+          material: 'ASTM A106 Gr B',
+          schedule: 'STD',
+          flangeClass: 150,
+          rootGapMm: 3,
+          sawKerfMm: 3,
+          minPieceLengthMm: 100,
+        },
+      }),
+    ],
+    [
+      'spool.create',
+      'post',
+      (ids: Ids) => `/api/jobs/${ids.job}/spools`,
+      () => ({ mark: 'TX-S1', lineNumber: 'TX' }),
+    ],
+    [
+      'spool.update',
+      'patch',
+      (ids: Ids) => `/api/spools/${ids.spool}`,
+      () => ({ mark: 'TX-S2', version: 1 }),
+    ],
+    [
+      'revision.save-draft',
+      'put',
+      (ids: Ids) => `/api/spools/${ids.spool}/draft`,
+      (ids: Ids) => ({ design: ids.design, note: 'x', version: 1 }),
+    ],
+    [
+      'user.create',
+      'post',
+      () => '/api/users',
+      () => ({ email: 'tx@tx.example', displayName: 'Tx', role: 'viewer', password: 'long-password-1' }),
+    ],
   ] as const)('%s leaves nothing behind when its audit write fails', async (action, method, path, body) => {
     const job = await createJob(db.dataSource, shop);
     const { spool, draft } = await createSpool(db.dataSource, shop, job);
     const ids: Ids = { job: job.id, spool: spool.id, design: draft.design };
-    const agent = await signedIn(testApp(db.dataSource, db.url, { audit: failingOn(action) }), shop.email('admin'), PASSWORD);
+    const agent = await signedIn(
+      testApp(db.dataSource, db.url, { audit: failingOn(action) }),
+      shop.email('admin'),
+      PASSWORD,
+    );
     const before = await snapshot(db.dataSource);
     const res = await agent[method](path(ids)).send(body(ids));
     expect(res.status).toBe(500);

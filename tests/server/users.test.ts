@@ -23,16 +23,36 @@ describe('user administration', () => {
   it('creates a user (e-mail lower-cased, bcrypt hash stored, never returned) who can then sign in', async () => {
     const res = await admin
       .post('/api/users')
-      .send({ email: 'New.Fitter@Users.Example', displayName: 'New Fitter', role: 'fabricator', password: 'bench-password-1' });
+      .send({
+        email: 'New.Fitter@Users.Example',
+        displayName: 'New Fitter',
+        role: 'fabricator',
+        password: 'bench-password-1',
+      });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ email: 'new.fitter@users.example', role: 'fabricator', active: true, lastSignInAt: null });
+    expect(res.body).toMatchObject({
+      email: 'new.fitter@users.example',
+      role: 'fabricator',
+      active: true,
+      lastSignInAt: null,
+    });
     expect(JSON.stringify(res.body)).not.toMatch(/\$2[aby]\$/);
-    const [row] = await db.dataSource.query(`SELECT password_hash FROM app_user WHERE id = $1`, [res.body.id]);
+    const [row] = await db.dataSource.query(`SELECT password_hash FROM app_user WHERE id = $1`, [
+      res.body.id,
+    ]);
     expect(row.password_hash).toMatch(/^\$2[aby]\$04\$/);
-    await request(app).post('/api/auth/sign-in').send({ email: 'new.fitter@users.example', password: 'bench-password-1' }).expect(200);
+    await request(app)
+      .post('/api/auth/sign-in')
+      .send({ email: 'new.fitter@users.example', password: 'bench-password-1' })
+      .expect(200);
     const dup = await admin
       .post('/api/users')
-      .send({ email: 'NEW.FITTER@users.example', displayName: 'Again', role: 'viewer', password: 'bench-password-1' });
+      .send({
+        email: 'NEW.FITTER@users.example',
+        displayName: 'Again',
+        role: 'viewer',
+        password: 'bench-password-1',
+      });
     expect(dup.status).toBe(409);
     expect(dup.body.error.code).toBe('duplicate');
   });
@@ -61,21 +81,30 @@ describe('user administration', () => {
     expect(await snapshot(db.dataSource)).toBe(before);
   });
 
-  it('resets a password: the old one stops working, the user\'s sessions end, the new one works', async () => {
+  it("resets a password: the old one stops working, the user's sessions end, the new one works", async () => {
     const user = await createUser(db.dataSource, shop, 'detailer');
     const agent = await signedIn(app, user.email, PASSWORD);
     const events = await auditCount(db.dataSource, 'user.reset-password');
-    await admin.post(`/api/users/${user.id}/reset-password`).send({ password: 'fresh-password-22' }).expect(204);
+    await admin
+      .post(`/api/users/${user.id}/reset-password`)
+      .send({ password: 'fresh-password-22' })
+      .expect(204);
     await agent.get('/api/auth/me').expect(401);
     await request(app).post('/api/auth/sign-in').send({ email: user.email, password: PASSWORD }).expect(401);
-    await request(app).post('/api/auth/sign-in').send({ email: user.email, password: 'fresh-password-22' }).expect(200);
+    await request(app)
+      .post('/api/auth/sign-in')
+      .send({ email: user.email, password: 'fresh-password-22' })
+      .expect(200);
     expect(await auditCount(db.dataSource, 'user.reset-password')).toBe(events + 1);
   });
 
   it('an admin resetting their own password stays signed in', async () => {
     const other = await createUser(db.dataSource, shop, 'admin');
     const agent = await signedIn(app, other.email, PASSWORD);
-    await agent.post(`/api/users/${other.id}/reset-password`).send({ password: 'my-own-new-password' }).expect(204);
+    await agent
+      .post(`/api/users/${other.id}/reset-password`)
+      .send({ password: 'my-own-new-password' })
+      .expect(204);
     await agent.get('/api/auth/me').expect(200);
   });
 
@@ -93,8 +122,14 @@ describe('user administration', () => {
     const other = await createShop(db.dataSource, 'Other');
     const otherAdmin = await signedIn(app, other.email('admin'), PASSWORD);
     const email = 'shared.person@twoshops.example';
-    await admin.post('/api/users').send({ email, displayName: 'In Users', role: 'viewer', password: 'password-for-users' }).expect(201);
-    await otherAdmin.post('/api/users').send({ email, displayName: 'In Other', role: 'viewer', password: 'password-for-other' }).expect(201);
+    await admin
+      .post('/api/users')
+      .send({ email, displayName: 'In Users', role: 'viewer', password: 'password-for-users' })
+      .expect(201);
+    await otherAdmin
+      .post('/api/users')
+      .send({ email, displayName: 'In Other', role: 'viewer', password: 'password-for-other' })
+      .expect(201);
     const a = await request(app).post('/api/auth/sign-in').send({ email, password: 'password-for-users' });
     const b = await request(app).post('/api/auth/sign-in').send({ email, password: 'password-for-other' });
     expect(a.body.user.organisation.id).toBe(shop.id);

@@ -98,8 +98,12 @@ export class InitialSchema1764626400000 implements MigrationInterface {
         CHECK ((state = 'draft') = (issued_at IS NULL))
       )`);
     // One working draft and at most one current issued revision per spool.
-    await q.query(`CREATE UNIQUE INDEX spool_revision_one_draft ON spool_revision (spool_id) WHERE state = 'draft'`);
-    await q.query(`CREATE UNIQUE INDEX spool_revision_one_issued ON spool_revision (spool_id) WHERE state = 'issued'`);
+    await q.query(
+      `CREATE UNIQUE INDEX spool_revision_one_draft ON spool_revision (spool_id) WHERE state = 'draft'`,
+    );
+    await q.query(
+      `CREATE UNIQUE INDEX spool_revision_one_issued ON spool_revision (spool_id) WHERE state = 'issued'`,
+    );
     await q.query(`
       ALTER TABLE spool ADD CONSTRAINT spool_current_revision_fk
         FOREIGN KEY (current_revision_id, organisation_id) REFERENCES spool_revision (id, organisation_id)`);

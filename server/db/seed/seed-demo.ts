@@ -50,7 +50,10 @@ async function seedOrganisation(
 ): Promise<void> {
   let org = await m.findOneBy(OrganisationEntity, { slug: demo.slug });
   if (!org) {
-    org = await m.save(OrganisationEntity, m.create(OrganisationEntity, { slug: demo.slug, name: demo.name }));
+    org = await m.save(
+      OrganisationEntity,
+      m.create(OrganisationEntity, { slug: demo.slug, name: demo.name }),
+    );
     report.organisations++;
   }
   const before = { ...report };
@@ -67,13 +70,18 @@ async function seedOrganisation(
     if (u.role === 'admin' && !firstAdminId) firstAdminId = user.id;
   }
   const detailer = demo.users.find((u) => u.role === 'detailer') ?? demo.users[0];
-  const author = detailer ? await m.findOneBy(UserEntity, { organisationId: org.id, email: detailer.email }) : null;
+  const author = detailer
+    ? await m.findOneBy(UserEntity, { organisationId: org.id, email: detailer.email })
+    : null;
 
   for (const { job: jobInput, spools } of demo.jobs) {
     let job = await m
       .getRepository(JobEntity)
       .createQueryBuilder('j')
-      .where('j.organisationId = :org AND lower(j.number) = lower(:number)', { org: org.id, number: jobInput.number })
+      .where('j.organisationId = :org AND lower(j.number) = lower(:number)', {
+        org: org.id,
+        number: jobInput.number,
+      })
       .getOne();
     if (!job) {
       job = await m.save(JobEntity, m.create(JobEntity, { ...jobInput, organisationId: org.id }));
@@ -88,7 +96,12 @@ async function seedOrganisation(
       if (exists || !author) continue;
       const spool = await m.save(
         SpoolEntity,
-        m.create(SpoolEntity, { organisationId: org.id, jobId: job.id, mark: s.mark, lineNumber: s.lineNumber }),
+        m.create(SpoolEntity, {
+          organisationId: org.id,
+          jobId: job.id,
+          mark: s.mark,
+          lineNumber: s.lineNumber,
+        }),
       );
       report.spools++;
       await m.save(
@@ -137,7 +150,9 @@ function loadDesign(spool: DemoSpool, samplesDir: string, report: SeedReport): R
   try {
     const parsed = spoolDesignSchema.safeParse(JSON.parse(readFileSync(file, 'utf8')));
     if (parsed.success) return parsed.data;
-    report.warnings.push(`${spool.mark}: ${spool.sampleFile} is not a valid design (${parsed.error.issues[0]?.message})`);
+    report.warnings.push(
+      `${spool.mark}: ${spool.sampleFile} is not a valid design (${parsed.error.issues[0]?.message})`,
+    );
   } catch (err) {
     report.warnings.push(`${spool.mark}: ${spool.sampleFile} could not be read (${String(err)})`);
   }

@@ -40,7 +40,11 @@ export class AuthService {
   async recordSignIn(actor: SessionActor): Promise<Date> {
     return this.ds.transaction(async (m) => {
       const at = new Date();
-      await m.update(UserEntity, { id: actor.id, organisationId: actor.organisationId }, { lastSignInAt: at });
+      await m.update(
+        UserEntity,
+        { id: actor.id, organisationId: actor.organisationId },
+        { lastSignInAt: at },
+      );
       await this.audit(m, {
         organisationId: actor.organisationId,
         actorId: actor.id,

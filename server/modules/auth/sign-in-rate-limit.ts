@@ -11,7 +11,11 @@ export interface SignInLimits {
 
 function tooMany(windowMs: number): AppError {
   const minutes = Math.ceil(windowMs / 60_000);
-  return new AppError(429, 'too_many_attempts', `Too many sign-in attempts. Try again in ${minutes} minutes.`);
+  return new AppError(
+    429,
+    'too_many_attempts',
+    `Too many sign-in attempts. Try again in ${minutes} minutes.`,
+  );
 }
 
 /**

@@ -39,7 +39,10 @@ export class JobService {
       });
     }
     const [rows, total] = await applySortAndPage(qb, 'j', SORT_COLUMNS, query).getManyAndCount();
-    const counts = await this.spoolCounts(this.ds.manager, rows.map((r) => r.id));
+    const counts = await this.spoolCounts(
+      this.ds.manager,
+      rows.map((r) => r.id),
+    );
     return {
       items: rows.map((r) => toJobDto(r, counts.get(r.id) ?? 0)),
       total,
@@ -54,7 +57,10 @@ export class JobService {
 
   async create(actor: SessionActor, input: JobCreate): Promise<Job> {
     return this.ds.transaction(async (m) => {
-      const row = await m.save(JobEntity, m.create(JobEntity, { ...input, organisationId: actor.organisationId }));
+      const row = await m.save(
+        JobEntity,
+        m.create(JobEntity, { ...input, organisationId: actor.organisationId }),
+      );
       await this.audit(m, {
         organisationId: actor.organisationId,
         actorId: actor.id,
@@ -74,9 +80,7 @@ export class JobService {
       if (row.status === 'archived') throw unprocessable('This job is archived and can no longer be edited');
       const { version: _version, ...fields } = input;
       const changed = Object.fromEntries(
-        Object.entries(fields).filter(
-          ([k, v]) => v !== undefined && !sameJson(v, row[k as keyof JobRow]),
-        ),
+        Object.entries(fields).filter(([k, v]) => v !== undefined && !sameJson(v, row[k as keyof JobRow])),
       ) as Partial<JobRow>;
       if (Object.keys(changed).length === 0) return this.dto(m, row);
       await m.update(
@@ -100,7 +104,8 @@ export class JobService {
   async archive(actor: SessionActor, id: string, input: Archive): Promise<Job> {
     return this.ds.transaction(async (m) => {
       const row = await this.find(m, actor, id, true);
-      if (input.version !== undefined && input.version !== row.version) throw staleVersion(await this.dto(m, row));
+      if (input.version !== undefined && input.version !== row.version)
+        throw staleVersion(await this.dto(m, row));
       if (row.status === 'archived') return this.dto(m, row);
       await m.update(
         JobEntity,

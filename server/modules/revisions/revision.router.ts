@@ -1,7 +1,11 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { idParamsSchema } from '../../../shared/schemas/id.schema';
-import { draftIssueSchema, draftSaveSchema, revisionParamsSchema } from '../../../shared/schemas/revision.schema';
+import {
+  draftIssueSchema,
+  draftSaveSchema,
+  revisionParamsSchema,
+} from '../../../shared/schemas/revision.schema';
 import { ANY_ROLE, requireRole } from '../../common/auth.middleware';
 import { actorOf } from '../../common/session-actor';
 import { inputOf, validate } from '../../common/validate.middleware';

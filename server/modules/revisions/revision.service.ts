@@ -1,6 +1,11 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { QueryDeepPartialEntity } from 'typeorm';
-import type { DraftIssue, DraftSave, Revision, RevisionSummary } from '../../../shared/schemas/revision.schema';
+import type {
+  DraftIssue,
+  DraftSave,
+  Revision,
+  RevisionSummary,
+} from '../../../shared/schemas/revision.schema';
 import { notFound, staleVersion } from '../../common/app-error';
 import type { SessionActor } from '../../common/session-actor';
 import type { AuditWriter } from '../audit/audit.service';
@@ -126,7 +131,8 @@ export class RevisionService {
     return this.ds.transaction(async (m) => {
       const spool = await this.spools.find(m, actor, spoolId, true);
       const draft = await this.lockDraft(m, actor, spool.id);
-      if (input.version !== undefined && input.version !== draft.version) throw staleVersion(toRevisionDto(draft));
+      if (input.version !== undefined && input.version !== draft.version)
+        throw staleVersion(toRevisionDto(draft));
       assertNotArchived(spool);
       assertValidDesign(draft.design);
       const now = new Date();
@@ -168,7 +174,11 @@ export class RevisionService {
     });
   }
 
-  private async lockDraft(m: EntityManager, actor: SessionActor, spoolId: string): Promise<RevisionWithAuthor> {
+  private async lockDraft(
+    m: EntityManager,
+    actor: SessionActor,
+    spoolId: string,
+  ): Promise<RevisionWithAuthor> {
     const locked = await m
       .getRepository(SpoolRevisionEntity)
       .createQueryBuilder('r')
@@ -205,6 +215,9 @@ export class RevisionService {
   }
 }
 
-function withAuthors(result: { entities: SpoolRevisionRow[]; raw: Array<Record<string, unknown>> }): RevisionWithAuthor[] {
+function withAuthors(result: {
+  entities: SpoolRevisionRow[];
+  raw: Array<Record<string, unknown>>;
+}): RevisionWithAuthor[] {
   return result.entities.map((e, i) => ({ ...e, authorName: String(result.raw[i]?.author_name ?? '') }));
 }

@@ -19,7 +19,12 @@ export function toSpoolDto(
         ? { id: current.id, letter: current.letter, issuedAt: current.issuedAt.toISOString() }
         : null,
     draft: draft
-      ? { id: draft.id, letter: draft.letter, version: draft.version, updatedAt: draft.updatedAt.toISOString() }
+      ? {
+          id: draft.id,
+          letter: draft.letter,
+          version: draft.version,
+          updatedAt: draft.updatedAt.toISOString(),
+        }
       : null,
     archivedAt: row.archivedAt ? row.archivedAt.toISOString() : null,
     createdAt: row.createdAt.toISOString(),

@@ -44,7 +44,12 @@ export class SpoolService {
     if (query.status) qb.andWhere('s.status = :status', { status: query.status });
     if (query.q) qb.andWhere('(s.mark ILIKE :q OR s.lineNumber ILIKE :q)', { q: likePattern(query.q) });
     const [rows, total] = await applySortAndPage(qb, 's', SORT_COLUMNS, query).getManyAndCount();
-    return { items: await this.dtos(this.ds.manager, rows), total, page: query.page, pageSize: query.pageSize };
+    return {
+      items: await this.dtos(this.ds.manager, rows),
+      total,
+      page: query.page,
+      pageSize: query.pageSize,
+    };
   }
 
   async get(actor: SessionActor, id: string): Promise<Spool> {
@@ -84,7 +89,8 @@ export class SpoolService {
       assertNotArchived(row);
       const changes: Partial<SpoolRow> = {};
       if (input.mark !== undefined && input.mark !== row.mark) changes.mark = input.mark;
-      if (input.lineNumber !== undefined && input.lineNumber !== row.lineNumber) changes.lineNumber = input.lineNumber;
+      if (input.lineNumber !== undefined && input.lineNumber !== row.lineNumber)
+        changes.lineNumber = input.lineNumber;
       if (Object.keys(changes).length === 0) return this.dto(m, row);
       await this.write(m, actor, row, changes, 'spool.update', {
         changes,
@@ -121,7 +127,8 @@ export class SpoolService {
   async archive(actor: SessionActor, id: string, input: Archive): Promise<Spool> {
     return this.ds.transaction(async (m) => {
       const row = await this.find(m, actor, id, true);
-      if (input.version !== undefined && input.version !== row.version) throw staleVersion(await this.dto(m, row));
+      if (input.version !== undefined && input.version !== row.version)
+        throw staleVersion(await this.dto(m, row));
       if (row.archivedAt) return this.dto(m, row);
       await this.write(m, actor, row, { archivedAt: new Date() }, 'spool.archive', { mark: row.mark });
       return this.dto(m, await this.find(m, actor, row.id));
@@ -172,7 +179,15 @@ export class SpoolService {
   private async dtos(m: EntityManager, rows: SpoolRow[]): Promise<Spool[]> {
     if (rows.length === 0) return [];
     const revisions = await m.getRepository(SpoolRevisionEntity).find({
-      select: { id: true, spoolId: true, letter: true, state: true, issuedAt: true, updatedAt: true, version: true },
+      select: {
+        id: true,
+        spoolId: true,
+        letter: true,
+        state: true,
+        issuedAt: true,
+        updatedAt: true,
+        version: true,
+      },
       where: [
         { spoolId: In(rows.map((r) => r.id)), state: 'draft' },
         { spoolId: In(rows.map((r) => r.id)), state: 'issued' },

@@ -72,7 +72,8 @@ export class UserService {
   async update(actor: SessionActor, id: string, input: UserUpdate): Promise<User> {
     return this.ds.transaction(async (m) => {
       const row = await this.find(m, actor, id, true);
-      if (input.version !== undefined && input.version !== row.version) throw staleVersion(this.dto(actor, row));
+      if (input.version !== undefined && input.version !== row.version)
+        throw staleVersion(this.dto(actor, row));
       if (row.id === actor.id && input.active === false) {
         throw unprocessable('You cannot deactivate your own account');
       }
@@ -80,7 +81,8 @@ export class UserService {
         throw unprocessable('You cannot remove your own admin role; ask another admin');
       }
       const changes: Partial<UserRow> = {};
-      if (input.displayName !== undefined && input.displayName !== row.displayName) changes.displayName = input.displayName;
+      if (input.displayName !== undefined && input.displayName !== row.displayName)
+        changes.displayName = input.displayName;
       if (input.role !== undefined && input.role !== row.role) changes.role = input.role;
       if (input.active !== undefined && input.active !== row.active) changes.active = input.active;
       if (Object.keys(changes).length === 0) return this.dto(actor, row);
@@ -104,7 +106,12 @@ export class UserService {
   }
 
   /** Sets a new password and ends the user's sessions (except `keepSessionId`, the caller's own). */
-  async resetPassword(actor: SessionActor, id: string, password: string, keepSessionId?: string): Promise<void> {
+  async resetPassword(
+    actor: SessionActor,
+    id: string,
+    password: string,
+    keepSessionId?: string,
+  ): Promise<void> {
     const passwordHash = await hashPassword(password, this.bcryptCost);
     await this.ds.transaction(async (m) => {
       const row = await this.find(m, actor, id, true);

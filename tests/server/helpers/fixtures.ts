@@ -4,7 +4,10 @@ import type { Role } from '../../../shared/schemas/role.schema';
 import type { SpoolStatus } from '../../../shared/schemas/spool-status.schema';
 import { JobEntity, type JobRow } from '../../../server/modules/jobs/job.entity';
 import { OrganisationEntity } from '../../../server/modules/organisations/organisation.entity';
-import { SpoolRevisionEntity, type SpoolRevisionRow } from '../../../server/modules/revisions/spool-revision.entity';
+import {
+  SpoolRevisionEntity,
+  type SpoolRevisionRow,
+} from '../../../server/modules/revisions/spool-revision.entity';
 import { starterDesign } from '../../../server/modules/revisions/starter-design';
 import { SpoolEntity, type SpoolRow } from '../../../server/modules/spools/spool.entity';
 import { UserEntity, type UserRow } from '../../../server/modules/users/user.entity';

@@ -31,9 +31,19 @@ async function jobAndSpool(ds: DataSource, shop: Shop, status?: SpoolStatus) {
 
 /** Every route of the API (sign-in and sign-out are covered in auth.test.ts). */
 export const ROUTES: RouteCase[] = [
-  { name: 'GET /api/health', method: 'get', allowed: 'public', prepare: async () => ({ path: '/api/health' }) },
+  {
+    name: 'GET /api/health',
+    method: 'get',
+    allowed: 'public',
+    prepare: async () => ({ path: '/api/health' }),
+  },
   { name: 'GET /api/auth/me', method: 'get', allowed: ALL, prepare: async () => ({ path: '/api/auth/me' }) },
-  { name: 'GET /api/users', method: 'get', allowed: ['admin'], prepare: async () => ({ path: '/api/users' }) },
+  {
+    name: 'GET /api/users',
+    method: 'get',
+    allowed: ['admin'],
+    prepare: async () => ({ path: '/api/users' }),
+  },
   {
     name: 'POST /api/users',
     method: 'post',
@@ -79,7 +89,12 @@ export const ROUTES: RouteCase[] = [
     allowed: WRITERS,
     prepare: async () => ({
       path: '/api/jobs',
-      body: { number: `N-${Math.random().toString(36).slice(2, 10)}`, title: 'Title', client: 'Client', spec: SPEC },
+      body: {
+        number: `N-${Math.random().toString(36).slice(2, 10)}`,
+        title: 'Title',
+        client: 'Client',
+        spec: SPEC,
+      },
     }),
   },
   {
@@ -153,7 +168,9 @@ export const ROUTES: RouteCase[] = [
     name: 'GET /api/spools/:id/revisions',
     method: 'get',
     allowed: ALL,
-    prepare: async (ds, shop) => ({ path: `/api/spools/${(await jobAndSpool(ds, shop)).spool.id}/revisions` }),
+    prepare: async (ds, shop) => ({
+      path: `/api/spools/${(await jobAndSpool(ds, shop)).spool.id}/revisions`,
+    }),
   },
   {
     name: 'GET /api/spools/:id/revisions/:revisionId',
@@ -176,7 +193,10 @@ export const ROUTES: RouteCase[] = [
     allowed: WRITERS,
     prepare: async (ds, shop) => {
       const { spool, draft } = await jobAndSpool(ds, shop);
-      return { path: `/api/spools/${spool.id}/draft`, body: { design: draft.design, note: 'Edited', version: 1 } };
+      return {
+        path: `/api/spools/${spool.id}/draft`,
+        body: { design: draft.design, note: 'Edited', version: 1 },
+      };
     },
   },
   {

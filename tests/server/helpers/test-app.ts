@@ -27,9 +27,14 @@ export function testApp(
 }
 
 /** A supertest agent signed in as `email` (keeps the session cookie). */
-export async function signedIn(app: Express, email: string, password: string): Promise<ReturnType<typeof request.agent>> {
+export async function signedIn(
+  app: Express,
+  email: string,
+  password: string,
+): Promise<ReturnType<typeof request.agent>> {
   const agent = request.agent(app);
   const res = await agent.post('/api/auth/sign-in').send({ email, password });
-  if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  if (res.status !== 200)
+    throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
   return agent;
 }
