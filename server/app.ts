@@ -8,6 +8,8 @@ import type { DataSource } from 'typeorm';
 import { AppError } from './common/app-error';
 import { apiNotFound, errorMiddleware } from './common/error.middleware';
 import type { ServerConfig } from './config/env';
+import { AuditQueryService } from './modules/audit/audit-query.service';
+import { auditRouter } from './modules/audit/audit.router';
 import { writeAuditEvent, type AuditWriter } from './modules/audit/audit.service';
 import { authRouter } from './modules/auth/auth.router';
 import { AuthService } from './modules/auth/auth.service';
@@ -100,6 +102,7 @@ export function createApp(options: AppOptions): Express {
     authRouter({ passport, auth: authService, users, limits: config.signIn, cookieName: SESSION_COOKIE }),
   );
   api.use('/users', userRouter(users));
+  api.use('/audit-events', auditRouter(new AuditQueryService(ds)));
   api.use('/jobs', jobRouter(jobs));
   api.use('/jobs/:jobId/spools', jobSpoolRouter(spools));
   api.use('/spools', spoolRouter(spools));

@@ -134,7 +134,7 @@ export class SheetsService {
         issues: parsed.error.issues,
       });
     }
-    return { design: parsed.data, result: computeSpool(parsed.data, { jobDefaults: jobSpecOverrides(job) }) };
+    return { design: parsed.data, result: computeSpool(parsed.data, { jobSpec: jobSpecOverrides(job), trusted: true }) };
   }
 
   private async openSpoolIds(actor: SessionActor, jobId: string): Promise<string[]> {

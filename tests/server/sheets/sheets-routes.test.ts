@@ -33,7 +33,7 @@ async function sampleSpool(target: Shop, opts: { issued?: boolean; units?: 'mm' 
   const job = await createJob(ds, target, { units: opts.units ?? 'mm' });
   const { spool, draft } = await createSpool(ds, target, job, { mark: 'CW-201-S03' });
   const design = loadSample('cw-201-s03-return-14in.json');
-  await ds.getRepository(SpoolRevisionEntity).update({ id: draft.id }, { design: design as unknown as Record<string, unknown> });
+  await ds.getRepository(SpoolRevisionEntity).update({ id: draft.id }, { design: design as never });
   let issuedId: string | null = null;
   if (opts.issued) {
     // Revision A issued (with a different design note), then a new draft B.
@@ -142,8 +142,9 @@ describe('GET /api/jobs/:id/saw-list.pdf', () => {
   });
 });
 
-function binary(res: NodeJS.ReadableStream & { setEncoding(e: string): void }, callback: (err: Error | null, body: Buffer) => void): void {
+// supertest buffers unknown types as text; collect the raw PDF bytes instead.
+const binary = ((res: NodeJS.ReadableStream, callback: (err: Error | null, body: Buffer) => void): void => {
   const chunks: Buffer[] = [];
   res.on('data', (c: Buffer) => chunks.push(c));
   res.on('end', () => callback(null, Buffer.concat(chunks)));
-}
+}) as unknown as Parameters<request.Test['parse']>[0];

@@ -24,22 +24,37 @@ export function drawDimension(
   text: string,
   style: DimensionStyle,
 ): { centre: PagePoint; width: number; height: number } {
+  return drawDimensionBetween(doc, a, b, { x: a.x + offset.x, y: a.y + offset.y }, { x: b.x + offset.x, y: b.y + offset.y }, text, style);
+}
+
+/**
+ * Like {@link drawDimension}, with the dimension line's ends given: for overall dimensions,
+ * whose extension lines start at different distances from the line.
+ */
+export function drawDimensionBetween(
+  doc: PDFKit.PDFDocument,
+  a: PagePoint,
+  b: PagePoint,
+  a2: PagePoint,
+  b2: PagePoint,
+  text: string,
+  style: DimensionStyle,
+): { centre: PagePoint; width: number; height: number } {
   const color = style.color ?? INK.dim;
-  const a2 = { x: a.x + offset.x, y: a.y + offset.y };
-  const b2 = { x: b.x + offset.x, y: b.y + offset.y };
-  const olen = Math.hypot(offset.x, offset.y) || 1;
-  const ou = { x: offset.x / olen, y: offset.y / olen };
   const gap = 2.5; // extension lines start just off the object
   const over = 3; // and run past the dimension line
+  const extension = (from: PagePoint, to: PagePoint) => {
+    const l = Math.hypot(to.x - from.x, to.y - from.y);
+    if (l < 1e-6) return;
+    const u = { x: (to.x - from.x) / l, y: (to.y - from.y) / l };
+    doc.moveTo(from.x + u.x * gap, from.y + u.y * gap).lineTo(to.x + u.x * over, to.y + u.y * over);
+  };
 
   doc.save();
   doc.lineWidth(0.45).strokeColor(color);
-  doc
-    .moveTo(a.x + ou.x * gap, a.y + ou.y * gap)
-    .lineTo(a2.x + ou.x * over, a2.y + ou.y * over)
-    .moveTo(b.x + ou.x * gap, b.y + ou.y * gap)
-    .lineTo(b2.x + ou.x * over, b2.y + ou.y * over)
-    .stroke();
+  extension(a, a2);
+  extension(b, b2);
+  doc.stroke();
   doc.lineWidth(0.6).moveTo(a2.x, a2.y).lineTo(b2.x, b2.y).stroke();
   const len = Math.hypot(b2.x - a2.x, b2.y - a2.y);
   if (len > 1e-6) {

@@ -36,11 +36,11 @@ export function flangeDetailsBlock(
       const titleH = size * 1.25 + 3;
       const cellW = Math.max(mm(46), Math.min(mm(60), area.w / Math.max(1, Math.floor(area.w / mm(50)))));
       const perRow = Math.max(1, Math.floor(area.w / cellW));
-      const cellH = cellW * 0.62 + size * 7.2;
+      const cellH = cellW * 0.62 + size * 8.4;
       const rowsFit = Math.floor((area.h - titleH) / cellH);
       if (rowsFit < 1 && !fresh) return { used: 0, rest: this };
       const count = Math.min(flanges.length - start, Math.max(1, rowsFit) * perRow);
-      const title = start > 0 ? 'FLANGE BOLT HOLES (CONTINUED)' : 'FLANGE BOLT HOLES — SEEN FACING EACH FLANGE FACE';
+      const title = start > 0 ? 'FLANGE BOLT HOLES (CONTINUED)' : 'FLANGE BOLT HOLES — SEEN FACING THE FACE, ANGLES CLOCKWISE (CW)';
       drawText(doc, title, area.x, area.y, { font: 'cond-bold', size: size * 1.2, color: INK.black, width: area.w });
       for (let k = 0; k < count; k += 1) {
         const f = flanges[start + k]!;
@@ -71,7 +71,7 @@ function drawFlangeCell(doc: PDFKit.PDFDocument, cell: Rect, f: FlangeOrientatio
   // The view: reference up, holes clockwise as seen facing the face.
   const r = cell.w * 0.27;
   const cx = cell.x + cell.w / 2;
-  const cy = cell.y + pad + size * 2.6 + r + 6;
+  const cy = cell.y + pad + size * 2.7 + r + size + 8;
   const ref = f.reference === 'plant-vertical' ? 'UP' : 'N';
   doc.lineWidth(0.5).strokeColor(INK.muted).dash(3, { space: 2 });
   doc.moveTo(cx - r - 6, cy).lineTo(cx + r + 6, cy).moveTo(cx, cy - r - 6).lineTo(cx, cy + r + 6).stroke();
@@ -117,15 +117,15 @@ function drawFlangeCell(doc: PDFKit.PDFDocument, cell: Rect, f: FlangeOrientatio
     });
     ty += size * 1.15;
   };
-  line(`${n || '?'} holes on ${f.boltCircleMm === null ? '?' : formatLength(f.boltCircleMm, units)} bolt circle`);
-  line(`Hole 1 at ${fmtDeg(f.rotationDeg)} clockwise from ${ref === 'UP' ? 'plant vertical' : 'plant north'}`, { bold: true });
-  if (f.straddles) line('Holes straddle the centrelines (two-holed)');
-  else line(f.mustTwoHole ? 'HOLE ON A CENTRELINE — must be two-holed' : 'Holes on the centrelines (as designed)', { warn: f.mustTwoHole });
+  line(`${n || '?'} holes, BC ${f.boltCircleMm === null ? '?' : formatLength(f.boltCircleMm, units)}`);
+  line(`Hole 1: ${fmtDeg(f.rotationDeg)} CW from ${ref}`, { bold: true });
+  if (f.straddles) line('Straddles centrelines (two-holed)');
+  else line(f.mustTwoHole ? 'ON CENTRELINE: must two-hole' : 'On centrelines, as designed', { warn: f.mustTwoHole, bold: f.mustTwoHole });
   if (f.correction) {
     const c = f.correction;
-    line(`Rotate ${fmtDeg(c.rotateDeg)} ${c.sense}${c.atBoltCircleMm === null ? '' : ` (${formatLength(c.atBoltCircleMm, units)} at BC)`}`, { bold: true, warn: true });
+    line(`Turn ${fmtDeg(c.rotateDeg)} ${c.sense === 'clockwise' ? 'CW' : 'CCW'}${c.atBoltCircleMm === null ? '' : ` = ${formatLength(c.atBoltCircleMm, units)} at BC`}`, { bold: true, warn: true });
   }
-  if (f.bendPlaneRotationDeg !== null) line(`${fmtDeg(f.bendPlaneRotationDeg)} from the bend plane of ${f.bendPlaneNodeId ?? 'the nearest bend'}`);
+  if (f.bendPlaneRotationDeg !== null) line(`${fmtDeg(f.bendPlaneRotationDeg)} from bend plane ${f.bendPlaneNodeId ?? ''}`.trim());
   doc.restore();
 }
 
@@ -150,7 +150,7 @@ export function flangePairsBlock(result: SpoolResult, tags: Map<string, string>,
         : '';
       return {
         cells: [
-          `${name(p.a)} ↔ ${name(p.b)}`,
+          `${name(p.a)} to ${name(p.b)}`,
           p.errorDeg === null ? '—' : fmtDeg(p.errorDeg),
           p.errorMm === null ? '—' : formatLength(p.errorMm, units),
           formatLength(p.toleranceMm, units),

@@ -1,19 +1,20 @@
 import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import type { Vec3 } from '../../../../shared/schemas/spool-design-primitives.schema';
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
-import { drawDimension, type PagePoint } from './dimension-line';
+import { drawDimension, drawDimensionBetween, type PagePoint } from './dimension-line';
 import { fitIsoViewport, isoProjectDirection, type IsoViewport } from './iso-projection';
 import { drawComponentSymbol, PIPE_WIDTH, SMALL_BORE_WIDTH, strokePolyline } from './iso-symbols';
 import { LabelPlacer } from './label-placer';
 import type { Rect } from './page-setup';
+import { SHORT_CAUTION } from './sheet-cautions';
 import { INK, type TypeSizes } from './sheet-style';
 import { drawText } from './text';
 import { distance, dot, normalise, perpendicularAxis, sub } from './vec3-math';
 
 /** One dimension the drawing printed: what it measures, its value and the text shown. */
 export interface PrintedDimension {
-  kind: 'run' | 'centre-to-face' | 'overall';
-  /** Run id, open-end node id, or the plant axis for overall dimensions. */
+  kind: 'run' | 'centre-to-face' | 'overall' | 'offset';
+  /** Run id, open-end node id, the plant axis for overall dimensions, `<runId>.<axis>` for an offset leg. */
   ref: string;
   mm: number;
   text: string;
@@ -45,8 +46,9 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
     ...result.pieces.flatMap((p) => [p.start, p.end]),
   ];
   // Leave room round the spool for dimensions (inner ring) and overall dimensions (outer ring).
-  const margin = Math.min(area.w, area.h) * 0.16 + 30;
-  const view = fitIsoViewport(points, area, margin);
+  // Run dimensions sit 20–50 pt off the pipe; overall dimensions a ring beyond everything.
+  const ring = 62;
+  const view = fitIsoViewport(points, area, ring + sizes.dimension * 2 + 10);
   const placer = new LabelPlacer(area);
   const centroid = pageCentroid(view, points);
 
@@ -54,13 +56,15 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
   doc.rect(area.x, area.y, area.w, area.h).clip();
 
   // North arrow and axes, top-left, reserved first so nothing lands on it.
-  const arrowBox = drawNorthArrow(doc, { x: area.x + 34, y: area.y + 40 }, sizes);
+  const arrowBox = drawNorthArrow(doc, { x: area.x + 56, y: area.y + 44 }, sizes);
   placer.reserve(arrowBox);
-  drawText(doc, 'ISOMETRIC — NOT TO SCALE. Work to the figures, never measure the drawing.', area.x + 4, area.y + area.h - sizes.small - 3, {
+  drawText(doc, 'ISOMETRIC — NOT TO SCALE. Work to the figures, never measure the drawing.', area.x + 4, area.y + area.h - 2 * sizes.small - 5, {
+    font: 'body-semibold',
     size: sizes.small,
     color: INK.muted,
     width: area.w - 8,
   });
+  drawText(doc, SHORT_CAUTION, area.x + 4, area.y + area.h - sizes.small - 3, { size: sizes.small, color: INK.muted, width: area.w - 8 });
 
   // Pipe pieces, then fitting bodies over them.
   for (const piece of result.pieces) {
@@ -78,46 +82,91 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
     const length = run.workPointDistanceMm;
     if (!(length > 0.05)) continue;
     const text = formatLength(length, units);
-    placeDimension(doc, view, placer, run.start, run.end, text, dimSize, centroid, [22, 40, 58]);
+    placeDimension(doc, view, placer, run.start, run.end, text, dimSize, centroid, [20, 35, 50]);
     printed.push({ kind: 'run', ref: run.runId, mm: length, text });
+    printed.push(...drawOffsetLegs(doc, view, placer, run.runId, run.start, run.end, units, sizes.small, centroid));
   }
   // Centre-to-face at open ends not already dimensioned by their run.
   for (const end of result.openEnds) {
     if (end.centreToFaceMm === null || !end.fromNodeId) continue;
     const from = result.workPoints.find((w) => w.nodeId === end.fromNodeId)?.position;
     if (!from) continue;
+    // Usually the end's own run already dimensions it (in either direction).
     const same = result.runs.some(
-      (r) => Math.abs(r.workPointDistanceMm - (end.centreToFaceMm ?? 0)) < 0.05 && distance(r.end, end.facePoint) < 0.5 && distance(r.start, from) < 0.5,
+      (r) =>
+        Math.abs(r.workPointDistanceMm - (end.centreToFaceMm ?? 0)) < 0.05 &&
+        ((distance(r.end, end.facePoint) < 0.5 && distance(r.start, from) < 0.5) || (distance(r.start, end.facePoint) < 0.5 && distance(r.end, from) < 0.5)),
     );
     if (same) {
       printed.push({ kind: 'centre-to-face', ref: end.nodeId, mm: end.centreToFaceMm, text: formatLength(end.centreToFaceMm, units) });
       continue;
     }
     const text = formatLength(end.centreToFaceMm, units);
-    placeDimension(doc, view, placer, from, end.facePoint, text, dimSize, centroid, [30, 48, 66]);
+    placeDimension(doc, view, placer, from, end.facePoint, text, dimSize, centroid, [28, 42, 56]);
     printed.push({ kind: 'centre-to-face', ref: end.nodeId, mm: end.centreToFaceMm, text });
   }
-  // Overall dimensions along each plant axis, outside everything else.
+  // Overall dimensions along each plant axis, from the extreme points, outside everything else.
   if (result.overall) {
     const box = result.overall.workPointBox;
-    const ring = margin * 0.8;
+    const pagePoints = points.map((p) => ({ p, q: view.project(p) }));
     for (const axis of ['x', 'y', 'z'] as const) {
       const size = box.sizeMm[axis];
       if (!(size > 1)) continue;
-      const a = { ...box.min };
-      const b = { ...box.min, [axis]: box.max[axis] };
-      // Offset down (for horizontal axes) or sideways (vertical), clear of the drawing.
-      const offsetAxis = axis === 'z' ? AXES.y : AXES.z;
-      const sign = axis === 'z' ? 1 : -1;
-      const pa = view.project(a);
-      const po = isoProjectDirection({ x: offsetAxis.x * sign, y: offsetAxis.y * sign, z: offsetAxis.z * sign });
-      const ol = Math.hypot(po.u, po.v) || 1;
-      const off = { x: (po.u / ol) * ring, y: (-po.v / ol) * ring };
+      const min = Math.min(...pagePoints.map((pp) => pp.p[axis]));
+      const max = Math.max(...pagePoints.map((pp) => pp.p[axis]));
+      // Every point at either extreme may anchor the dimension; the one nearest the line is used.
+      const loSet = pagePoints.filter((pp) => pp.p[axis] <= min + 0.5);
+      const hiSet = pagePoints.filter((pp) => pp.p[axis] >= max - 0.5);
+      // Extension lines run along another plant axis, on whichever side keeps them shortest.
+      const d = unit2(isoProjectDirection(AXES[axis]));
+      const others = (['x', 'y', 'z'] as const).filter((k) => k !== axis);
+      let best: { a: PagePoint; b: PagePoint; a2: PagePoint; b2: PagePoint; cost: number } | null = null;
+      for (const k of others) {
+        for (const sign of [1, -1]) {
+          const o = unit2(isoProjectDirection({ x: AXES[k].x * sign, y: AXES[k].y * sign, z: AXES[k].z * sign }));
+          let n = { x: -d.y, y: d.x };
+          if (n.x * o.x + n.y * o.y < 0) n = { x: -n.x, y: -n.y };
+          const along = n.x * o.x + n.y * o.y;
+          if (along < 0.3) continue; // nearly parallel to the dimension line
+          // Outside the whole spool if that fits on the page, else just outside the two anchor points.
+          const outside = Math.max(...pagePoints.map((pp) => pp.q.x * n.x + pp.q.y * n.y)) + ring;
+          for (const [wide, penalty] of [[true, 0], [false, 300]] as const) {
+            const foot = (q: PagePoint, level: number) => {
+              const u = (level - (q.x * n.x + q.y * n.y)) / along;
+              return { x: q.x + o.x * u, y: q.y + o.y * u, u };
+            };
+            const pick = (set: typeof pagePoints, level: number) =>
+              set.map((pp) => ({ q: pp.q, f: foot(pp.q, level) })).reduce((a, b) => (b.f.u < a.f.u ? b : a));
+            let la = pick(loSet, outside);
+            let lb = pick(hiSet, outside);
+            if (!wide) {
+              const level = Math.max(la.q.x * n.x + la.q.y * n.y, lb.q.x * n.x + lb.q.y * n.y) + ring * 0.6;
+              la = pick(loSet, level);
+              lb = pick(hiSet, level);
+            }
+            const fa = la.f;
+            const fb = lb.f;
+            const inside = [fa, fb].every((f) => f.x > area.x + 10 && f.x < area.x + area.w - 10 && f.y > area.y + 10 && f.y < area.y + area.h - 20);
+            // Short extension lines; a small preference for below (the usual place).
+            const cost = fa.u + fb.u + penalty + (inside ? 0 : 10_000) + (k === 'z' && sign === -1 ? -20 : 0);
+            if (!best || cost < best.cost) best = { a: la.q, b: lb.q, a2: fa, b2: fb, cost };
+          }
+        }
+      }
+      // One that cannot sit on the page is left to the overall line printed under the drawing.
+      if (!best || best.cost >= 10_000) continue;
       const text = `overall ${AXIS_NAME[axis]} ${formatLength(size, units)}`;
-      const drawn = drawDimension(doc, pa, view.project(b), clampOffset(off, pa, area), text, { size: dimSize, color: INK.black });
+      const drawn = drawDimensionBetween(doc, best.a, best.b, best.a2, best.b2, text, { size: dimSize, color: INK.black });
       placer.reserve(boxAround(drawn.centre, drawn.width, drawn.height));
       printed.push({ kind: 'overall', ref: axis, mm: size, text: formatLength(size, units) });
     }
+    const parts = (['x', 'y', 'z'] as const).map((k) => `${AXIS_NAME[k]} ${formatLength(box.sizeMm[k], units)}`);
+    drawText(doc, `Overall, work points and faces: ${parts.join('  ·  ')}`, area.x + 4, area.y + area.h - 3 * sizes.small - 9, {
+      font: 'body-bold',
+      size: sizes.small,
+      color: INK.black,
+      width: area.w - 8,
+    });
   }
 
   // Piece marks at each piece's middle.
@@ -126,6 +175,14 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
     const b = view.project(piece.end);
     const mid = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
     tagLabel(doc, placer, mid, piece.mark, sizes.small, 'rect', normalTo(a, b));
+  }
+  // Small-bore connections: which one, and its clock position round the header.
+  for (const c of result.components) {
+    if (c.shape.type !== 'branch-connection' && c.shape.type !== 'set-on-branch') continue;
+    const tip = c.ends.reduce((a, b) => (distance(b.point, c.position) > distance(a.point, c.position) ? b : a), c.ends[0]!);
+    const angle = c.shape.orientationDeg;
+    const text = `${c.nodeId} NPS ${c.shape.branchNps}${angle === null ? '' : ` at ${Number(angle.toFixed(1))}°`}`;
+    tagLabel(doc, placer, view.project(c.shape.type === 'branch-connection' ? tip.point : c.position), text, sizes.small, 'rect', null);
   }
   // Flange tags.
   for (const f of result.flanges) {
@@ -152,13 +209,56 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
     doc.circle(p.x, p.y, 5).stroke();
     doc.moveTo(p.x - 7, p.y).lineTo(p.x + 7, p.y).moveTo(p.x, p.y - 7).lineTo(p.x, p.y + 7).stroke();
     doc.restore();
-    const spot = placer.place([boxAround({ x: p.x + 34, y: p.y + 12 }, 50, sizes.small + 2), boxAround({ x: p.x - 34, y: p.y - 12 }, 50, sizes.small + 2)]);
-    const lx = spot === 0 ? p.x + 9 : p.x - 59;
-    const ly = spot === 0 ? p.y + 6 : p.y - 18;
+    const labelW = 50;
+    const spots = [
+      { x: p.x + 9, y: p.y + 6 },
+      { x: p.x - 9 - labelW, y: p.y - 6 - sizes.small },
+      { x: p.x + 9, y: p.y - 6 - sizes.small },
+      { x: p.x - 9 - labelW, y: p.y + 6 },
+      { x: p.x - labelW / 2, y: p.y + 10 },
+      { x: p.x - labelW / 2, y: p.y - 10 - sizes.small },
+    ];
+    const chosen = spots[placer.place(spots.map((q) => ({ x: q.x, y: q.y, w: labelW, h: sizes.small + 2 })))]!;
+    const lx = chosen.x;
+    const ly = chosen.y;
     drawText(doc, 'CoG (empty)', lx, ly, { font: 'cond-bold', size: sizes.small, color: INK.warn, width: 50 });
   }
   doc.restore();
   return printed;
+}
+
+/**
+ * A run that is not along a plant axis (a rolling or simple offset) gets its legs drawn dashed
+ * along the plant axes, each dimensioned: the set, roll and run a fitter lays out with a square.
+ */
+function drawOffsetLegs(
+  doc: PDFKit.PDFDocument,
+  view: IsoViewport,
+  placer: LabelPlacer,
+  runId: string,
+  start: Vec3,
+  end: Vec3,
+  units: LengthUnits,
+  size: number,
+  centroid: PagePoint,
+): PrintedDimension[] {
+  const delta = sub(end, start);
+  const axes = (['x', 'y', 'z'] as const).filter((k) => Math.abs(delta[k]) > 0.5);
+  if (axes.length < 2) return [];
+  const out: PrintedDimension[] = [];
+  let p = start;
+  for (const k of axes) {
+    const q = { ...p, [k]: p[k] + delta[k] };
+    const a = view.project(p);
+    const b = view.project(q);
+    doc.save().lineWidth(0.6).strokeColor(INK.muted).dash(3, { space: 2 }).moveTo(a.x, a.y).lineTo(b.x, b.y).stroke().undash().restore();
+    const mmValue = Math.abs(delta[k]);
+    const text = formatLength(mmValue, units);
+    placeDimension(doc, view, placer, p, q, text, size, centroid, [12, 24], INK.muted);
+    out.push({ kind: 'offset', ref: `${runId}.${k}`, mm: mmValue, text });
+    p = q;
+  }
+  return out;
 }
 
 function placeDimension(
@@ -171,6 +271,7 @@ function placeDimension(
   size: number,
   centroid: PagePoint,
   distances: number[],
+  color?: string,
 ): void {
   const a = view.project(from);
   const b = view.project(to);
@@ -197,7 +298,7 @@ function placeDimension(
   candidates.sort((p, q) => awayScore(q.offset, mid, centroid) - awayScore(p.offset, mid, centroid));
   const stable = candidates.map((c, i) => ({ ...c, i })).sort((p, q) => distances.indexOf(closest(distances, p.offset)) - distances.indexOf(closest(distances, q.offset)) || p.i - q.i);
   const chosen = stable[placer.place(stable.map((c) => c.box))]!;
-  drawDimension(doc, a, b, chosen.offset, text, { size });
+  drawDimension(doc, a, b, chosen.offset, text, { size, color });
 }
 
 function closest(distances: number[], off: PagePoint): number {
@@ -220,8 +321,9 @@ function boxAround(c: PagePoint, w: number, h: number): Rect {
   return { x: c.x - w / 2, y: c.y - h / 2, w, h };
 }
 
-function clampOffset(off: PagePoint, _p: PagePoint, _area: Rect): PagePoint {
-  return off;
+function unit2(p: { u: number; v: number }): PagePoint {
+  const l = Math.hypot(p.u, p.v) || 1;
+  return { x: p.u / l, y: -p.v / l };
 }
 
 function normalTo(a: PagePoint, b: PagePoint): PagePoint {

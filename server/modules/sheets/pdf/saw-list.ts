@@ -153,7 +153,7 @@ export async function renderSawList(input: SawListInput): Promise<{ pdf: Buffer;
           piece.stockLengthMm === null ? '—' : formatLength(piece.stockLengthMm, units),
           `${piece.ends[0].label} / ${piece.ends[1].label}`,
           piece.heat ?? '',
-          '☐',
+          '',
         ],
         emphasis: uncut ? 'warn' : undefined,
       };
@@ -174,7 +174,7 @@ export async function renderSawList(input: SawListInput): Promise<{ pdf: Buffer;
           { header: 'Stock', weight: 1.25, align: 'right' },
           { header: 'Ends', weight: 2.2 },
           { header: 'Heat', weight: 0.8 },
-          { header: 'Cut', weight: 0.4, align: 'center' },
+          { header: 'Cut', weight: 0.4, align: 'center', checkbox: true },
         ],
         rows,
         footnote: `Longest first. ${g.count} pieces, ${formatLength(g.totalCutMm, units)} cut, ${formatLength(g.totalStockMm, units)} of stock including kerf.`,

@@ -11,4 +11,4 @@ export const SHEET_CAUTIONS: readonly string[] = [
 
 /** One-line form for pages with little room (templates, saw list footers). */
 export const SHORT_CAUTION =
-  'Hot work needs a permit, PPE and fume control. Figures support, not replace, the applicable code and the engineer of record.';
+  'Weights and CoG are estimates: lifts planned by a competent person. Hot work needs a permit, PPE and fume control. Figures support, not replace, the applicable code and the engineer of record.';

@@ -10,6 +10,10 @@ export interface TableColumn {
   weight: number;
   align?: 'left' | 'center' | 'right';
   font?: FontRole;
+  /** Let long values wrap onto more lines (descriptions) instead of being shortened. */
+  wrap?: boolean;
+  /** Draw an empty tick box in each body row (the cell text is ignored). */
+  checkbox?: boolean;
 }
 
 export interface TableRow {
@@ -35,20 +39,38 @@ export function tableBlock(spec: TableSpec, startRow = 0): FlowBlock {
       const rowH = size * 1.5;
       const headerH = rowH;
       const footH = spec.footnote ? measureWrapped(doc, spec.footnote, area.w, { size: size * 0.85 }) + 3 : 0;
-      const remainingRows = spec.rows.length - startRow;
-      const available = area.h - titleH - headerH;
-      let fit = Math.floor(available / rowH);
-      if (fit >= remainingRows && available - remainingRows * rowH < footH) {
-        // Rows fit but the footnote would not: keep the last row with its footnote.
-        fit = remainingRows - 1;
-      }
-      if (fit < Math.min(2, remainingRows) && !fresh) return { used: 0, rest: this };
-      fit = Math.max(fresh ? 1 : 0, Math.min(fit, remainingRows));
-      if (remainingRows === 0) fit = 0;
-
       const totalWeight = spec.columns.reduce((s, c) => s + c.weight, 0);
       const widths = spec.columns.map((c) => (c.weight / totalWeight) * area.w);
       const pad = 2.5;
+      const lineH = size * 1.18;
+      // Row heights: one line, or as many as the longest wrapped cell needs.
+      const rowHeight = (row: TableRow): number => {
+        let lines = 1;
+        spec.columns.forEach((c, i) => {
+          if (!c.wrap) return;
+          const h = measureWrapped(doc, row.cells[i] ?? '', widths[i]! - 2 * pad, { size, font: c.font });
+          lines = Math.max(lines, Math.round(h / doc.currentLineHeight()));
+        });
+        return lines === 1 ? rowH : rowH + (lines - 1) * lineH;
+      };
+      const remainingRows = spec.rows.length - startRow;
+      const available = area.h - titleH - headerH;
+      let fit = 0;
+      let rowsHeight = 0;
+      for (let r = startRow; r < spec.rows.length; r += 1) {
+        const h = rowHeight(spec.rows[r]!);
+        if (rowsHeight + h > available) break;
+        rowsHeight += h;
+        fit += 1;
+      }
+      if (fit >= remainingRows && available - rowsHeight < footH) fit = remainingRows - 1; // keep the last row with its footnote
+      if (!fresh && fit < remainingRows) {
+        // Short tables move whole; long ones never leave one or two rows behind or ahead.
+        if (remainingRows <= 6 || fit < 3) return { used: 0, rest: this };
+        if (remainingRows - fit < 2) fit = remainingRows - 2;
+      }
+      fit = Math.max(fresh ? 1 : 0, Math.min(fit, remainingRows));
+      if (remainingRows === 0) fit = 0;
 
       let y = area.y;
       const title = startRow > 0 ? `${spec.title} (continued)` : spec.title;
@@ -72,26 +94,37 @@ export function tableBlock(spec: TableSpec, startRow = 0): FlowBlock {
 
       for (let r = startRow; r < startRow + fit; r += 1) {
         const row = spec.rows[r]!;
-        if (row.emphasis === 'warn') doc.rect(area.x, y, area.w, rowH).fill(INK.warnFill);
-        else if (row.emphasis === 'group') doc.rect(area.x, y, area.w, rowH).fill(INK.fill);
-        else if ((r - startRow) % 2 === 1) doc.rect(area.x, y, area.w, rowH).fill('#f7f7f7');
+        const thisH = rowHeight(row);
+        if (row.emphasis === 'warn') doc.rect(area.x, y, area.w, thisH).fill(INK.warnFill);
+        else if (row.emphasis === 'group') doc.rect(area.x, y, area.w, thisH).fill(INK.fill);
+        else if ((r - startRow) % 2 === 1) doc.rect(area.x, y, area.w, thisH).fill('#f7f7f7');
         x = area.x;
         spec.columns.forEach((c, i) => {
           const bold = row.emphasis === 'total' || row.emphasis === 'group';
           const font: FontRole = bold ? (c.font === 'mono' ? 'mono-bold' : 'body-bold') : (c.font ?? 'body');
+          if (c.checkbox) {
+            if (!row.emphasis) {
+              const b = size * 0.85;
+              doc.lineWidth(0.7).strokeColor(INK.black).rect(x + (widths[i]! - b) / 2, y + (rowH - b) / 2, b, b).stroke();
+            }
+            x += widths[i]!;
+            return;
+          }
           drawText(doc, row.cells[i] ?? '', x + pad, y + (rowH - size) / 2, {
             font,
             size,
             color: row.emphasis === 'warn' ? INK.warn : INK.text,
             width: widths[i]! - 2 * pad,
             align: c.align ?? 'left',
+            wrap: c.wrap ?? false,
+            lineGap: c.wrap ? lineH - size * 1.2 : 0,
           });
           x += widths[i]!;
         });
         if (row.emphasis === 'total') {
           doc.lineWidth(0.8).strokeColor(INK.black).moveTo(area.x, y).lineTo(area.x + area.w, y).stroke();
         }
-        y += rowH;
+        y += thisH;
       }
       doc.lineWidth(0.6).strokeColor(INK.rule).rect(area.x, area.y + titleH, area.w, y - area.y - titleH).stroke();
       doc.restore();

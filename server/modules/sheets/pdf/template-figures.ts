@@ -118,14 +118,14 @@ export function templateFigures(result: SpoolResult, units: LengthUnits): { figu
       const maxX = Math.max(...hole.map((p) => p.x));
       const minY = Math.min(...hole.map((p) => p.y));
       const maxY = Math.max(...hole.map((p) => p.y));
-      const extra = 25;
+      const extra = 10;
       figures.push({
         kind: 'header-hole',
         title: `Header hole ${c.nodeId} · ${label}`,
         nodeId: c.nodeId,
-        widthMm: maxX - minX + 2 * extra + 2 * MARGIN_MM,
-        heightMm: maxY - minY + 2 * extra + 2 * MARGIN_MM,
-        originMm: { x: MARGIN_MM + extra - minX, y: MARGIN_MM + extra - minY },
+        widthMm: maxX - minX + 2 * extra + MARGIN_MM,
+        heightMm: maxY - minY + 2 * extra + MARGIN_MM,
+        originMm: { x: MARGIN_MM / 2 + extra - minX, y: MARGIN_MM / 2 + extra - minY },
         outline: hole,
         closed: true,
         stations: [],

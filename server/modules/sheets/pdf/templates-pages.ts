@@ -26,58 +26,115 @@ export function drawTemplatePages(
 ): TemplatePagesReport {
   const report: TemplatePagesReport = { pages: [] };
   const sizes = typeSizes(sheet.setup);
+  const labelH = sizes.small + 4;
+  const gapMm = 6;
   for (const figure of figures) {
     const probe = sheet.contentArea();
     const stripH = headerStripHeight(sheet.doc, figure, probe.w, sizes.body, units);
-    const figArea: Rect = { x: probe.x + 4, y: probe.y + topInset + stripH, w: probe.w - 8, h: probe.h - topInset - stripH - 4 };
-    const tileW = figArea.w / mm(1);
-    const tileH = figArea.h / mm(1);
-    const nx = Math.max(1, Math.ceil((figure.widthMm - OVERLAP_MM) / (tileW - OVERLAP_MM)));
-    const ny = Math.max(1, Math.ceil((figure.heightMm - OVERLAP_MM) / (tileH - OVERLAP_MM)));
-    for (let row = 0; row < ny; row += 1) {
-      for (let col = 0; col < nx; col += 1) {
-        const tileName = `${String.fromCharCode(65 + row)}${col + 1}`;
-        const area = sheet.addPage(`Template 1:1 · ${figure.kind} · tile ${tileName} of ${nx * ny}`);
-        const doc = sheet.doc;
-        // Header strip: title, tile, instructions, scale bar.
-        let y = area.y + topInset + 4;
-        drawText(doc, `${figure.title} — FULL SIZE 1:1`, area.x + 6, y, { font: 'cond-bold', size: sizes.heading * 1.2, width: area.w * 0.6 });
-        drawText(doc, `Tile ${tileName} of ${nx * ny} (${ny} row${ny > 1 ? 's' : ''} × ${nx} column${nx > 1 ? 's' : ''}) · overlap ${formatLength(OVERLAP_MM, units)} at joins`, area.x + 6, y + sizes.heading * 1.5, {
-          font: 'body-semibold',
-          size: sizes.body,
-          width: area.w * 0.6,
-        });
-        const instrY = y + sizes.heading * 1.5 + sizes.body * 1.6;
-        const text = [...figure.instructions, ...figure.facts, SHORT_CAUTION].join('  ');
-        drawText(doc, text, area.x + 6, instrY, { size: sizes.small, width: area.w * 0.6 - 6, wrap: true, lineGap: 0.5 });
-        const bar = drawScaleBar(doc, area.x + area.w * 0.62, y, sizes.body, units === 'ft-in');
-        report.pages.push({ pageIndex: sheet.pageCount - 1, figure: figure.title, tile: tileName, scaleBars: bar.bars });
-        y = figArea.y;
+    const usable: Rect = { x: probe.x + 4, y: probe.y + topInset + stripH, w: probe.w - 8, h: probe.h - topInset - stripH - 4 };
+    const areaW = usable.w / mm(1);
+    const areaH = (usable.h - labelH) / mm(1);
+    const tiles = tileFigure(figure, areaW, areaH);
+    const total = tiles.length;
+    // Stack as many tiles on a page as fit one under the other: a long, shallow wrap template
+    // becomes strips on one sheet instead of one strip per sheet.
+    let index = 0;
+    while (index < tiles.length) {
+      const onPage: Tile[] = [];
+      let used = 0;
+      while (index < tiles.length) {
+        const need = mm(tiles[index]!.h) + labelH + (onPage.length > 0 ? mm(gapMm) : 0);
+        if (onPage.length > 0 && used + need > usable.h) break;
+        onPage.push(tiles[index]!);
+        used += need;
+        index += 1;
+      }
+      const names = onPage.map((t) => t.name).join(', ');
+      const area = sheet.addPage(`Template 1:1 · ${figure.kind} · tile${onPage.length > 1 ? 's' : ''} ${names} of ${total}`);
+      const doc = sheet.doc;
+      const y = area.y + topInset + 4;
+      drawText(doc, `${figure.title} — FULL SIZE 1:1`, area.x + 6, y, { font: 'cond-bold', size: sizes.heading * 1.2, width: area.w * 0.6 });
+      drawText(
+        doc,
+        total > 1 ? `${total} tiles, overlap ${formatLength(OVERLAP_MM, units)} at each join: cut each tile out, lay them edge over dashed line, tape.` : 'One piece: cut it out along its border.',
+        area.x + 6,
+        y + sizes.heading * 1.5,
+        { font: 'body-semibold', size: sizes.body, width: area.w * 0.6 },
+      );
+      const text = [...figure.instructions, ...figure.facts, SHORT_CAUTION].join('  ');
+      drawText(doc, text, area.x + 6, y + sizes.heading * 1.5 + sizes.body * 1.6, { size: sizes.small, width: area.w * 0.6 - 6, wrap: true, lineGap: 0.5 });
+      const bar = drawScaleBar(doc, area.x + area.w * 0.62, y, sizes.body, units === 'ft-in');
+      report.pages.push({ pageIndex: sheet.pageCount - 1, figure: figure.title, tile: names, scaleBars: bar.bars });
 
-        // The tile: figure space [ox, ox + tileW] × [oy, oy + tileH] mm.
-        const ox = col * (tileW - OVERLAP_MM);
-        const oy = row * (tileH - OVERLAP_MM);
-        drawTile(doc, figArea, figure, ox, oy, units, sizes.small);
-        // Join marks in the overlap zones.
-        doc.save().lineWidth(0.5).strokeColor(INK.muted).dash(4, { space: 3 });
-        if (col > 0) doc.moveTo(figArea.x + mm(OVERLAP_MM), figArea.y).lineTo(figArea.x + mm(OVERLAP_MM), figArea.y + figArea.h).stroke();
-        if (col < nx - 1) doc.moveTo(figArea.x + figArea.w - mm(OVERLAP_MM), figArea.y).lineTo(figArea.x + figArea.w - mm(OVERLAP_MM), figArea.y + figArea.h).stroke();
-        if (row > 0) doc.moveTo(figArea.x, figArea.y + mm(OVERLAP_MM)).lineTo(figArea.x + figArea.w, figArea.y + mm(OVERLAP_MM)).stroke();
-        if (row < ny - 1) doc.moveTo(figArea.x, figArea.y + figArea.h - mm(OVERLAP_MM)).lineTo(figArea.x + figArea.w, figArea.y + figArea.h - mm(OVERLAP_MM)).stroke();
-        doc.undash().restore();
-        const joinStyle = { font: 'cond-semibold' as const, size: sizes.small, color: INK.muted };
-        if (col > 0) drawText(doc, `◄ lay over tile ${String.fromCharCode(65 + row)}${col} to this dashed line`, figArea.x + mm(OVERLAP_MM) + 3, figArea.y + 3, joinStyle);
-        if (col < nx - 1) {
-          const label = `tile ${String.fromCharCode(65 + row)}${col + 2} overlaps from here ►`;
-          doc.font('cond-semibold').fontSize(sizes.small);
-          drawText(doc, label, figArea.x + figArea.w - mm(OVERLAP_MM) - doc.widthOfString(label) - 3, figArea.y + figArea.h - sizes.small - 3, joinStyle);
-        }
-        if (row > 0) drawText(doc, `▲ lay over tile ${String.fromCharCode(64 + row)}${col + 1} to this dashed line`, figArea.x + 3, figArea.y + mm(OVERLAP_MM) + 3, joinStyle);
-        doc.save().lineWidth(0.6).strokeColor(INK.rule).rect(figArea.x, figArea.y, figArea.w, figArea.h).stroke().restore();
+      let ty = usable.y;
+      for (const tile of onPage) {
+        drawText(doc, `Tile ${tile.name} of ${total}`, usable.x, ty, { font: 'cond-bold', size: sizes.small, color: INK.black });
+        const box: Rect = { x: usable.x, y: ty + labelH, w: mm(tile.w), h: mm(tile.h) };
+        drawTile(doc, box, figure, tile.x, tile.y, units, sizes.small);
+        drawJoinMarks(doc, box, tile, sizes.small);
+        ty += labelH + mm(tile.h) + mm(gapMm);
       }
     }
   }
   return report;
+}
+
+/** One piece of a template as printed: its window on the figure, mm, and its neighbours. */
+interface Tile {
+  name: string;
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+  left: string | null;
+  right: string | null;
+  above: string | null;
+  below: string | null;
+}
+
+/** Cuts a figure into windows no larger than the printable area, overlapping by 10 mm. */
+export function tileFigure(figure: Pick<TemplateFigure, 'widthMm' | 'heightMm'>, areaW: number, areaH: number): Tile[] {
+  const nx = figure.widthMm <= areaW ? 1 : Math.ceil((figure.widthMm - OVERLAP_MM) / (areaW - OVERLAP_MM));
+  const ny = figure.heightMm <= areaH ? 1 : Math.ceil((figure.heightMm - OVERLAP_MM) / (areaH - OVERLAP_MM));
+  const name = (r: number, c: number) => `${String.fromCharCode(65 + r)}${c + 1}`;
+  const tiles: Tile[] = [];
+  for (let r = 0; r < ny; r += 1) {
+    for (let c = 0; c < nx; c += 1) {
+      const x = c * (areaW - OVERLAP_MM);
+      const y = r * (areaH - OVERLAP_MM);
+      tiles.push({
+        name: name(r, c),
+        x,
+        y,
+        w: Math.min(areaW, figure.widthMm - x),
+        h: Math.min(areaH, figure.heightMm - y),
+        left: c > 0 ? name(r, c - 1) : null,
+        right: c < nx - 1 ? name(r, c + 1) : null,
+        above: r > 0 ? name(r - 1, c) : null,
+        below: r < ny - 1 ? name(r + 1, c) : null,
+      });
+    }
+  }
+  return tiles;
+}
+
+function drawJoinMarks(doc: PDFKit.PDFDocument, box: Rect, tile: Tile, size: number): void {
+  const ov = mm(OVERLAP_MM);
+  doc.save().lineWidth(0.5).strokeColor(INK.muted).dash(4, { space: 3 });
+  if (tile.left) doc.moveTo(box.x + ov, box.y).lineTo(box.x + ov, box.y + box.h).stroke();
+  if (tile.right) doc.moveTo(box.x + box.w - ov, box.y).lineTo(box.x + box.w - ov, box.y + box.h).stroke();
+  if (tile.above) doc.moveTo(box.x, box.y + ov).lineTo(box.x + box.w, box.y + ov).stroke();
+  if (tile.below) doc.moveTo(box.x, box.y + box.h - ov).lineTo(box.x + box.w, box.y + box.h - ov).stroke();
+  doc.undash().restore();
+  const style = { font: 'cond-semibold' as const, size, color: INK.muted };
+  const rightText = (t: string, yy: number) => {
+    doc.font('cond-semibold').fontSize(size);
+    drawText(doc, t, box.x + box.w - doc.widthOfString(t) - 3, yy, style);
+  };
+  if (tile.left) rightText(`joins ${tile.left} on the left`, box.y - size - 4);
+  if (tile.right) rightText(`Lay ${tile.right} over this end, up to the dashed line`, box.y + box.h + 2);
+  if (tile.above) drawText(doc, `Lay ${tile.above} over this edge, up to the dashed line`, box.x + 3, box.y + ov + 2, style);
+  doc.save().lineWidth(0.6).strokeColor(INK.rule).rect(box.x, box.y, box.w, box.h).stroke().restore();
 }
 
 function headerStripHeight(doc: PDFKit.PDFDocument, figure: TemplateFigure, width: number, size: number, units: LengthUnits): number {
@@ -104,7 +161,9 @@ function drawTile(doc: PDFKit.PDFDocument, area: Rect, figure: TemplateFigure, o
     const a = P(guide.from);
     const b = P(guide.to);
     doc.lineWidth(0.8).strokeColor(INK.black).moveTo(a.x, a.y).lineTo(b.x, b.y).stroke();
-    drawText(doc, guide.label, Math.min(a.x, b.x) + 4, Math.min(a.y, b.y) - size - 2, { font: 'cond-semibold', size, color: INK.black });
+    // Over a station row the label goes above the station numbers.
+    const lift = figure.stations.length > 0 ? 2 * size + 5 : size + 2;
+    drawText(doc, guide.label, Math.min(a.x, b.x) + 4, Math.min(a.y, b.y) - lift, { font: 'cond-semibold', size, color: INK.black });
   }
   if (figure.wrapEndMm !== null) {
     const a = P({ x: figure.wrapEndMm, y: -6 });

@@ -35,7 +35,7 @@ export function weightsBlock(result: SpoolResult, units: LengthUnits, datum: Wei
     { cells: ['Water-filled (hydrotest)', formatMass(w.waterFilledKg, units), ...cogCells(w.centreOfGravityFilled)] },
   ];
   if (w.notIncluded.length > 0) {
-    rows.push({ cells: [`Not weighed: ${w.notIncluded.join(', ')}`, '', '', '', ''], emphasis: 'warn' });
+    rows.push({ cells: [`Not weighed: ${w.notIncluded.length} item${w.notIncluded.length > 1 ? 's' : ''} (see warnings)`, '', '', '', ''], emphasis: 'warn' });
   }
   return tableBlock({
     title: 'Weight and centre of gravity (estimate)',

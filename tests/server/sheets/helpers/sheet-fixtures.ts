@@ -10,6 +10,8 @@ export const SAMPLE_FILES = [
   'cw-201-s03-return-14in.json',
   'cw-305-s01-rolling-offset-10in.json',
   'cw-410-s02-header-6in.json',
+  'cw-118-s02-reducer-drop-10x6.json',
+  'cw-522-s04-tee-mitre-10in.json',
 ] as const;
 
 /** Reads and validates a sample design. */
