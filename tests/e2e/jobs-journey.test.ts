@@ -2,7 +2,18 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startAppServer, type RunningApp } from './helpers/app-server';
 import { launchBrowser, type TestBrowser } from './helpers/browser';
 import { saveScreenshot } from './helpers/screenshots';
+import { DEMO_ORGANISATIONS } from '../../server/db/seed/demo-data';
 import { DEMO_USERS, signInAs, signOut } from './helpers/sign-in';
+
+// The demo job as the seed defines it, so the test follows the demo data rather than copying it.
+const demoJob = DEMO_ORGANISATIONS[0]!.jobs[0]!;
+const DEMO_JOB = demoJob.job.number;
+const demoMarks = demoJob.spools.map((s) => s.mark).sort();
+const FIRST_MARK = demoMarks[0]!;
+const LAST_MARK = demoMarks[demoMarks.length - 1]!;
+// Two different demo spools: one the viewer reads, one the detailer issues.
+const READ_MARK = demoMarks[1]!;
+const ISSUE_MARK = demoMarks[2]!;
 
 /**
  * The first journeys a shop makes: a detailer sets up a job and its first spool;
@@ -23,7 +34,7 @@ describe('jobs and spools in the browser', () => {
   });
 
   it('a detailer signs in, creates a job, adds a spool and sees it in the job’s table', { timeout: 90_000 }, async () => {
-    const page = await browser.context.newPage();
+    const page = await browser.freshPage();
     const problems: string[] = [];
     page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
     page.on('console', (m) => {
@@ -44,7 +55,7 @@ describe('jobs and spools in the browser', () => {
 
     await signInAs(page, DEMO_USERS.detailer);
     await page.getByRole('heading', { name: 'Jobs', exact: true }).waitFor();
-    await page.getByRole('link', { name: 'HFD-B-CW' }).waitFor();
+    await page.getByRole('link', { name: DEMO_JOB }).waitFor();
     await saveScreenshot(page, '03-jobs-detailer');
 
     // New job: the dialog validates with the shared schema before anything is sent.
@@ -131,8 +142,7 @@ describe('jobs and spools in the browser', () => {
   });
 
   it('a viewer sees the jobs and spools but no button that changes them', { timeout: 60_000 }, async () => {
-    await browser.context.clearCookies();
-    const page = await browser.context.newPage();
+    const page = await browser.freshPage();
     // Signed out, a deep link goes to sign-in and comes back afterwards.
     await page.goto(`${app.baseUrl}/users`);
     await page.waitForURL(/\/sign-in\?next=%2Fusers/);
@@ -141,13 +151,13 @@ describe('jobs and spools in the browser', () => {
     await page.getByRole('heading', { name: 'Admins only' }).waitFor();
 
     await page.getByRole('link', { name: 'Jobs', exact: true }).click();
-    await page.getByRole('link', { name: 'HFD-B-CW' }).waitFor();
+    await page.getByRole('link', { name: DEMO_JOB }).waitFor();
     await expect(page.getByRole('button', { name: 'New job' }).count()).resolves.toBe(0);
     await expect(page.getByRole('link', { name: 'Users' }).count()).resolves.toBe(0);
     await saveScreenshot(page, '10-jobs-viewer');
 
-    await page.getByRole('link', { name: 'HFD-B-CW' }).click();
-    await page.getByRole('row').filter({ hasText: 'CW-201-S03' }).waitFor();
+    await page.getByRole('link', { name: DEMO_JOB }).click();
+    await page.getByRole('row').filter({ hasText: READ_MARK }).waitFor();
     await expect(page.getByRole('button', { name: 'New spool' }).count()).resolves.toBe(0);
     await expect(page.getByRole('button', { name: 'Edit job' }).count()).resolves.toBe(0);
     await saveScreenshot(page, '11-job-viewer');
@@ -155,11 +165,11 @@ describe('jobs and spools in the browser', () => {
     // Sorting by mark, descending, reorders the rows and is kept in the URL.
     await page.getByRole('button', { name: 'Spool mark' }).click();
     await page.waitForURL(/sort=mark&order=desc/);
-    await page.locator('tbody tr').first().filter({ hasText: 'CW-512-S01' }).waitFor();
-    await expect(page.locator('tbody tr').last().locator('td').first().textContent()).resolves.toBe('CW-201-S03');
+    await page.locator('tbody tr').first().filter({ hasText: LAST_MARK }).waitFor();
+    await expect(page.locator('tbody tr').last().locator('td').first().textContent()).resolves.toBe(FIRST_MARK);
 
-    await page.getByRole('link', { name: 'CW-201-S03' }).click();
-    await page.getByRole('heading', { name: 'CW-201-S03' }).waitFor();
+    await page.getByRole('link', { name: READ_MARK }).click();
+    await page.getByRole('heading', { name: READ_MARK }).waitFor();
     await page.getByRole('heading', { name: 'Revisions' }).waitFor();
     for (const name of [/Edit mark/, /Archive/, /Start/, /Issue revision/, /Mark /]) {
       await expect(page.getByRole('button', { name }).count()).resolves.toBe(0);
@@ -170,12 +180,11 @@ describe('jobs and spools in the browser', () => {
   });
 
   it('a detailer issues a revision and a fabricator records the cut', { timeout: 60_000 }, async () => {
-    await browser.context.clearCookies();
-    const page = await browser.context.newPage();
+    const page = await browser.freshPage();
     await page.goto(`${app.baseUrl}/`);
     await signInAs(page, DEMO_USERS.detailer);
-    await page.getByRole('link', { name: 'HFD-B-CW' }).click();
-    await page.getByRole('link', { name: 'CW-410-S02' }).click();
+    await page.getByRole('link', { name: DEMO_JOB }).click();
+    await page.getByRole('link', { name: ISSUE_MARK }).click();
     await page.getByRole('button', { name: 'Issue revision A' }).click();
     const dialog = page.getByRole('dialog', { name: /Issue revision A/ });
     await dialog.getByLabel(/What changed/).fill('Issued for fabrication');
@@ -190,13 +199,13 @@ describe('jobs and spools in the browser', () => {
 
     await page.goto(spoolUrl);
     await signInAs(page, DEMO_USERS.fabricator);
-    await page.getByRole('heading', { name: 'CW-410-S02' }).waitFor();
+    await page.getByRole('heading', { name: ISSUE_MARK }).waitFor();
     // A fabricator records shop progress only: no design or archive controls.
     await expect(page.getByRole('button', { name: /Issue revision|Start|Edit mark|Archive/ }).count()).resolves.toBe(0);
     await page.getByText('Loading the editor…').waitFor({ state: 'detached' });
     await saveScreenshot(page, '18-spool-fabricator');
     await page.getByRole('button', { name: 'Mark cut' }).click();
-    const confirm = page.getByRole('dialog', { name: 'Record CW-410-S02 as Cut?' });
+    const confirm = page.getByRole('dialog', { name: `Record ${ISSUE_MARK} as Cut?` });
     await saveScreenshot(page, '18b-confirm-cut');
     await confirm.getByRole('button', { name: 'Mark cut' }).click();
     await confirm.waitFor({ state: 'hidden' });
@@ -207,8 +216,7 @@ describe('jobs and spools in the browser', () => {
   });
 
   it('an admin manages users, and the job reads well at tablet width', { timeout: 60_000 }, async () => {
-    await browser.context.clearCookies();
-    const page = await browser.context.newPage();
+    const page = await browser.freshPage();
     await page.goto(`${app.baseUrl}/sign-in`);
     await signInAs(page, DEMO_USERS.admin);
     await page.getByRole('link', { name: 'Users' }).click();
@@ -217,10 +225,10 @@ describe('jobs and spools in the browser', () => {
 
     await page.setViewportSize({ width: 820, height: 1180 });
     await page.getByRole('link', { name: 'Jobs', exact: true }).click();
-    await page.getByRole('link', { name: 'HFD-B-CW' }).click();
-    await page.getByRole('row').filter({ hasText: 'CW-201-S03' }).waitFor();
+    await page.getByRole('link', { name: DEMO_JOB }).click();
+    await page.getByRole('row').filter({ hasText: READ_MARK }).waitFor();
     await saveScreenshot(page, '14-job-tablet');
-    await page.getByRole('link', { name: 'CW-201-S03' }).click();
+    await page.getByRole('link', { name: READ_MARK }).click();
     await page.getByRole('heading', { name: 'Revisions' }).waitFor();
     await saveScreenshot(page, '15-spool-admin-tablet');
 

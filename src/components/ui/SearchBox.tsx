@@ -11,7 +11,12 @@ interface SearchBoxProps {
 export function SearchBox({ label, value, onChange, placeholder }: SearchBoxProps) {
   const id = useId();
   const [text, setText] = useState(value);
-  useEffect(() => setText(value), [value]);
+  // The URL changed the value (back button, a link): show it instead of the stale text.
+  const [shown, setShown] = useState(value);
+  if (value !== shown) {
+    setShown(value);
+    setText(value);
+  }
   useEffect(() => {
     if (text === value) return;
     const t = window.setTimeout(() => onChange(text.trim()), 300);

@@ -1,11 +1,11 @@
 import { existsSync } from 'node:fs';
+import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { createApp } from '../../../server/app';
-import { loadConfig } from '../../../server/config/env';
-import { createDataSource } from '../../../server/db/data-source';
 import { seedDemo } from '../../../server/db/seed/seed-demo';
-import { createThrowawayDatabase } from './e2e-database';
+import { createTestDatabase } from '../../server/helpers/test-db';
+import { testConfig } from '../../server/helpers/test-app';
 
 const ROOT = path.resolve(import.meta.dirname, '../../..');
 const CLIENT_DIR = path.join(ROOT, 'dist');
@@ -24,30 +24,26 @@ export async function startAppServer(): Promise<RunningApp> {
   if (!existsSync(path.join(CLIENT_DIR, 'index.html'))) {
     throw new Error('dist/ has no built client: run `npx vite build` first (npm test does)');
   }
-  const db = await createThrowawayDatabase();
-  const ds = createDataSource(db.url, { poolSize: 5 });
+  const db = await createTestDatabase();
+  let server: Server;
   try {
-    await ds.initialize();
-    await ds.runMigrations({ transaction: 'each' });
-    await seedDemo(ds, { samplesDir: path.join(ROOT, 'samples'), bcryptCost: 4 });
+    await seedDemo(db.dataSource, { samplesDir: path.join(ROOT, 'samples'), bcryptCost: 4 });
+    const app = createApp({ dataSource: db.dataSource, config: testConfig(db.url), clientDir: CLIENT_DIR });
+    server = await new Promise<Server>((resolve, reject) => {
+      const s = app.listen(0, '127.0.0.1', () => resolve(s));
+      s.on('error', reject);
+    });
   } catch (error) {
-    if (ds.isInitialized) await ds.destroy();
     await db.drop();
     throw error;
   }
-  const config = loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: db.url, BCRYPT_COST: '4' });
-  const app = createApp({ dataSource: ds, config, clientDir: CLIENT_DIR });
-  const server = await new Promise<import('node:http').Server>((resolve, reject) => {
-    const s = app.listen(0, '127.0.0.1', () => resolve(s));
-    s.on('error', reject);
-  });
-  const { port } = server.address() as AddressInfo;
+  const listening = server;
+  const { port } = listening.address() as AddressInfo;
   return {
     baseUrl: `http://127.0.0.1:${port}`,
     stop: async () => {
-      server.closeAllConnections();
-      await new Promise<void>((resolve) => server.close(() => resolve()));
-      await ds.destroy();
+      listening.closeAllConnections();
+      await new Promise<void>((resolve) => listening.close(() => resolve()));
       await db.drop();
     },
   };

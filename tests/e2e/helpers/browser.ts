@@ -1,7 +1,7 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { chromium, type BrowserContext } from 'playwright-core';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
 /** Debian's Chromium; never a downloaded browser build. */
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
@@ -9,6 +9,11 @@ export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 /** A headless Chromium with a fresh profile; `close` also deletes the profile folder. */
 export interface TestBrowser {
   context: BrowserContext;
+  /**
+   * A new page with nobody signed in. Closes every other page first: an open page
+   * that refetches would set the (rolling) session cookie again after clearing.
+   */
+  freshPage: () => Promise<Page>;
   close: () => Promise<void>;
 }
 
@@ -33,6 +38,11 @@ export async function launchBrowser(viewport = { width: 1280, height: 860 }): Pr
     });
     return {
       context,
+      freshPage: async () => {
+        await Promise.all(context.pages().map((p) => p.close()));
+        await context.clearCookies();
+        return context.newPage();
+      },
       close: async () => {
         try {
           await context.close();

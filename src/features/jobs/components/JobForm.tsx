@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, type ReactNode } from 'react';
-import { useForm } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import { jobCreateSchema, type Job, type JobCreate, type JobCreateInput } from '../../../../shared/schemas/job.schema';
 import { Button } from '../../../components/ui/Button';
 import { InlineError } from '../../../components/ui/ErrorState';
@@ -81,7 +81,7 @@ export function JobForm({ job, submitLabel, busy, error, onSubmit, onCancel, not
     register,
     handleSubmit,
     setError,
-    watch,
+    control,
     reset,
     formState: { errors, dirtyFields },
   } = useForm({ resolver: zodResolver(jobCreateSchema), defaultValues: job ? valuesOf(job) : newJobDefaults });
@@ -100,7 +100,10 @@ export function JobForm({ job, submitLabel, busy, error, onSubmit, onCancel, not
     }
   }, [error, setError]);
 
-  const units = watch('units') ?? 'mm';
+  const [units, rootGapMm, sawKerfMm, minPieceLengthMm] = useWatch({
+    control,
+    name: ['units', 'spec.rootGapMm', 'spec.sawKerfMm', 'spec.minPieceLengthMm'],
+  });
   const inUnits = (mm: unknown) =>
     units === 'ft-in' && typeof mm === 'number' && Number.isFinite(mm) ? `≈ ${formatLength(mm, 'ft-in')}` : undefined;
   const placedOnField = issuesOf(error).some((i) => (FIELDS as readonly string[]).includes(i.path.join('.')));
@@ -139,7 +142,7 @@ export function JobForm({ job, submitLabel, busy, error, onSubmit, onCancel, not
           step="0.1"
           suffix="mm"
           mono
-          hint={inUnits(watch('spec.rootGapMm')) ?? 'Per butt weld, taken off each cut length'}
+          hint={inUnits(rootGapMm) ?? 'Per butt weld, taken off each cut length'}
           error={errors.spec?.rootGapMm?.message}
           {...register('spec.rootGapMm', { valueAsNumber: true })}
         />
@@ -150,7 +153,7 @@ export function JobForm({ job, submitLabel, busy, error, onSubmit, onCancel, not
           step="0.1"
           suffix="mm"
           mono
-          hint={inUnits(watch('spec.sawKerfMm')) ?? 'Lost per cut when nesting stock lengths'}
+          hint={inUnits(sawKerfMm) ?? 'Lost per cut when nesting stock lengths'}
           error={errors.spec?.sawKerfMm?.message}
           {...register('spec.sawKerfMm', { valueAsNumber: true })}
         />
@@ -161,7 +164,7 @@ export function JobForm({ job, submitLabel, busy, error, onSubmit, onCancel, not
           step="1"
           suffix="mm"
           mono
-          hint={inUnits(watch('spec.minPieceLengthMm')) ?? 'Shorter cut lengths are flagged'}
+          hint={inUnits(minPieceLengthMm) ?? 'Shorter cut lengths are flagged'}
           error={errors.spec?.minPieceLengthMm?.message}
           {...register('spec.minPieceLengthMm', { valueAsNumber: true })}
         />
