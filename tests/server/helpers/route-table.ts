@@ -82,6 +82,12 @@ export const ROUTES: RouteCase[] = [
       return { path: `/api/users/${user.id}/reset-password`, body: { password: 'another-long-password' } };
     },
   },
+  {
+    name: 'GET /api/audit-events',
+    method: 'get',
+    allowed: ['admin'],
+    prepare: async () => ({ path: '/api/audit-events' }),
+  },
   { name: 'GET /api/jobs', method: 'get', allowed: ALL, prepare: async () => ({ path: '/api/jobs' }) },
   {
     name: 'POST /api/jobs',
