@@ -177,7 +177,7 @@ describe('GET /api/auth/me and POST /api/auth/sign-out', () => {
 
   it('sets Secure on the cookie when the public URL is https', async () => {
     const secure = testApp(db.dataSource, db.url, {
-      env: { PUBLIC_URL: 'https://tackline.kestrel.example' },
+      env: { PUBLIC_URL: 'https://tackline.kestrel.example', COOKIE_SECURE: 'auto' },
     });
     const res = await request(secure)
       .post('/api/auth/sign-in')

@@ -4,7 +4,10 @@ import type { DataSource } from 'typeorm';
 import { createApp, type AppOptions } from '../../../server/app';
 import { loadConfig, type ServerConfig } from '../../../server/config/env';
 
-/** Server config for tests: cheap bcrypt, generous sign-in limit unless a test lowers it. */
+/**
+ * Server config for tests: cheap bcrypt, generous sign-in limit unless a test lowers it,
+ * and cookies without Secure (supertest speaks plain http) unless a test asks for `auto`.
+ */
 export function testConfig(url: string, env: Record<string, string> = {}): ServerConfig {
   return loadConfig({
     NODE_ENV: 'test',
@@ -12,6 +15,7 @@ export function testConfig(url: string, env: Record<string, string> = {}): Serve
     SESSION_SECRET: 'test-session-secret-0123456789',
     BCRYPT_COST: '4',
     SIGN_IN_MAX_ATTEMPTS: '1000',
+    COOKIE_SECURE: 'false',
     ...env,
   });
 }
