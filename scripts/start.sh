@@ -11,6 +11,14 @@ export TACKLINE_PORT="${TACKLINE_PORT:-4717}"
 export PORT="$TACKLINE_PORT"
 export DATABASE_URL="${DATABASE_URL:-postgres://postgres@127.0.0.1:$PG_PORT/tackline}"
 export NODE_ENV="${NODE_ENV:-production}"
+# A production server needs a session secret: keep one per installation beside the data.
+if [ -z "${SESSION_SECRET:-}" ]; then
+  mkdir -p .data
+  [ -s .data/session-secret ] || node -e "process.stdout.write(require('crypto').randomBytes(32).toString('hex'))" > .data/session-secret
+  chmod 600 .data/session-secret
+  SESSION_SECRET="$(cat .data/session-secret)"
+  export SESSION_SECRET
+fi
 
 ensure_node_modules
 pg_start "$PG_BASE" "$PG_PORT"
