@@ -71,8 +71,10 @@ export function EditorWorkspace({
   const [keysOpen, setKeysOpen] = useState(false);
   const [pendingDelete, setPendingDelete] = useState<{ id: string; count: number } | null>(null);
   const lengthRef = useRef<HTMLInputElement>(null);
+  const rootRef = useRef<HTMLDivElement>(null);
   const modelGroup = useRef<Group | null>(null);
-  const begun = !!design && design.runs.length > 0;
+  // Begun: it has runs, or its main size was chosen on the start panel.
+  const begun = !!design && (design.runs.length > 0 || !!design.spec?.nps);
   const from = extendTarget(design, selection);
   const fromNode = design && from ? nodeById(design, from) : undefined;
 
@@ -86,7 +88,8 @@ export function EditorWorkspace({
     const r = model.edit((d, ctx) =>
       extendRun(d, { fromNodeId: from, direction, lengthMm: draft.lengthMm!, elbowRadius: draft.radius, ...(draft.kind !== 'auto' ? { lengthKind: draft.kind } : {}) }, ctx),
     );
-    if (r.ok) lengthRef.current?.select();
+    // Hand the keys back to the editor: the next letter is a direction, not text in the box.
+    if (r.ok) rootRef.current?.focus();
   }, [from, draft, model]);
 
   const requestDelete = useCallback(
@@ -188,7 +191,7 @@ export function EditorWorkspace({
   const errorCount = useMemo(() => result?.issues.filter((i) => i.severity === 'error').length ?? 0, [result]);
 
   return (
-    <div className="flex flex-col gap-2" data-testid="spool-editor" data-read-only={readOnly ? 'true' : 'false'}>
+    <div ref={rootRef} tabIndex={-1} className="flex flex-col gap-2 outline-none" data-testid="spool-editor" data-read-only={readOnly ? 'true' : 'false'}>
       <div className="flex flex-wrap items-center justify-between gap-2">
         <div className="flex flex-wrap items-center gap-1">
           {!readOnly ? (

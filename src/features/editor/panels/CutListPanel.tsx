@@ -49,7 +49,7 @@ export function CutListPanel({ result, units, selection, onSelect }: { result: S
       <tfoot>
         <tr className="border-t-2 border-steel-300 text-steel-700">
           <td className="px-2 py-1.5" colSpan={2}>
-            {result.pieces.length} pieces
+            {result.pieces.length} piece{result.pieces.length === 1 ? '' : 's'}
           </td>
           <td className="px-2 py-1.5 text-right font-mono">{formatLength(totalCut, units)}</td>
           <td className="px-2 py-1.5 text-xs" colSpan={2}>

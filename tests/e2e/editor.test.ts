@@ -1,0 +1,171 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { computeSpool } from '../../shared/engine/compute-spool';
+import { formatLength } from '../../shared/units/length-format';
+import { jobSpecOverrides } from '../../src/features/editor/api/job-spec-overrides';
+import type { Job } from '../../shared/schemas/job.schema';
+import type { Spool } from '../../shared/schemas/spool.schema';
+import type { Revision } from '../../shared/schemas/revision.schema';
+import { startAppServer, type RunningApp } from './helpers/app-server';
+import { launchBrowser, type TestBrowser } from './helpers/browser';
+import { saveScreenshot } from './helpers/screenshots';
+import { DEMO_USERS, signInAs, signOut } from './helpers/sign-in';
+
+/** What the cut list on screen says: piece mark, the mm behind it and the text shown. */
+async function cutListOnScreen(page: Page): Promise<{ mark: string; mm: number; text: string }[]> {
+  return page.locator('[data-testid="cut-list"] tbody tr').evaluateAll((rows) =>
+    rows.map((row) => {
+      const cell = row.querySelector('[data-cut-mm]') as HTMLElement;
+      return { mark: row.getAttribute('data-piece') ?? '', mm: Number(cell.dataset.cutMm), text: cell.textContent ?? '' };
+    }),
+  );
+}
+
+async function waitSaved(page: Page): Promise<void> {
+  await page.locator('[data-testid="save-status"][data-status="saved"]').waitFor({ timeout: 15_000 });
+}
+
+/** Adds a run with the keyboard: direction key, the length typed into the box, Enter. */
+async function addRun(page: Page, key: string, length: string, measured = 'Work point to work point'): Promise<void> {
+  const form = page.getByRole('form', { name: 'Add a run' });
+  const box = form.getByRole('textbox', { name: 'Length', exact: true });
+  await page.keyboard.press(key);
+  // The direction key puts the cursor in the length box.
+  await expect.poll(() => box.evaluate((el) => el === document.activeElement)).toBe(true);
+  await page.keyboard.type(length);
+  await form.getByLabel('Measured').selectOption({ label: measured });
+  await box.press('Enter');
+  await expect.poll(() => box.evaluate((el) => el === document.activeElement)).toBe(false);
+}
+
+describe('spool editor in the browser', () => {
+  let app: RunningApp;
+  let browser: TestBrowser;
+  let spoolId = '';
+  let job: Job;
+
+  beforeAll(async () => {
+    app = await startAppServer();
+    browser = await launchBrowser({ width: 1440, height: 1000 });
+  }, 120_000);
+
+  afterAll(async () => {
+    await browser?.close();
+    await app?.stop();
+  });
+
+  it('a detailer builds the 14" two-elbow return with a 6" set-on branch through the UI, and the cut list is the engine\'s', { timeout: 150_000 }, async () => {
+    const page = await browser.context.newPage();
+    const problems: string[] = [];
+    page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
+    page.on('console', (m) => {
+      if (m.type() === 'error' && !/status of 40[149]/.test(m.text())) problems.push(`console: ${m.text()}`);
+    });
+    await page.goto(`${app.baseUrl}/`);
+    await signInAs(page, DEMO_USERS.detailer);
+
+    // Set-up only (not what is under test): a fresh spool in the demo job.
+    const jobs = (await (await page.request.get(`${app.baseUrl}/api/jobs`)).json()) as { items: Job[] };
+    job = jobs.items.find((j) => j.number === 'HFD-B-CW')!;
+    const created = await page.request.post(`${app.baseUrl}/api/jobs/${job.id}/spools`, { data: { mark: 'CW-990-S01', lineNumber: 'CW-990' } });
+    expect(created.status()).toBe(201);
+    spoolId = ((await created.json()) as Spool).id;
+
+    await page.goto(`${app.baseUrl}/spools/${spoolId}`);
+    await page.getByRole('button', { name: 'Start laying out' }).click();
+    const begin = page.getByRole('form', { name: 'Begin the spool' });
+    await begin.getByLabel('Main size').selectOption('14');
+    await begin.getByLabel('Start with').selectOption('weld-neck-flange');
+    await begin.getByRole('button', { name: 'Begin' }).click();
+    await saveScreenshot(page, 'editor-00-begun');
+
+    // East 1900 to the first elbow, elbows welded together (cut 0), west 1900 back.
+    await addRun(page, 'e', '1900 mm');
+    await addRun(page, 'n', '0', 'Cut length (0 = fittings welded together)');
+    await addRun(page, 'w', '1900 mm');
+    await page.getByTestId('node-properties').getByLabel('End').selectOption('weld-neck-flange');
+    await saveScreenshot(page, 'editor-01-return-built');
+
+    // The 6" set-on branch: pick the first run from the cut list, insert 800 from the flange, up 450.
+    await page.locator('[data-testid="cut-list"] tbody tr[data-piece="P1"]').click();
+    const insert = page.getByRole('form', { name: 'Insert on this run' });
+    await insert.getByLabel('Fitting').selectOption('set-on-branch');
+    await insert.getByLabel("Distance from the run's start work point").fill('800 mm');
+    await insert.getByLabel('Branch size').selectOption('6');
+    await insert.getByRole('radio', { name: /^Up/ }).click();
+    await insert.getByLabel('Branch length, centre-to-face').fill('450 mm');
+    await insert.getByLabel('Branch end').selectOption('weld-neck-flange');
+    await insert.getByRole('button', { name: 'Insert' }).click();
+    await page.locator('[data-testid="cut-list"] tbody tr').nth(2).waitFor();
+    await waitSaved(page);
+    await saveScreenshot(page, 'editor-02-branch-added');
+
+    // Undo and redo by keyboard leave the same cut list.
+    const shown = await cutListOnScreen(page);
+    await page.locator('body').click({ position: { x: 5, y: 5 } });
+    await page.keyboard.press('Control+z');
+    await expect.poll(async () => (await cutListOnScreen(page)).length).toBe(2);
+    await page.keyboard.press('Control+Shift+z');
+    await expect.poll(async () => (await cutListOnScreen(page)).length).toBe(3);
+    await waitSaved(page);
+
+    // What the server stored, run through the engine, is exactly what the screen shows.
+    const spool = (await (await page.request.get(`${app.baseUrl}/api/spools/${spoolId}`)).json()) as Spool;
+    const draft = (await (await page.request.get(`${app.baseUrl}/api/spools/${spoolId}/revisions/${spool.draft!.id}`)).json()) as Revision;
+    const result = computeSpool(draft.design, { jobSpec: jobSpecOverrides(job.spec) });
+    expect(result.issues.filter((i) => i.severity === 'error')).toEqual([]);
+    const onScreen = await cutListOnScreen(page);
+    expect(onScreen).toEqual(shown);
+    expect(onScreen.map((p) => [p.mark, p.mm, p.text])).toEqual(result.pieces.map((p) => [p.mark, p.cutLengthMm, formatLength(p.cutLengthMm!, job.units)]));
+    // And against the tables: header piece through the set-on = 1900 − Y (ASME B16.5 Class 150 WN NPS 14,
+    // 127.0 mm incl. raised face, pre-2003 tables) − A (ASME B16.9 LR 90° NPS 14, 533 mm = 21 in, from memory)
+    // − two 3 mm root gaps. The job's root gap is used by both sides of this comparison.
+    const gap = job.spec.rootGapMm;
+    expect(Math.abs(onScreen[0]!.mm - (1900 - 127 - 533 - 2 * gap))).toBeLessThanOrEqual(0.5);
+    expect(Math.abs(onScreen[1]!.mm - (1900 - 533 - 127 - 2 * gap))).toBeLessThanOrEqual(0.5);
+
+    // A reload shows the saved spool, not an empty one.
+    await page.reload();
+    await page.locator('[data-testid="cut-list"] tbody tr').nth(2).waitFor();
+    expect(await cutListOnScreen(page)).toEqual(onScreen);
+    await page.getByRole('tab', { name: /Bolt holes/ }).click();
+    await saveScreenshot(page, 'editor-03-bolt-holes');
+    await page.getByRole('tab', { name: /Weight/ }).click();
+    await page.getByText(/lifts are planned by a competent person/).first().waitFor();
+    await page.getByRole('button', { name: 'Plan' }).click();
+    await saveScreenshot(page, 'editor-04-plan-weight');
+    expect(problems).toEqual([]);
+    await signOut(page);
+    await page.close();
+  });
+
+  it('a fabricator and a viewer get a read-only editor, and the API refuses their saves', { timeout: 90_000 }, async () => {
+    for (const who of ['fabricator', 'viewer'] as const) {
+      await browser.context.clearCookies();
+      const page = await browser.context.newPage();
+      await page.goto(`${app.baseUrl}/`);
+      await signInAs(page, DEMO_USERS[who]);
+      await page.goto(`${app.baseUrl}/spools/${spoolId}`);
+      await page.getByTestId('read-only-banner').waitFor();
+      await page.locator('[data-testid="cut-list"] tbody tr').nth(2).waitFor();
+      expect(await page.getByTestId('spool-editor').getAttribute('data-read-only')).toBe('true');
+      expect(await page.getByRole('form', { name: 'Add a run' }).count()).toBe(0);
+      expect(await page.getByRole('button', { name: 'Undo' }).count()).toBe(0);
+      // Reading a dimension still works: select a piece and see its properties, not editable.
+      await page.locator('[data-testid="cut-list"] tbody tr[data-piece="P2"]').click();
+      await expect.poll(() => page.getByTestId('run-properties').getByRole('textbox', { name: 'Length', exact: true }).isDisabled()).toBe(true);
+      // Keys that would edit do nothing.
+      await page.locator('body').press('Delete');
+      expect(await page.locator('[data-testid="cut-list"] tbody tr').count()).toBe(3);
+      await saveScreenshot(page, `editor-05-read-only-${who}`);
+
+      const spool = (await (await page.request.get(`${app.baseUrl}/api/spools/${spoolId}`)).json()) as Spool;
+      const put = await page.request.put(`${app.baseUrl}/api/spools/${spoolId}/draft`, {
+        data: { design: { format: 'tackline.spool' }, version: spool.draft?.version ?? 1 },
+      });
+      expect(put.status()).toBe(403);
+      await signOut(page);
+      await page.close();
+    }
+  });
+});
