@@ -37,9 +37,11 @@ describe('sawListGroups', () => {
       expect(g.count).toBe(g.pieces.length);
       expect(g.totalCutMm).toBeCloseTo(lengths.reduce((s, l) => s + l, 0), 6);
       expect(g.totalStockMm).toBeCloseTo(g.pieces.reduce((s, p) => s + p.piece.stockLengthMm!, 0), 6);
-      // Stock = cut + one kerf per cut (the engine's spec kerf).
-      const kerf = list[0]!.result.spec.sawKerfMm;
-      expect(g.totalStockMm - g.totalCutMm).toBeCloseTo(kerf * g.count, 6);
+      // Stock = cut + one kerf per cut, each at its own spool's kerf (the engine's spec).
+      for (const p of g.pieces) {
+        const spool = list.find((s) => s.mark === p.spoolMark)!;
+        expect(p.piece.stockLengthMm! - p.piece.cutLengthMm!).toBeCloseTo(spool.result.spec.sawKerfMm, 6);
+      }
     }
     // Distinct groups: the three samples are 14", 10" and 6" (plus small-bore).
     expect(new Set(groups.map((g) => `${g.nps}|${g.schedule}|${g.material}`)).size).toBe(groups.length);
@@ -54,11 +56,12 @@ describe('renderSawList', () => {
     const text = pages.map((p) => p.text).join(' ');
     expect(text).toContain('longest first');
     for (const g of out.groups) {
-      expect(text).toContain(`NPS ${g.nps} · ${g.schedule} · ${g.material}`);
+      const title = `NPS ${g.nps} · ${g.schedule} · ${g.material}`.toUpperCase();
+      expect(text).toContain(title);
       expect(text).toContain(f(g.totalStockMm));
       expect(text).toContain(f(g.totalCutMm));
       // Saw order as printed: the pieces' cut lengths appear in descending order.
-      let cursor = text.indexOf(`NPS ${g.nps} · ${g.schedule} · ${g.material}`);
+      let cursor = text.indexOf(title);
       for (const { piece, spoolMark } of g.pieces) {
         const at = text.indexOf(`${spoolMark} A ${piece.mark} ${f(piece.cutLengthMm!)}`, cursor);
         expect(at, `${spoolMark} ${piece.mark}`).toBeGreaterThan(cursor);

@@ -14,9 +14,16 @@ const fmt = (mm: number, units: LengthUnits) => (units === 'mm' ? formatMm(mm) :
 const MM_TOKEN = /-?\d+\.\d mm/g;
 const FTIN_TOKEN = /(?:\d+'-(?:\d+ )?(?:\d+\/\d+|\d+)"|(?:\d+ )?\d+\/\d+"|\d+")/g;
 
-/** Every length the drawing may show, straight from the engine: run work-point distances, centre-to-face, overall. */
+/**
+ * Every length the drawing may show, straight from the engine: run work-point distances, the plant-axis
+ * legs of runs off the axes (offsets), centre-to-face, overall.
+ */
 function drawingLengths(result: SpoolResult): number[] {
   const values = result.runs.map((r) => r.workPointDistanceMm);
+  for (const r of result.runs) {
+    const legs = [r.end.x - r.start.x, r.end.y - r.start.y, r.end.z - r.start.z].map(Math.abs).filter((v) => v > 0.5);
+    if (legs.length > 1) values.push(...legs);
+  }
   for (const end of result.openEnds) if (end.centreToFaceMm !== null) values.push(end.centreToFaceMm);
   if (result.overall) values.push(result.overall.workPointBox.sizeMm.x, result.overall.workPointBox.sizeMm.y, result.overall.workPointBox.sizeMm.z);
   return values;

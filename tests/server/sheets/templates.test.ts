@@ -47,14 +47,18 @@ describe('1:1 templates', () => {
     expect(cut, `a ${wrap.toFixed(1)} × ${depth.toFixed(1)} mm cut line`).toBeDefined();
   });
 
-  it('tiles a template wider than the paper across pages with overlap', async () => {
+  it('tiles a template wider than the printable width, with overlap, every tile printed once', async () => {
     for (const paper of ['A3', 'A4'] as const) {
       const out = await renderSpoolSheet({ header: testHeader('CW'), design, result, units: 'mm', paper });
       const saddle = templateFigures(result, 'mm').figures.find((f) => f.kind === 'branch-saddle')!;
-      const tiles = out.templates.pages.filter((p) => p.figure === saddle.title);
+      const pages = out.templates.pages.filter((p) => p.figure === saddle.title);
+      const printed = pages.flatMap((p) => p.tiles);
       const usableMm = (contentArea(pageSetup(paper)).w - 8) / PT_PER_MM;
-      expect(tiles.length).toBeGreaterThanOrEqual(Math.ceil((saddle.widthMm - 10) / (usableMm - 10)));
-      expect(tiles.length).toBeGreaterThan(1);
+      // Wrap π × 168.3 mm plus tab and margins is wider than A3 and A4 landscape.
+      expect(saddle.widthMm).toBeGreaterThan(usableMm);
+      expect(printed.length).toBe(Math.ceil((saddle.widthMm - 10) / (usableMm - 10)));
+      expect(new Set(printed).size).toBe(printed.length);
+      expect(pages.every((p) => p.tileCount === printed.length)).toBe(true);
     }
   });
 

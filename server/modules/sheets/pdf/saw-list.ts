@@ -159,7 +159,7 @@ export async function renderSawList(input: SawListInput): Promise<{ pdf: Buffer;
       };
     });
     rows.push({
-      cells: ['Total', `${g.count} pcs`, '', formatLength(g.totalCutMm, units), formatLength(g.totalStockMm, units), g.uncomputed ? `${g.uncomputed} not computed` : '', '', ''],
+      cells: ['', `Total: ${g.count} pcs`, '', formatLength(g.totalCutMm, units), formatLength(g.totalStockMm, units), g.uncomputed ? `${g.uncomputed} not computed` : '', '', ''],
       emphasis: 'total',
     });
     blocks.push(
@@ -172,7 +172,7 @@ export async function renderSawList(input: SawListInput): Promise<{ pdf: Buffer;
           { header: 'Piece', weight: 0.6, font: 'body-bold' },
           { header: 'Cut length', weight: 1.35, align: 'right', font: 'body-bold' },
           { header: 'Stock', weight: 1.25, align: 'right' },
-          { header: 'Ends', weight: 2.2 },
+          { header: 'Ends', weight: 2.2, wrap: true },
           { header: 'Heat', weight: 0.8 },
           { header: 'Cut', weight: 0.4, align: 'center', checkbox: true },
         ],

@@ -9,7 +9,7 @@ import { drawText, measureWrapped } from './text';
 
 /** What the template pages drew: per page, its scale bars (for checking the print scale). */
 export interface TemplatePagesReport {
-  pages: { pageIndex: number; figure: string; tile: string; scaleBars: ScaleBarGeometry[] }[];
+  pages: { pageIndex: number; figure: string; tiles: string[]; tileCount: number; scaleBars: ScaleBarGeometry[] }[];
 }
 
 const OVERLAP_MM = 10;
@@ -64,11 +64,11 @@ export function drawTemplatePages(
       const text = [...figure.instructions, ...figure.facts, SHORT_CAUTION].join('  ');
       drawText(doc, text, area.x + 6, y + sizes.heading * 1.5 + sizes.body * 1.6, { size: sizes.small, width: area.w * 0.6 - 6, wrap: true, lineGap: 0.5 });
       const bar = drawScaleBar(doc, area.x + area.w * 0.62, y, sizes.body, units === 'ft-in');
-      report.pages.push({ pageIndex: sheet.pageCount - 1, figure: figure.title, tile: names, scaleBars: bar.bars });
+      report.pages.push({ pageIndex: sheet.pageCount - 1, figure: figure.title, tiles: onPage.map((t) => t.name), tileCount: total, scaleBars: bar.bars });
 
       let ty = usable.y;
       for (const tile of onPage) {
-        drawText(doc, `Tile ${tile.name} of ${total}`, usable.x, ty, { font: 'cond-bold', size: sizes.small, color: INK.black });
+        if (total > 1) drawText(doc, `Tile ${tile.name} of ${total}`, usable.x, ty, { font: 'cond-bold', size: sizes.small, color: INK.black });
         const box: Rect = { x: usable.x, y: ty + labelH, w: mm(tile.w), h: mm(tile.h) };
         drawTile(doc, box, figure, tile.x, tile.y, units, sizes.small);
         drawJoinMarks(doc, box, tile, sizes.small);

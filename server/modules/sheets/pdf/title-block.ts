@@ -123,6 +123,14 @@ export function drawTitleBlock(
       drawText(doc, stateText, bx + 3, y + pad + 2, { font: 'cond-bold', size: t.small, color: '#ffffff', width: bw - 6 });
     }
     // History rows, newest first, as many as fit.
+    if (!fields.revisionLetter && fields.history.length === 0) {
+      label('Revision', x, y + pad, w);
+      drawText(doc, 'Not revisioned: printed from the current revision of each spool (listed on the sheet).', x, y + pad + t.tiny + 3, {
+        size: t.small,
+        width: w,
+        wrap: true,
+      });
+    } else {
     const rowH = t.tiny + 2.5;
     let yy = y + pad + t.small + 8;
     const hx = x + letterW;
@@ -145,6 +153,7 @@ export function drawTitleBlock(
     }
     if (fields.history.length > rows.length) {
       drawText(doc, `+${fields.history.length - rows.length} older`, cols[3]!, y + h - pad - t.tiny, { size: t.tiny, color: INK.muted });
+    }
     }
   }
 
