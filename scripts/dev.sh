@@ -25,6 +25,6 @@ trap shutdown INT TERM EXIT
 pg_ensure_db "$PG_PORT" tackline
 npx tsx server/db/run-migrations.ts
 npx tsx server/db/seed/run-seed.ts
-npx tsx watch server/index.ts & pids+=($!)
-npx vite & pids+=($!)
+node_modules/.bin/tsx watch server/index.ts & pids+=($!)
+node_modules/.bin/vite & pids+=($!)
 wait -n "${pids[@]}" || true

@@ -42,6 +42,6 @@ npx tsx server/db/seed/run-seed.ts
 pg_log "building the client"
 npx vite build --logLevel warn
 
-npx tsx server/index.ts &
+node_modules/.bin/tsx server/index.ts &
 server_pid=$!
 wait "$server_pid" || true
