@@ -71,7 +71,9 @@ describe('jobs and spools in the browser', () => {
     await dialog.getByLabel('Client').fill('Harrow Fields Data Centre');
     await dialog.getByLabel('Site').fill('Hall C');
     await dialog.getByLabel('Units on screens and sheets').selectOption('ft-in');
-    await dialog.getByLabel('Root gap').fill('2.4');
+    // In a feet-inches job lengths are typed as the tape reads; the millimetres are echoed back.
+    await dialog.getByLabel('Root gap').fill('1/16"');
+    await dialog.getByText('= 1.6 mm').waitFor();
     await saveScreenshot(page, '05-new-job-filled');
     await dialog.getByRole('button', { name: 'Create job' }).click();
 
@@ -79,8 +81,8 @@ describe('jobs and spools in the browser', () => {
     await page.getByRole('heading', { name: /HFD-C-CHW/ }).waitFor();
     expect(page.url()).toMatch(/\/jobs\/[0-9a-f-]{36}$/);
     await page.getByText('No spools in this job yet').waitFor();
-    // 2.4 mm is 3/32"; to the nearest 1/16" the job shows 1/8", with the stored millimetres beside it.
-    await page.getByText('1/8" (2.4 mm)').waitFor();
+    // 1/16" is stored as 1.5875 mm; the job shows it in its units with the millimetres beside it.
+    await page.getByText('1/16" (1.6 mm)').waitFor();
     await saveScreenshot(page, '06-job-empty');
 
     // Someone else saves the job while this detailer is editing it: 409, the entries stay, reload, save again.

@@ -1,13 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, type ReactNode } from 'react';
-import { useForm, useWatch } from 'react-hook-form';
+import { Controller, useForm, useWatch } from 'react-hook-form';
 import { jobCreateSchema, type Job, type JobCreate, type JobCreateInput } from '../../../../shared/schemas/job.schema';
 import { Button } from '../../../components/ui/Button';
 import { InlineError } from '../../../components/ui/ErrorState';
 import { SelectField, TextField } from '../../../components/ui/Field';
+import { LengthField } from '../../../components/ui/LengthField';
 import { ApiError, issuesOf } from '../../../lib/api-error';
 import { applyServerIssues } from '../../../lib/form-errors';
-import { formatLength } from '../../../../shared/units/length-format';
 import { jobStatusDisplay } from './JobStatusBadge';
 
 const FIELDS = [
@@ -100,12 +100,7 @@ export function JobForm({ job, submitLabel, busy, error, onSubmit, onCancel, not
     }
   }, [error, setError]);
 
-  const [units, rootGapMm, sawKerfMm, minPieceLengthMm] = useWatch({
-    control,
-    name: ['units', 'spec.rootGapMm', 'spec.sawKerfMm', 'spec.minPieceLengthMm'],
-  });
-  const inUnits = (mm: unknown) =>
-    units === 'ft-in' && typeof mm === 'number' && Number.isFinite(mm) ? `≈ ${formatLength(mm, 'ft-in')}` : undefined;
+  const units = useWatch({ control, name: 'units' }) ?? 'mm';
   const placedOnField = issuesOf(error).some((i) => (FIELDS as readonly string[]).includes(i.path.join('.')));
   const showGeneralError =
     Boolean(error) && !placedOnField && !(error instanceof ApiError && (error.isStale || error.code === 'duplicate'));
@@ -135,39 +130,31 @@ export function JobForm({ job, submitLabel, busy, error, onSubmit, onCancel, not
           error={errors.spec?.flangeClass?.message}
           {...register('spec.flangeClass', { setValueAs: (v) => Number(v) })}
         />
-        <TextField
-          label="Root gap"
-          type="number"
-          inputMode="decimal"
-          step="0.1"
-          suffix="mm"
-          mono
-          hint={inUnits(rootGapMm) ?? 'Per butt weld, taken off each cut length'}
-          error={errors.spec?.rootGapMm?.message}
-          {...register('spec.rootGapMm', { valueAsNumber: true })}
-        />
-        <TextField
-          label="Saw kerf"
-          type="number"
-          inputMode="decimal"
-          step="0.1"
-          suffix="mm"
-          mono
-          hint={inUnits(sawKerfMm) ?? 'Lost per cut when nesting stock lengths'}
-          error={errors.spec?.sawKerfMm?.message}
-          {...register('spec.sawKerfMm', { valueAsNumber: true })}
-        />
-        <TextField
-          label="Shortest piece"
-          type="number"
-          inputMode="decimal"
-          step="1"
-          suffix="mm"
-          mono
-          hint={inUnits(minPieceLengthMm) ?? 'Shorter cut lengths are flagged'}
-          error={errors.spec?.minPieceLengthMm?.message}
-          {...register('spec.minPieceLengthMm', { valueAsNumber: true })}
-        />
+        {(
+          [
+            ['spec.rootGapMm', 'Root gap', 'Per butt weld, off each cut length', errors.spec?.rootGapMm?.message],
+            ['spec.sawKerfMm', 'Saw kerf', 'Lost per cut when nesting', errors.spec?.sawKerfMm?.message],
+            ['spec.minPieceLengthMm', 'Shortest piece', 'Shorter cuts are flagged', errors.spec?.minPieceLengthMm?.message],
+          ] as const
+        ).map(([name, label, hint, error]) => (
+          <Controller
+            key={name}
+            control={control}
+            name={name}
+            render={({ field }) => (
+              <LengthField
+                label={label}
+                name={field.name}
+                units={units}
+                valueMm={field.value}
+                onChangeMm={field.onChange}
+                onBlur={field.onBlur}
+                hint={hint}
+                error={error}
+              />
+            )}
+          />
+        ))}
       </fieldset>
       {notice}
       {showGeneralError ? <InlineError error={error} /> : null}
