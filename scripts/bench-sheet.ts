@@ -89,4 +89,13 @@ async function main(): Promise<void> {
   console.log(`median render ${median(renderOnly).toFixed(1)} ms, with engine ${median(withEngine).toFixed(1)} ms (n=${iterations}, Node ${process.version})`);
 }
 
-void main();
+if (process.env.BENCH_PDF) {
+  void (async () => {
+    const design = fiftyComponentDesign();
+    const { writeFileSync } = await import('node:fs');
+    const out = await renderSpoolSheet({ header, design, result: computeSpool(design), units: 'mm', paper: 'A3' });
+    writeFileSync(process.env.BENCH_PDF!, out.pdf);
+  })();
+} else {
+  void main();
+}

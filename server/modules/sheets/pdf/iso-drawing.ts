@@ -8,7 +8,7 @@ import { LabelPlacer } from './label-placer';
 import type { Rect } from './page-setup';
 import { SHORT_CAUTION } from './sheet-cautions';
 import { INK, type TypeSizes } from './sheet-style';
-import { drawText } from './text';
+import { drawText, measureWrapped } from './text';
 import { distance, dot, normalise, perpendicularAxis, sub } from './vec3-math';
 
 /** One dimension the drawing printed: what it measures, its value and the text shown. */
@@ -58,13 +58,19 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
   // North arrow and axes, top-left, reserved first so nothing lands on it.
   const arrowBox = drawNorthArrow(doc, { x: area.x + 56, y: area.y + 44 }, sizes);
   placer.reserve(arrowBox);
-  drawText(doc, 'ISOMETRIC — NOT TO SCALE. Work to the figures, never measure the drawing.', area.x + 4, area.y + area.h - 2 * sizes.small - 5, {
+  // Footer lines under the drawing (bottom up): cautions, scale note, overall sizes.
+  const cautionH = measureWrapped(doc, SHORT_CAUTION, area.w - 8, { size: sizes.small });
+  let footY = area.y + area.h - cautionH - 3;
+  drawText(doc, SHORT_CAUTION, area.x + 4, footY, { size: sizes.small, color: INK.muted, width: area.w - 8, wrap: true });
+  footY -= sizes.small + 3;
+  drawText(doc, 'ISOMETRIC — NOT TO SCALE. Work to the figures, never measure the drawing.', area.x + 4, footY, {
     font: 'body-semibold',
     size: sizes.small,
     color: INK.muted,
     width: area.w - 8,
   });
-  drawText(doc, SHORT_CAUTION, area.x + 4, area.y + area.h - sizes.small - 3, { size: sizes.small, color: INK.muted, width: area.w - 8 });
+  const overallY = footY - sizes.small - 3;
+  placer.reserve({ x: area.x, y: overallY - 2, w: area.w, h: area.y + area.h - overallY + 2 });
 
   // Pipe pieces, then fitting bodies over them.
   for (const piece of result.pieces) {
@@ -161,7 +167,7 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
       printed.push({ kind: 'overall', ref: axis, mm: size, text: formatLength(size, units) });
     }
     const parts = (['x', 'y', 'z'] as const).map((k) => `${AXIS_NAME[k]} ${formatLength(box.sizeMm[k], units)}`);
-    drawText(doc, `Overall, work points and faces: ${parts.join('  ·  ')}`, area.x + 4, area.y + area.h - 3 * sizes.small - 9, {
+    drawText(doc, `Overall, work points and faces: ${parts.join('  ·  ')}`, area.x + 4, overallY, {
       font: 'body-bold',
       size: sizes.small,
       color: INK.black,

@@ -86,10 +86,12 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
   const area = sheet.addPage('Spool drawing');
   const top = area.y + bandH;
   const large = paper === 'A3' || paper === 'Tabloid';
-  const drawingW = area.w * (large ? 0.6 : 0.56);
+  // A crowded spool gets the whole first sheet for its drawing; the lists start on sheet 2.
+  const crowded = result.runs.length + result.welds.length > (large ? 36 : 24);
+  const drawingW = crowded ? area.w : area.w * (large ? 0.6 : 0.56);
   const drawing: Rect = { x: area.x, y: top, w: drawingW, h: area.y + area.h - top };
   const dimensions = drawIsometric(doc, drawing, { result, units, sizes, flangeTags });
-  doc.save().lineWidth(0.6).strokeColor(INK.rule).moveTo(area.x + drawingW, top).lineTo(area.x + drawingW, area.y + area.h).stroke().restore();
+  if (!crowded) doc.save().lineWidth(0.6).strokeColor(INK.rule).moveTo(area.x + drawingW, top).lineTo(area.x + drawingW, area.y + area.h).stroke().restore();
 
   const { figures, problems } = templateFigures(result, units);
   const gap = setup.gutter;
@@ -116,7 +118,7 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
     doc,
     blocks,
     {
-      first: [firstColumn],
+      first: crowded ? [] : [firstColumn],
       addPage: () => {
         const a = sheet.addPage('Lists, flanges and notes');
         const y = a.y + bandH + gap;
