@@ -1,17 +1,25 @@
 import type { Rect } from './page-setup';
 
+const CELL = 32; // pt; a spatial hash keeps a crowded drawing's label search near-linear
+
 /**
  * Keeps labels on a drawing from landing on each other: each placed label reserves its box,
  * and a new one takes the first candidate spot that is free (or the least crowded one).
  */
 export class LabelPlacer {
   private readonly taken: Rect[] = [];
+  private readonly grid = new Map<string, number[]>();
 
   constructor(private readonly bounds: Rect) {}
 
   /** Reserves a box without searching (pipe runs, the north arrow). */
   reserve(rect: Rect): void {
-    this.taken.push(rect);
+    const id = this.taken.push(rect) - 1;
+    for (const key of cellsOf(rect)) {
+      const list = this.grid.get(key);
+      if (list) list.push(id);
+      else this.grid.set(key, [id]);
+    }
   }
 
   /** Picks the best of the candidate boxes, reserves it and returns its index. */
@@ -20,7 +28,14 @@ export class LabelPlacer {
     let bestScore = Infinity;
     candidates.forEach((c, i) => {
       let score = 0;
-      for (const t of this.taken) score += overlapArea(c, t);
+      const seen = new Set<number>();
+      for (const key of cellsOf(c)) {
+        for (const id of this.grid.get(key) ?? []) {
+          if (seen.has(id)) continue;
+          seen.add(id);
+          score += overlapArea(c, this.taken[id]!);
+        }
+      }
       score += outsideArea(c, this.bounds) * 4;
       // Earlier candidates are preferred: they are closer to what they label.
       score += i * 0.01;
@@ -29,9 +44,19 @@ export class LabelPlacer {
         best = i;
       }
     });
-    this.taken.push(candidates[best]!);
+    this.reserve(candidates[best]!);
     return best;
   }
+}
+
+function cellsOf(r: Rect): string[] {
+  const keys: string[] = [];
+  const x0 = Math.floor(r.x / CELL);
+  const x1 = Math.floor((r.x + r.w) / CELL);
+  const y0 = Math.floor(r.y / CELL);
+  const y1 = Math.floor((r.y + r.h) / CELL);
+  for (let x = x0; x <= x1; x += 1) for (let y = y0; y <= y1; y += 1) keys.push(`${x},${y}`);
+  return keys;
 }
 
 function overlapArea(a: Rect, b: Rect): number {
