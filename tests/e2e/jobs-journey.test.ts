@@ -187,14 +187,14 @@ describe('jobs and spools in the browser', () => {
     await signInAs(page, DEMO_USERS.detailer);
     await page.getByRole('link', { name: DEMO_JOB }).click();
     await page.getByRole('link', { name: ISSUE_MARK }).click();
+    // Issuing happens in the editor, beside the design and its checks.
     await page.getByRole('button', { name: 'Issue revision A' }).click();
-    const dialog = page.getByRole('dialog', { name: /Issue revision A/ });
+    const dialog = page.getByRole('dialog', { name: 'Issue this revision' });
     await dialog.getByLabel(/What changed/).fill('Issued for fabrication');
-    await dialog.getByRole('button', { name: 'Issue revision A' }).click();
+    await dialog.getByRole('button', { name: 'Issue revision' }).click();
     await dialog.waitFor({ state: 'hidden' });
     await page.getByText('Issued to bay').first().waitFor();
     await page.getByRole('row').filter({ hasText: 'Issued for fabrication' }).filter({ hasText: 'Current issue' }).waitFor();
-    await page.getByText('Loading the editor…').waitFor({ state: 'detached' });
     await saveScreenshot(page, '17-spool-issued');
     const spoolUrl = page.url();
     await signOut(page);

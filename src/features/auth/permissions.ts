@@ -17,5 +17,14 @@ export const roleLabels: Record<Role, string> = {
   detailer: 'Detailer',
   fabricator: 'Fabricator',
   inspector: 'Inspector',
-  viewer: 'Viewer (read-only)',
+  viewer: 'Viewer',
+};
+
+/** What each role may do, in a few words, for role pickers. */
+export const roleDuties: Record<Role, string> = {
+  admin: 'users, jobs, everything',
+  detailer: 'designs and issues revisions',
+  fabricator: 'records shop progress',
+  inspector: 'inspects and releases',
+  viewer: 'read-only, e.g. the client',
 };

@@ -1,30 +1,18 @@
 import type { Spool } from '../../../../shared/schemas/spool.schema';
-import { Button } from '../../../components/ui/Button';
 import { EmptyState } from '../../../components/ui/EmptyState';
-import { ErrorState, InlineError } from '../../../components/ui/ErrorState';
+import { ErrorState } from '../../../components/ui/ErrorState';
 import { LoadingBlock } from '../../../components/ui/Spinner';
 import { Table } from '../../../components/ui/Table';
 import { formatDateTime } from '../../../lib/format-date';
-import { useCreateDraft } from '../api/create-draft';
 import { useSpoolRevisions } from '../api/get-spool-revisions';
-import { IssueDraftDialog } from './IssueDraftDialog';
 import { RevisionStateBadge } from './RevisionStateBadge';
 
-/** The spool's revisions, newest first, with draft and issue actions for those who may detail. */
+/**
+ * The spool's revision history, newest first. Drafting and issuing happen in the
+ * editor above, next to the design and its checks.
+ */
 export function SpoolRevisionsSection({ spool, mayEdit }: { spool: Spool; mayEdit: boolean }) {
   const revisions = useSpoolRevisions(spool.id);
-  const startDraft = useCreateDraft(spool.id);
-  const archived = Boolean(spool.archivedAt);
-
-  const actions = mayEdit && !archived ? (
-    spool.draft ? (
-      <IssueDraftDialog spool={spool} />
-    ) : (
-      <Button variant="secondary" busy={startDraft.isPending} onClick={() => startDraft.mutate()}>
-        {spool.currentRevision ? 'Start a new revision' : 'Start the first draft'}
-      </Button>
-    )
-  ) : null;
 
   return (
     <section aria-labelledby="revisions" className="flex flex-col gap-3">
@@ -32,16 +20,14 @@ export function SpoolRevisionsSection({ spool, mayEdit }: { spool: Spool; mayEdi
         <h2 id="revisions" className="text-2xl font-semibold text-ink-800">
           Revisions
         </h2>
-        <div className="flex gap-2">{actions}</div>
       </div>
-      <InlineError error={startDraft.error} />
       {revisions.isPending ? (
         <LoadingBlock label="Loading revisions…" />
       ) : revisions.isError ? (
         <ErrorState error={revisions.error} onRetry={() => void revisions.refetch()} />
       ) : revisions.data.length === 0 ? (
         <EmptyState title="No revisions yet">
-          {mayEdit ? 'Start the first draft to lay this spool out.' : 'The detailer has not started this spool yet.'}
+          {mayEdit ? 'Start laying the spool out in the editor above.' : 'The detailer has not started this spool yet.'}
         </EmptyState>
       ) : (
         <Table

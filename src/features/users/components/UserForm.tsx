@@ -8,10 +8,10 @@ import { InlineError } from '../../../components/ui/ErrorState';
 import { SelectField, TextField } from '../../../components/ui/Field';
 import { ApiError, issuesOf } from '../../../lib/api-error';
 import { applyServerIssues } from '../../../lib/form-errors';
-import { roleLabels } from '../../auth/permissions';
+import { roleDuties, roleLabels } from '../../auth/permissions';
 
 const FIELDS = ['email', 'displayName', 'role', 'password'] as const;
-export const roleOptions = ROLES.map((r) => ({ value: r, label: roleLabels[r] }));
+export const roleOptions = ROLES.map((r) => ({ value: r, label: `${roleLabels[r]} — ${roleDuties[r]}` }));
 
 interface UserFormProps {
   busy: boolean;

@@ -6,7 +6,10 @@ import { Table, type SortOrder } from '../../../components/ui/Table';
 import { formatDateTime } from '../../../lib/format-date';
 import { useUpdateUser } from '../api/update-user';
 import { ResetPasswordDialog } from './ResetPasswordDialog';
-import { roleOptions } from './UserForm';
+import { ROLES } from '../../../../shared/schemas/role.schema';
+import { roleLabels } from '../../auth/permissions';
+
+const roleOptions = ROLES.map((r) => ({ value: r, label: roleLabels[r] }));
 
 interface UsersTableProps {
   users: User[];
