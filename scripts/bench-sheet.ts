@@ -26,7 +26,10 @@ function fiftyComponentDesign(): SpoolDesign {
       from: nodes[i]!.id,
       to: nodes[i + 1]!.id,
       direction: dirs[i % 4]!,
-      length: { mm: 900 + (i % 5) * 50, kind: i === 0 || i === nodes.length - 2 ? 'centre-to-face' : 'centre-to-centre' },
+      length: {
+        mm: 900 + (i % 5) * 50,
+        kind: i === 0 || i === nodes.length - 2 ? 'centre-to-face' : 'centre-to-centre',
+      },
     });
   }
   return {
@@ -49,8 +52,16 @@ const header: SheetHeader = {
   spoolMark: 'BENCH-50',
   lineNumber: 'CW-999',
   spoolStatus: 'issued',
-  revision: { letter: 'A', state: 'issued', issuedAt: '2026-11-30T10:00:00Z', note: 'Benchmark', author: 'Bench' },
-  history: [{ letter: 'A', state: 'issued', issuedAt: '2026-11-30T10:00:00Z', note: 'Benchmark', author: 'Bench' }],
+  revision: {
+    letter: 'A',
+    state: 'issued',
+    issuedAt: '2026-11-30T10:00:00Z',
+    note: 'Benchmark',
+    author: 'Bench',
+  },
+  history: [
+    { letter: 'A', state: 'issued', issuedAt: '2026-11-30T10:00:00Z', note: 'Benchmark', author: 'Bench' },
+  ],
   drawnBy: 'Bench',
   checkedBy: null,
   spoolUrl: 'http://127.0.0.1:4717/spools/00000000-0000-0000-0000-000000000000',
@@ -86,14 +97,22 @@ async function main(): Promise<void> {
     bytes = out.pdf.length;
   }
   console.log(`spool sheet, ${components} components, A3, ${pages} pages, ${(bytes / 1024).toFixed(0)} kB`);
-  console.log(`median render ${median(renderOnly).toFixed(1)} ms, with engine ${median(withEngine).toFixed(1)} ms (n=${iterations}, Node ${process.version})`);
+  console.log(
+    `median render ${median(renderOnly).toFixed(1)} ms, with engine ${median(withEngine).toFixed(1)} ms (n=${iterations}, Node ${process.version})`,
+  );
 }
 
 if (process.env.BENCH_PDF) {
   void (async () => {
     const design = fiftyComponentDesign();
     const { writeFileSync } = await import('node:fs');
-    const out = await renderSpoolSheet({ header, design, result: computeSpool(design), units: 'mm', paper: 'A3' });
+    const out = await renderSpoolSheet({
+      header,
+      design,
+      result: computeSpool(design),
+      units: 'mm',
+      paper: 'A3',
+    });
     writeFileSync(process.env.BENCH_PDF!, out.pdf);
   })();
 } else {

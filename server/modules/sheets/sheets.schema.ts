@@ -25,7 +25,14 @@ export const sawListQuerySchema = z
       .string()
       .trim()
       .min(1)
-      .transform((s) => [...new Set(s.split(',').map((p) => p.trim()).filter(Boolean))])
+      .transform((s) => [
+        ...new Set(
+          s
+            .split(',')
+            .map((p) => p.trim())
+            .filter(Boolean),
+        ),
+      ])
       .pipe(z.array(idSchema).min(1).max(MAX_SAW_LIST_SPOOLS))
       .optional(),
     paper: paperSchema,

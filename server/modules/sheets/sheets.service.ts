@@ -47,7 +47,13 @@ export function defaultRevisionId(spool: Spool): string | null {
 }
 
 function historyEntry(r: RevisionSummary): RevisionHistoryEntry {
-  return { letter: r.letter, state: r.state, issuedAt: r.issuedAt, note: r.note, author: r.author.displayName };
+  return {
+    letter: r.letter,
+    state: r.state,
+    issuedAt: r.issuedAt,
+    note: r.note,
+    author: r.author.displayName,
+  };
 }
 
 /** Builds spool sheets and job saw lists from stored designs and the geometry engine. */
@@ -88,7 +94,10 @@ export class SheetsService {
       printedAt: this.now(),
     };
     const out = await renderSpoolSheet({ header, design, result, units: job.units, paper: query.paper });
-    return { pdf: out.pdf, filename: `${spool.mark}-rev-${revision.letter}${revision.state === 'issued' ? '' : `-${revision.state}`}.pdf` };
+    return {
+      pdf: out.pdf,
+      filename: `${spool.mark}-rev-${revision.letter}${revision.state === 'issued' ? '' : `-${revision.state}`}.pdf`,
+    };
   }
 
   async sawList(actor: SessionActor, jobId: string, query: SawListQuery): Promise<RenderedPdf> {
@@ -107,7 +116,12 @@ export class SheetsService {
       }
       const revision = await this.revisions.get(actor, spool.id, revisionId);
       const { result } = this.compute(revision, job);
-      chosen.push({ mark: spool.mark, revisionLetter: revision.letter, revisionState: revision.state, result });
+      chosen.push({
+        mark: spool.mark,
+        revisionLetter: revision.letter,
+        revisionState: revision.state,
+        result,
+      });
     }
     chosen.sort((a, b) => a.mark.localeCompare(b.mark, undefined, { numeric: true }));
     const out = await renderSawList({
@@ -130,11 +144,17 @@ export class SheetsService {
     const parsed = spoolDesignSchema.safeParse(revision.design);
     if (!parsed.success) {
       // Stored designs are validated on save; one that fails now predates a schema change.
-      throw unprocessable(`Revision ${revision.letter} does not hold a valid spool design, so no sheet can be drawn from it.`, {
-        issues: parsed.error.issues,
-      });
+      throw unprocessable(
+        `Revision ${revision.letter} does not hold a valid spool design, so no sheet can be drawn from it.`,
+        {
+          issues: parsed.error.issues,
+        },
+      );
     }
-    return { design: parsed.data, result: computeSpool(parsed.data, { jobSpec: jobSpecOverrides(job), trusted: true }) };
+    return {
+      design: parsed.data,
+      result: computeSpool(parsed.data, { jobSpec: jobSpecOverrides(job), trusted: true }),
+    };
   }
 
   private async openSpoolIds(actor: SessionActor, jobId: string): Promise<string[]> {

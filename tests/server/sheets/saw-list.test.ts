@@ -5,7 +5,12 @@ import { readPdfText, renderPageInk } from './helpers/pdf-reading';
 import { computedSample, SAMPLE_FILES } from './helpers/sheet-fixtures';
 
 function spools(): SawListSpool[] {
-  return SAMPLE_FILES.map((file, i) => ({ mark: `CW-S0${i + 1}`, revisionLetter: 'A', revisionState: 'issued' as const, result: computedSample(file).result }));
+  return SAMPLE_FILES.map((file, i) => ({
+    mark: `CW-S0${i + 1}`,
+    revisionLetter: 'A',
+    revisionState: 'issued' as const,
+    result: computedSample(file).result,
+  }));
 }
 
 const input = (list: SawListSpool[], units: 'mm' | 'ft-in' = 'mm') => ({
@@ -35,8 +40,14 @@ describe('sawListGroups', () => {
       const lengths = g.pieces.map((p) => p.piece.cutLengthMm!);
       expect(lengths).toEqual([...lengths].sort((a, b) => b - a));
       expect(g.count).toBe(g.pieces.length);
-      expect(g.totalCutMm).toBeCloseTo(lengths.reduce((s, l) => s + l, 0), 6);
-      expect(g.totalStockMm).toBeCloseTo(g.pieces.reduce((s, p) => s + p.piece.stockLengthMm!, 0), 6);
+      expect(g.totalCutMm).toBeCloseTo(
+        lengths.reduce((s, l) => s + l, 0),
+        6,
+      );
+      expect(g.totalStockMm).toBeCloseTo(
+        g.pieces.reduce((s, p) => s + p.piece.stockLengthMm!, 0),
+        6,
+      );
       // Stock = cut + one kerf per cut, each at its own spool's kerf (the engine's spec).
       for (const p of g.pieces) {
         const spool = list.find((s) => s.mark === p.spoolMark)!;
@@ -49,27 +60,30 @@ describe('sawListGroups', () => {
 });
 
 describe('renderSawList', () => {
-  it.each(['mm', 'ft-in'] as const)('prints every piece in saw order with its cut length, and the group totals (%s)', async (units) => {
-    const f = units === 'mm' ? formatMm : formatFtIn;
-    const out = await renderSawList(input(spools(), units));
-    const pages = await readPdfText(out.pdf);
-    const text = pages.map((p) => p.text).join(' ');
-    expect(text).toContain('longest first');
-    for (const g of out.groups) {
-      const title = `NPS ${g.nps} · ${g.schedule} · ${g.material}`.toUpperCase();
-      expect(text).toContain(title);
-      expect(text).toContain(f(g.totalStockMm));
-      expect(text).toContain(f(g.totalCutMm));
-      // Saw order as printed: the pieces' cut lengths appear in descending order.
-      let cursor = text.indexOf(title);
-      for (const { piece, spoolMark } of g.pieces) {
-        const at = text.indexOf(`${spoolMark} A ${piece.mark} ${f(piece.cutLengthMm!)}`, cursor);
-        expect(at, `${spoolMark} ${piece.mark}`).toBeGreaterThan(cursor);
-        cursor = at;
+  it.each(['mm', 'ft-in'] as const)(
+    'prints every piece in saw order with its cut length, and the group totals (%s)',
+    async (units) => {
+      const f = units === 'mm' ? formatMm : formatFtIn;
+      const out = await renderSawList(input(spools(), units));
+      const pages = await readPdfText(out.pdf);
+      const text = pages.map((p) => p.text).join(' ');
+      expect(text).toContain('longest first');
+      for (const g of out.groups) {
+        const title = `NPS ${g.nps} · ${g.schedule} · ${g.material}`.toUpperCase();
+        expect(text).toContain(title);
+        expect(text).toContain(f(g.totalStockMm));
+        expect(text).toContain(f(g.totalCutMm));
+        // Saw order as printed: the pieces' cut lengths appear in descending order.
+        let cursor = text.indexOf(title);
+        for (const { piece, spoolMark } of g.pieces) {
+          const at = text.indexOf(`${spoolMark} A ${piece.mark} ${f(piece.cutLengthMm!)}`, cursor);
+          expect(at, `${spoolMark} ${piece.mark}`).toBeGreaterThan(cursor);
+          cursor = at;
+        }
       }
-    }
-    for (const ink of renderPageInk(out.pdf, 20)) expect(ink.inkedFraction).toBeGreaterThan(0.02);
-  });
+      for (const ink of renderPageInk(out.pdf, 20)) expect(ink.inkedFraction).toBeGreaterThan(0.02);
+    },
+  );
 
   it('flags unissued spools so their pieces are not cut', async () => {
     const list = spools();

@@ -37,8 +37,15 @@ async function sampleSpool(target: Shop, opts: { issued?: boolean; units?: 'mm' 
   let issuedId: string | null = null;
   if (opts.issued) {
     // Revision A issued (with a different design note), then a new draft B.
-    await ds.getRepository(SpoolRevisionEntity).update({ id: draft.id }, { state: 'issued', issuedAt: new Date('2026-11-30T10:00:00Z'), note: 'First issue' });
-    await ds.getRepository(SpoolEntity).update({ id: spool.id }, { currentRevisionId: draft.id, status: 'issued' });
+    await ds
+      .getRepository(SpoolRevisionEntity)
+      .update(
+        { id: draft.id },
+        { state: 'issued', issuedAt: new Date('2026-11-30T10:00:00Z'), note: 'First issue' },
+      );
+    await ds
+      .getRepository(SpoolEntity)
+      .update({ id: spool.id }, { currentRevisionId: draft.id, status: 'issued' });
     issuedId = draft.id;
     const b = await ds.getRepository(SpoolRevisionEntity).save({
       organisationId: target.id,
@@ -89,7 +96,10 @@ describe('GET /api/spools/:id/sheet.pdf', () => {
     const issuedText = (await readPdfText(issued.body as Buffer)).map((p) => p.text).join(' ');
     expect(issuedText).toContain('ISSUED FOR FABRICATION');
     expect(issuedText).not.toContain('DRAFT — revision');
-    const draft = await agent.get(`/api/spools/${spool.id}/sheet.pdf?revision=${draftId}`).buffer(true).parse(binary);
+    const draft = await agent
+      .get(`/api/spools/${spool.id}/sheet.pdf?revision=${draftId}`)
+      .buffer(true)
+      .parse(binary);
     expect(draft.status).toBe(200);
     expect(draft.headers['content-disposition']).toContain('rev-B-draft');
   });
@@ -98,16 +108,28 @@ describe('GET /api/spools/:id/sheet.pdf', () => {
     const mine = await sampleSpool(shop);
     const theirs = await sampleSpool(other);
     const agent = await signedIn(app, shop.email('admin'), PASSWORD);
-    expectJsonError(await agent.get('/api/spools/00000000-0000-4000-8000-000000000000/sheet.pdf'), 404, 'not_found');
+    expectJsonError(
+      await agent.get('/api/spools/00000000-0000-4000-8000-000000000000/sheet.pdf'),
+      404,
+      'not_found',
+    );
     expectJsonError(await agent.get(`/api/spools/${theirs.spool.id}/sheet.pdf`), 404, 'not_found');
-    expectJsonError(await agent.get(`/api/spools/${mine.spool.id}/sheet.pdf?revision=${theirs.draftId}`), 404, 'not_found');
+    expectJsonError(
+      await agent.get(`/api/spools/${mine.spool.id}/sheet.pdf?revision=${theirs.draftId}`),
+      404,
+      'not_found',
+    );
   });
 
   it('refuses bad queries with 400 and anonymous callers with 401, as JSON', async () => {
     const { spool } = await sampleSpool(shop);
     const agent = await signedIn(app, shop.email('inspector'), PASSWORD);
     expectJsonError(await agent.get(`/api/spools/${spool.id}/sheet.pdf?paper=A0`), 400, 'invalid_request');
-    expectJsonError(await agent.get(`/api/spools/${spool.id}/sheet.pdf?revision=nope`), 400, 'invalid_request');
+    expectJsonError(
+      await agent.get(`/api/spools/${spool.id}/sheet.pdf?revision=nope`),
+      400,
+      'invalid_request',
+    );
     expectJsonError(await agent.get(`/api/spools/${spool.id}/sheet.pdf?colour=red`), 400, 'invalid_request');
     expectJsonError(await agent.get('/api/spools/not-a-uuid/sheet.pdf'), 400, 'invalid_request');
     expectJsonError(await request(app).get(`/api/spools/${spool.id}/sheet.pdf`), 401, 'unauthenticated');
@@ -119,15 +141,26 @@ describe('GET /api/jobs/:id/saw-list.pdf', () => {
     const a = await sampleSpool(shop);
     const theirs = await sampleSpool(other);
     const agent = await signedIn(app, shop.email('fabricator'), PASSWORD);
-    const res = await agent.get(`/api/jobs/${a.job.id}/saw-list.pdf?spools=${a.spool.id}&paper=Tabloid`).buffer(true).parse(binary);
+    const res = await agent
+      .get(`/api/jobs/${a.job.id}/saw-list.pdf?spools=${a.spool.id}&paper=Tabloid`)
+      .buffer(true)
+      .parse(binary);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const text = (await readPdfText(res.body as Buffer)).map((p) => p.text).join(' ');
     const result = computeSpool(a.design, { jobSpec: jobSpecOverrides({ spec: a.job.spec as never }) });
     for (const piece of result.pieces) expect(text).toContain(formatMm(piece.cutLengthMm!));
     const b = await sampleSpool(shop);
-    expectJsonError(await agent.get(`/api/jobs/${a.job.id}/saw-list.pdf?spools=${b.spool.id}`), 404, 'not_found');
-    expectJsonError(await agent.get(`/api/jobs/${a.job.id}/saw-list.pdf?spools=${theirs.spool.id}`), 404, 'not_found');
+    expectJsonError(
+      await agent.get(`/api/jobs/${a.job.id}/saw-list.pdf?spools=${b.spool.id}`),
+      404,
+      'not_found',
+    );
+    expectJsonError(
+      await agent.get(`/api/jobs/${a.job.id}/saw-list.pdf?spools=${theirs.spool.id}`),
+      404,
+      'not_found',
+    );
     expectJsonError(await agent.get(`/api/jobs/${theirs.job.id}/saw-list.pdf`), 404, 'not_found');
     expectJsonError(await agent.get(`/api/jobs/${a.job.id}/saw-list.pdf?spools=1,2`), 400, 'invalid_request');
   });

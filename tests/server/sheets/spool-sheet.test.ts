@@ -21,53 +21,81 @@ const FTIN_TOKEN = /(?:\d+'-(?:\d+ )?(?:\d+\/\d+|\d+)"|(?:\d+ )?\d+\/\d+"|\d+")/
 function drawingLengths(result: SpoolResult): number[] {
   const values = result.runs.map((r) => r.workPointDistanceMm);
   for (const r of result.runs) {
-    const legs = [r.end.x - r.start.x, r.end.y - r.start.y, r.end.z - r.start.z].map(Math.abs).filter((v) => v > 0.5);
+    const legs = [r.end.x - r.start.x, r.end.y - r.start.y, r.end.z - r.start.z]
+      .map(Math.abs)
+      .filter((v) => v > 0.5);
     if (legs.length > 1) values.push(...legs);
   }
   for (const end of result.openEnds) if (end.centreToFaceMm !== null) values.push(end.centreToFaceMm);
-  if (result.overall) values.push(result.overall.workPointBox.sizeMm.x, result.overall.workPointBox.sizeMm.y, result.overall.workPointBox.sizeMm.z);
+  if (result.overall)
+    values.push(
+      result.overall.workPointBox.sizeMm.x,
+      result.overall.workPointBox.sizeMm.y,
+      result.overall.workPointBox.sizeMm.z,
+    );
   return values;
 }
 
 describe.each(SAMPLE_FILES)('spool sheet of %s', (file) => {
   const { design, result } = computedSample(file);
 
-  it.each(['mm', 'ft-in'] as const)('prints every cut length and drawing dimension as the engine computed it (%s)', async (units) => {
-    const out = await renderSpoolSheet({ header: testHeader(design.mark ?? file), design, result, units, paper: 'A3' });
-    const pages = await readPdfText(out.pdf);
-    const all = pages.map((p) => p.text).join('\n');
+  it.each(['mm', 'ft-in'] as const)(
+    'prints every cut length and drawing dimension as the engine computed it (%s)',
+    async (units) => {
+      const out = await renderSpoolSheet({
+        header: testHeader(design.mark ?? file),
+        design,
+        result,
+        units,
+        paper: 'A3',
+      });
+      const pages = await readPdfText(out.pdf);
+      const all = pages.map((p) => p.text).join('\n');
 
-    // Cut list: each piece's mark and cut length.
-    expect(result.pieces.length).toBeGreaterThan(0);
-    for (const piece of result.pieces) {
-      expect(piece.cutLengthMm, `${piece.mark} has a cut length`).not.toBeNull();
-      expect(all).toContain(fmt(piece.cutLengthMm!, units));
-    }
-    // Drawing (page 1, left of the tables): every run dimension and the overall sizes...
-    const setup = pageSetup('A3');
-    const drawingRight = setup.frame.x + setup.frame.w * 0.6;
-    const drawingText = pages[0]!.items.filter((i) => i.x < drawingRight && i.y > setup.titleBlockHeight + setup.frame.y).map((i) => i.str);
-    const joined = drawingText.join('\n');
-    for (const run of result.runs) {
-      if (run.workPointDistanceMm > 0.05) expect(joined).toContain(fmt(run.workPointDistanceMm, units));
-    }
-    const box = result.overall!.workPointBox.sizeMm;
-    for (const size of [box.x, box.y, box.z]) if (size > 1) expect(joined).toContain(fmt(size, units));
-    // ...and nothing on the drawing that the engine did not compute.
-    const allowed = new Set(drawingLengths(result).map((v) => fmt(v, units)));
-    const tokens = joined.match(units === 'mm' ? MM_TOKEN : FTIN_TOKEN) ?? [];
-    expect(tokens.length).toBeGreaterThanOrEqual(result.runs.filter((r) => r.workPointDistanceMm > 0.05).length);
-    for (const token of tokens) expect(allowed, `drawing shows ${token}`).toContain(token);
-    // The renderer's own account agrees with the engine, value by value.
-    for (const d of out.dimensions) {
-      if (d.kind === 'run') expect(d.mm).toBe(result.runs.find((r) => r.runId === d.ref)!.workPointDistanceMm);
-      if (d.kind === 'centre-to-face') expect(d.mm).toBe(result.openEnds.find((e) => e.nodeId === d.ref)!.centreToFaceMm);
-      expect(d.text).toBe(fmt(d.mm, units));
-    }
-  });
+      // Cut list: each piece's mark and cut length.
+      expect(result.pieces.length).toBeGreaterThan(0);
+      for (const piece of result.pieces) {
+        expect(piece.cutLengthMm, `${piece.mark} has a cut length`).not.toBeNull();
+        expect(all).toContain(fmt(piece.cutLengthMm!, units));
+      }
+      // Drawing (page 1, left of the tables): every run dimension and the overall sizes...
+      const setup = pageSetup('A3');
+      const drawingRight = setup.frame.x + setup.frame.w * 0.6;
+      const drawingText = pages[0]!.items
+        .filter((i) => i.x < drawingRight && i.y > setup.titleBlockHeight + setup.frame.y)
+        .map((i) => i.str);
+      const joined = drawingText.join('\n');
+      for (const run of result.runs) {
+        if (run.workPointDistanceMm > 0.05) expect(joined).toContain(fmt(run.workPointDistanceMm, units));
+      }
+      const box = result.overall!.workPointBox.sizeMm;
+      for (const size of [box.x, box.y, box.z]) if (size > 1) expect(joined).toContain(fmt(size, units));
+      // ...and nothing on the drawing that the engine did not compute.
+      const allowed = new Set(drawingLengths(result).map((v) => fmt(v, units)));
+      const tokens = joined.match(units === 'mm' ? MM_TOKEN : FTIN_TOKEN) ?? [];
+      expect(tokens.length).toBeGreaterThanOrEqual(
+        result.runs.filter((r) => r.workPointDistanceMm > 0.05).length,
+      );
+      for (const token of tokens) expect(allowed, `drawing shows ${token}`).toContain(token);
+      // The renderer's own account agrees with the engine, value by value.
+      for (const d of out.dimensions) {
+        if (d.kind === 'run')
+          expect(d.mm).toBe(result.runs.find((r) => r.runId === d.ref)!.workPointDistanceMm);
+        if (d.kind === 'centre-to-face')
+          expect(d.mm).toBe(result.openEnds.find((e) => e.nodeId === d.ref)!.centreToFaceMm);
+        expect(d.text).toBe(fmt(d.mm, units));
+      }
+    },
+  );
 
   it('has a title block on every sheet, with n of m, and the cautions', async () => {
-    const out = await renderSpoolSheet({ header: testHeader('CW-201-S03'), design, result, units: 'mm', paper: 'A3' });
+    const out = await renderSpoolSheet({
+      header: testHeader('CW-201-S03'),
+      design,
+      result,
+      units: 'mm',
+      paper: 'A3',
+    });
     const pages = await readPdfText(out.pdf);
     expect(pages.length).toBe(out.pageCount);
     pages.forEach((p, i) => {
@@ -109,7 +137,13 @@ describe('spool sheet marks', () => {
   const { design, result } = computedSample(SAMPLE_FILES[0]);
 
   it('prints DRAFT on every page of a draft revision', async () => {
-    const out = await renderSpoolSheet({ header: testHeader('CW-201-S03', 'draft'), design, result, units: 'mm', paper: 'A3' });
+    const out = await renderSpoolSheet({
+      header: testHeader('CW-201-S03', 'draft'),
+      design,
+      result,
+      units: 'mm',
+      paper: 'A3',
+    });
     const pages = await readPdfText(out.pdf);
     expect(out.marks.diagonal).toBe('DRAFT');
     for (const p of pages) {
@@ -119,7 +153,13 @@ describe('spool sheet marks', () => {
   });
 
   it('says SUPERSEDED, and by which revision, on a superseded one', async () => {
-    const out = await renderSpoolSheet({ header: testHeader('CW-201-S03', 'superseded'), design, result, units: 'mm', paper: 'A4' });
+    const out = await renderSpoolSheet({
+      header: testHeader('CW-201-S03', 'superseded'),
+      design,
+      result,
+      units: 'mm',
+      paper: 'A4',
+    });
     const pages = await readPdfText(out.pdf);
     for (const p of pages) expect(p.text).toContain('SUPERSEDED by revision C');
   });
@@ -127,15 +167,27 @@ describe('spool sheet marks', () => {
   it('prints a design with engine errors, listing them under NOT FOR FABRICATION', async () => {
     // Shorten the first run below its fittings' take-offs: impossible geometry.
     const broken = structuredClone(design);
-    broken.runs[0]!.length = { mm: 10, kind: broken.runs[0]!.length.kind === 'cut' ? 'centre-to-centre' : broken.runs[0]!.length.kind };
+    broken.runs[0]!.length = {
+      mm: 10,
+      kind: broken.runs[0]!.length.kind === 'cut' ? 'centre-to-centre' : broken.runs[0]!.length.kind,
+    };
     const { computeSpool } = await import('../../../shared/engine/compute-spool');
     const bad = computeSpool(broken);
     const errors = bad.issues.filter((i) => i.severity === 'error');
     expect(errors.length).toBeGreaterThan(0);
-    const out = await renderSpoolSheet({ header: testHeader('CW-201-S03'), design: broken, result: bad, units: 'mm', paper: 'A3' });
+    const out = await renderSpoolSheet({
+      header: testHeader('CW-201-S03'),
+      design: broken,
+      result: bad,
+      units: 'mm',
+      paper: 'A3',
+    });
     const pages = await readPdfText(out.pdf);
     expect(pages[0]!.text).toContain('NOT FOR FABRICATION');
-    const squeezed = pages.map((p) => p.text).join(' ').replace(/\s+/g, '');
+    const squeezed = pages
+      .map((p) => p.text)
+      .join(' ')
+      .replace(/\s+/g, '');
     for (const e of errors) expect(squeezed).toContain(e.message.replace(/\s+/g, ''));
     expect(renderPageInk(out.pdf, 20)[0]!.inkedFraction).toBeGreaterThan(0.02);
   });

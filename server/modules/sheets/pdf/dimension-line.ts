@@ -24,7 +24,15 @@ export function drawDimension(
   text: string,
   style: DimensionStyle,
 ): { centre: PagePoint; width: number; height: number } {
-  return drawDimensionBetween(doc, a, b, { x: a.x + offset.x, y: a.y + offset.y }, { x: b.x + offset.x, y: b.y + offset.y }, text, style);
+  return drawDimensionBetween(
+    doc,
+    a,
+    b,
+    { x: a.x + offset.x, y: a.y + offset.y },
+    { x: b.x + offset.x, y: b.y + offset.y },
+    text,
+    style,
+  );
 }
 
 /**

@@ -1,4 +1,8 @@
-import type { FlangeOrientation, FlangePairCheck, SpoolResult } from '../../../../shared/engine/compute-result';
+import type {
+  FlangeOrientation,
+  FlangePairCheck,
+  SpoolResult,
+} from '../../../../shared/engine/compute-result';
 import type { Vec3 } from '../../../../shared/schemas/spool-design-primitives.schema';
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
 import type { FlowBlock, Placement } from './flow-layout';
@@ -40,33 +44,72 @@ export function flangeDetailsBlock(
       const rowsFit = Math.floor((area.h - titleH) / cellH);
       if (rowsFit < 1 && !fresh) return { used: 0, rest: this };
       const count = Math.min(flanges.length - start, Math.max(1, rowsFit) * perRow);
-      const title = start > 0 ? 'FLANGE BOLT HOLES (CONTINUED)' : 'FLANGE BOLT HOLES — SEEN FACING THE FACE, ANGLES CLOCKWISE (CW)';
-      drawText(doc, title, area.x, area.y, { font: 'cond-bold', size: size * 1.2, color: INK.black, width: area.w });
+      const title =
+        start > 0
+          ? 'FLANGE BOLT HOLES (CONTINUED)'
+          : 'FLANGE BOLT HOLES — SEEN FACING THE FACE, ANGLES CLOCKWISE (CW)';
+      drawText(doc, title, area.x, area.y, {
+        font: 'cond-bold',
+        size: size * 1.2,
+        color: INK.black,
+        width: area.w,
+      });
       for (let k = 0; k < count; k += 1) {
         const f = flanges[start + k]!;
         const col = k % perRow;
         const row = Math.floor(k / perRow);
-        drawFlangeCell(doc, { x: area.x + col * cellW, y: area.y + titleH + row * cellH, w: cellW - 4, h: cellH - 4 }, f, tags.get(f.nodeId) ?? f.nodeId, units, size);
+        drawFlangeCell(
+          doc,
+          { x: area.x + col * cellW, y: area.y + titleH + row * cellH, w: cellW - 4, h: cellH - 4 },
+          f,
+          tags.get(f.nodeId) ?? f.nodeId,
+          units,
+          size,
+        );
       }
       const rowsUsed = Math.ceil(count / perRow);
       const next = start + count;
-      return { used: titleH + rowsUsed * cellH, rest: next < flanges.length ? flangeDetailsBlock(flanges, tags, units, size, next) : null };
+      return {
+        used: titleH + rowsUsed * cellH,
+        rest: next < flanges.length ? flangeDetailsBlock(flanges, tags, units, size, next) : null,
+      };
     },
   };
 }
 
-function drawFlangeCell(doc: PDFKit.PDFDocument, cell: Rect, f: FlangeOrientation, tag: string, units: LengthUnits, size: number): void {
+function drawFlangeCell(
+  doc: PDFKit.PDFDocument,
+  cell: Rect,
+  f: FlangeOrientation,
+  tag: string,
+  units: LengthUnits,
+  size: number,
+): void {
   const bad = f.mustTwoHole && !f.straddles;
   doc.save();
-  doc.lineWidth(bad ? 1.4 : 0.6).strokeColor(bad ? INK.warn : INK.rule).rect(cell.x, cell.y, cell.w, cell.h).stroke();
+  doc
+    .lineWidth(bad ? 1.4 : 0.6)
+    .strokeColor(bad ? INK.warn : INK.rule)
+    .rect(cell.x, cell.y, cell.w, cell.h)
+    .stroke();
   const pad = 3;
   const kind = f.type === 'weld-neck-flange' ? 'WN' : 'SO';
-  drawText(doc, `${tag}  NPS ${f.nps} Cl ${f.flangeClass} ${kind}`, cell.x + pad, cell.y + pad, { font: 'cond-bold', size: size * 1.05, width: cell.w - 2 * pad });
-  drawText(doc, `Face looks ${describeDirection(f.outward)} · node ${f.nodeId}`, cell.x + pad, cell.y + pad + size * 1.3, {
-    size: size * 0.85,
-    color: INK.muted,
+  drawText(doc, `${tag}  NPS ${f.nps} Cl ${f.flangeClass} ${kind}`, cell.x + pad, cell.y + pad, {
+    font: 'cond-bold',
+    size: size * 1.05,
     width: cell.w - 2 * pad,
   });
+  drawText(
+    doc,
+    `Face looks ${describeDirection(f.outward)} · node ${f.nodeId}`,
+    cell.x + pad,
+    cell.y + pad + size * 1.3,
+    {
+      size: size * 0.85,
+      color: INK.muted,
+      width: cell.w - 2 * pad,
+    },
+  );
 
   // The view: reference up, holes clockwise as seen facing the face.
   const r = cell.w * 0.27;
@@ -74,11 +117,24 @@ function drawFlangeCell(doc: PDFKit.PDFDocument, cell: Rect, f: FlangeOrientatio
   const cy = cell.y + pad + size * 2.7 + r + size + 8;
   const ref = f.reference === 'plant-vertical' ? 'UP' : 'N';
   doc.lineWidth(0.5).strokeColor(INK.muted).dash(3, { space: 2 });
-  doc.moveTo(cx - r - 6, cy).lineTo(cx + r + 6, cy).moveTo(cx, cy - r - 6).lineTo(cx, cy + r + 6).stroke();
+  doc
+    .moveTo(cx - r - 6, cy)
+    .lineTo(cx + r + 6, cy)
+    .moveTo(cx, cy - r - 6)
+    .lineTo(cx, cy + r + 6)
+    .stroke();
   doc.undash();
   doc.lineWidth(1).strokeColor(INK.black).circle(cx, cy, r).stroke();
-  doc.lineWidth(0.4).strokeColor(INK.muted).circle(cx, cy, r * 0.78).stroke();
-  doc.lineWidth(0.8).strokeColor(INK.black).circle(cx, cy, r * 0.42).stroke();
+  doc
+    .lineWidth(0.4)
+    .strokeColor(INK.muted)
+    .circle(cx, cy, r * 0.78)
+    .stroke();
+  doc
+    .lineWidth(0.8)
+    .strokeColor(INK.black)
+    .circle(cx, cy, r * 0.42)
+    .stroke();
   drawText(doc, ref, cx - 10, cy - r - 8 - size, { font: 'cond-bold', size, width: 20, align: 'center' });
   const n = f.boltCount ?? 0;
   const holeR = Math.max(1.6, Math.min(3.5, (Math.PI * r * 0.78) / Math.max(n, 4) / 3));
@@ -120,17 +176,30 @@ function drawFlangeCell(doc: PDFKit.PDFDocument, cell: Rect, f: FlangeOrientatio
   line(`${n || '?'} holes, BC ${f.boltCircleMm === null ? '?' : formatLength(f.boltCircleMm, units)}`);
   line(`Hole 1: ${fmtDeg(f.rotationDeg)} CW from ${ref}`, { bold: true });
   if (f.straddles) line('Straddles centrelines (two-holed)');
-  else line(f.mustTwoHole ? 'ON CENTRELINE: must two-hole' : 'On centrelines, as designed', { warn: f.mustTwoHole, bold: f.mustTwoHole });
+  else
+    line(f.mustTwoHole ? 'ON CENTRELINE: must two-hole' : 'On centrelines, as designed', {
+      warn: f.mustTwoHole,
+      bold: f.mustTwoHole,
+    });
   if (f.correction) {
     const c = f.correction;
-    line(`Turn ${fmtDeg(c.rotateDeg)} ${c.sense === 'clockwise' ? 'CW' : 'CCW'}${c.atBoltCircleMm === null ? '' : ` = ${formatLength(c.atBoltCircleMm, units)} at BC`}`, { bold: true, warn: true });
+    line(
+      `Turn ${fmtDeg(c.rotateDeg)} ${c.sense === 'clockwise' ? 'CW' : 'CCW'}${c.atBoltCircleMm === null ? '' : ` = ${formatLength(c.atBoltCircleMm, units)} at BC`}`,
+      { bold: true, warn: true },
+    );
   }
-  if (f.bendPlaneRotationDeg !== null) line(`${fmtDeg(f.bendPlaneRotationDeg)} from bend plane ${f.bendPlaneNodeId ?? ''}`.trim());
+  if (f.bendPlaneRotationDeg !== null)
+    line(`${fmtDeg(f.bendPlaneRotationDeg)} from bend plane ${f.bendPlaneNodeId ?? ''}`.trim());
   doc.restore();
 }
 
 /** Flange-to-flange bolt-hole checks (holes of one carried through the spool to the other). */
-export function flangePairsBlock(result: SpoolResult, tags: Map<string, string>, units: LengthUnits, size: number): FlowBlock | null {
+export function flangePairsBlock(
+  result: SpoolResult,
+  tags: Map<string, string>,
+  units: LengthUnits,
+  size: number,
+): FlowBlock | null {
   if (result.flangePairs.length === 0) return null;
   const name = (id: string) => tags.get(id) ?? id;
   return tableBlock({
@@ -154,7 +223,13 @@ export function flangePairsBlock(result: SpoolResult, tags: Map<string, string>,
           p.errorDeg === null ? '—' : fmtDeg(p.errorDeg),
           p.errorMm === null ? '—' : formatLength(p.errorMm, units),
           formatLength(p.toleranceMm, units),
-          ok === null ? (p.parallelFaces ? 'not checked' : 'faces not parallel: check by bend plane') : ok ? 'OK' : `OUT: ${fix}`,
+          ok === null
+            ? p.parallelFaces
+              ? 'not checked'
+              : 'faces not parallel: check by bend plane'
+            : ok
+              ? 'OK'
+              : `OUT: ${fix}`,
         ],
         emphasis: ok === false ? 'warn' : undefined,
       };

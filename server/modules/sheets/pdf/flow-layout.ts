@@ -25,7 +25,12 @@ export interface ColumnSource {
 }
 
 /** Places blocks in order through columns and pages; returns the number of pages added. */
-export function flowBlocks(doc: PDFKit.PDFDocument, blocks: FlowBlock[], source: ColumnSource, gap: number): number {
+export function flowBlocks(
+  doc: PDFKit.PDFDocument,
+  blocks: FlowBlock[],
+  source: ColumnSource,
+  gap: number,
+): number {
   let pagesAdded = 0;
   const queue = [...source.first];
   let column = queue.shift() ?? nextPage();

@@ -29,7 +29,11 @@ export interface IsoDrawingInput {
 }
 
 const SMALL = new Set(['1/2', '3/4', '1', '1-1/4', '1-1/2']);
-const AXES: Record<'x' | 'y' | 'z', Vec3> = { x: { x: 1, y: 0, z: 0 }, y: { x: 0, y: 1, z: 0 }, z: { x: 0, y: 0, z: 1 } };
+const AXES: Record<'x' | 'y' | 'z', Vec3> = {
+  x: { x: 1, y: 0, z: 0 },
+  y: { x: 0, y: 1, z: 0 },
+  z: { x: 0, y: 0, z: 1 },
+};
 const AXIS_NAME = { x: 'E–W', y: 'N–S', z: 'vertical' } as const;
 
 /**
@@ -37,7 +41,11 @@ const AXIS_NAME = { x: 'E–W', y: 'N–S', z: 'vertical' } as const;
  * balloons, piece marks, run and centre-to-face dimensions, overall dimensions, the centre of
  * gravity and a north arrow. Returns every dimension it printed.
  */
-export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDrawingInput): PrintedDimension[] {
+export function drawIsometric(
+  doc: PDFKit.PDFDocument,
+  area: Rect,
+  input: IsoDrawingInput,
+): PrintedDimension[] {
   const { result, units, sizes } = input;
   const printed: PrintedDimension[] = [];
   const points: Vec3[] = [
@@ -61,14 +69,25 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
   // Footer lines under the drawing (bottom up): cautions, scale note, overall sizes.
   const cautionH = measureWrapped(doc, SHORT_CAUTION, area.w - 8, { size: sizes.small });
   let footY = area.y + area.h - cautionH - 3;
-  drawText(doc, SHORT_CAUTION, area.x + 4, footY, { size: sizes.small, color: INK.muted, width: area.w - 8, wrap: true });
-  footY -= sizes.small + 3;
-  drawText(doc, 'ISOMETRIC — NOT TO SCALE. Work to the figures, never measure the drawing.', area.x + 4, footY, {
-    font: 'body-semibold',
+  drawText(doc, SHORT_CAUTION, area.x + 4, footY, {
     size: sizes.small,
     color: INK.muted,
     width: area.w - 8,
+    wrap: true,
   });
+  footY -= sizes.small + 3;
+  drawText(
+    doc,
+    'ISOMETRIC — NOT TO SCALE. Work to the figures, never measure the drawing.',
+    area.x + 4,
+    footY,
+    {
+      font: 'body-semibold',
+      size: sizes.small,
+      color: INK.muted,
+      width: area.w - 8,
+    },
+  );
   const overallY = footY - sizes.small - 3;
   placer.reserve({ x: area.x, y: overallY - 2, w: area.w, h: area.y + area.h - overallY + 2 });
 
@@ -79,7 +98,8 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
   }
   for (const component of result.components) {
     drawComponentSymbol(doc, view, component);
-    for (const end of component.ends) reserveSegment(placer, view.project(component.position), view.project(end.point));
+    for (const end of component.ends)
+      reserveSegment(placer, view.project(component.position), view.project(end.point));
   }
 
   // Dimensions: each run work point to work point (centre-to-centre, or centre-to-face at an end).
@@ -90,7 +110,9 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
     const text = formatLength(length, units);
     placeDimension(doc, view, placer, run.start, run.end, text, dimSize, centroid, [20, 35, 50]);
     printed.push({ kind: 'run', ref: run.runId, mm: length, text });
-    printed.push(...drawOffsetLegs(doc, view, placer, run.runId, run.start, run.end, units, sizes.small, centroid));
+    printed.push(
+      ...drawOffsetLegs(doc, view, placer, run.runId, run.start, run.end, units, sizes.small, centroid),
+    );
   }
   // Centre-to-face at open ends not already dimensioned by their run.
   for (const end of result.openEnds) {
@@ -101,10 +123,16 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
     const same = result.runs.some(
       (r) =>
         Math.abs(r.workPointDistanceMm - (end.centreToFaceMm ?? 0)) < 0.05 &&
-        ((distance(r.end, end.facePoint) < 0.5 && distance(r.start, from) < 0.5) || (distance(r.start, end.facePoint) < 0.5 && distance(r.end, from) < 0.5)),
+        ((distance(r.end, end.facePoint) < 0.5 && distance(r.start, from) < 0.5) ||
+          (distance(r.start, end.facePoint) < 0.5 && distance(r.end, from) < 0.5)),
     );
     if (same) {
-      printed.push({ kind: 'centre-to-face', ref: end.nodeId, mm: end.centreToFaceMm, text: formatLength(end.centreToFaceMm, units) });
+      printed.push({
+        kind: 'centre-to-face',
+        ref: end.nodeId,
+        mm: end.centreToFaceMm,
+        text: formatLength(end.centreToFaceMm, units),
+      });
       continue;
     }
     const text = formatLength(end.centreToFaceMm, units);
@@ -129,14 +157,19 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
       let best: { a: PagePoint; b: PagePoint; a2: PagePoint; b2: PagePoint; cost: number } | null = null;
       for (const k of others) {
         for (const sign of [1, -1]) {
-          const o = unit2(isoProjectDirection({ x: AXES[k].x * sign, y: AXES[k].y * sign, z: AXES[k].z * sign }));
+          const o = unit2(
+            isoProjectDirection({ x: AXES[k].x * sign, y: AXES[k].y * sign, z: AXES[k].z * sign }),
+          );
           let n = { x: -d.y, y: d.x };
           if (n.x * o.x + n.y * o.y < 0) n = { x: -n.x, y: -n.y };
           const along = n.x * o.x + n.y * o.y;
           if (along < 0.3) continue; // nearly parallel to the dimension line
           // Outside the whole spool if that fits on the page, else just outside the two anchor points.
           const outside = Math.max(...pagePoints.map((pp) => pp.q.x * n.x + pp.q.y * n.y)) + ring;
-          for (const [wide, penalty] of [[true, 0], [false, 300]] as const) {
+          for (const [wide, penalty] of [
+            [true, 0],
+            [false, 300],
+          ] as const) {
             const foot = (q: PagePoint, level: number) => {
               const u = (level - (q.x * n.x + q.y * n.y)) / along;
               return { x: q.x + o.x * u, y: q.y + o.y * u, u };
@@ -152,7 +185,13 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
             }
             const fa = la.f;
             const fb = lb.f;
-            const inside = [fa, fb].every((f) => f.x > area.x + 10 && f.x < area.x + area.w - 10 && f.y > area.y + 10 && f.y < area.y + area.h - 20);
+            const inside = [fa, fb].every(
+              (f) =>
+                f.x > area.x + 10 &&
+                f.x < area.x + area.w - 10 &&
+                f.y > area.y + 10 &&
+                f.y < area.y + area.h - 20,
+            );
             // Short extension lines; a small preference for below (the usual place).
             const cost = fa.u + fb.u + penalty + (inside ? 0 : 10_000) + (k === 'z' && sign === -1 ? -20 : 0);
             if (!best || cost < best.cost) best = { a: la.q, b: lb.q, a2: fa, b2: fb, cost };
@@ -162,11 +201,16 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
       // One that cannot sit on the page is left to the overall line printed under the drawing.
       if (!best || best.cost >= 10_000) continue;
       const text = `overall ${AXIS_NAME[axis]} ${formatLength(size, units)}`;
-      const drawn = drawDimensionBetween(doc, best.a, best.b, best.a2, best.b2, text, { size: dimSize, color: INK.black });
+      const drawn = drawDimensionBetween(doc, best.a, best.b, best.a2, best.b2, text, {
+        size: dimSize,
+        color: INK.black,
+      });
       placer.reserve(boxAround(drawn.centre, drawn.width, drawn.height));
       printed.push({ kind: 'overall', ref: axis, mm: size, text: formatLength(size, units) });
     }
-    const parts = (['x', 'y', 'z'] as const).map((k) => `${AXIS_NAME[k]} ${formatLength(box.sizeMm[k], units)}`);
+    const parts = (['x', 'y', 'z'] as const).map(
+      (k) => `${AXIS_NAME[k]} ${formatLength(box.sizeMm[k], units)}`,
+    );
     drawText(doc, `Overall, work points and faces: ${parts.join('  ·  ')}`, area.x + 4, overallY, {
       font: 'body-bold',
       size: sizes.small,
@@ -185,10 +229,21 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
   // Small-bore connections: which one, and its clock position round the header.
   for (const c of result.components) {
     if (c.shape.type !== 'branch-connection' && c.shape.type !== 'set-on-branch') continue;
-    const tip = c.ends.reduce((a, b) => (distance(b.point, c.position) > distance(a.point, c.position) ? b : a), c.ends[0]!);
+    const tip = c.ends.reduce(
+      (a, b) => (distance(b.point, c.position) > distance(a.point, c.position) ? b : a),
+      c.ends[0]!,
+    );
     const angle = c.shape.orientationDeg;
     const text = `${c.nodeId} NPS ${c.shape.branchNps}${angle === null ? '' : ` at ${Number(angle.toFixed(1))}°`}`;
-    tagLabel(doc, placer, view.project(c.shape.type === 'branch-connection' ? tip.point : c.position), text, sizes.small, 'rect', null);
+    tagLabel(
+      doc,
+      placer,
+      view.project(c.shape.type === 'branch-connection' ? tip.point : c.position),
+      text,
+      sizes.small,
+      'rect',
+      null,
+    );
   }
   // Flange tags.
   for (const f of result.flanges) {
@@ -205,7 +260,15 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
       doc.circle(p.x, p.y, 2.4).fill(INK.black);
     }
     doc.restore();
-    tagLabel(doc, placer, p, weld.location === 'field' ? `${weld.mark} FW` : weld.mark, sizes.small, 'balloon', null);
+    tagLabel(
+      doc,
+      placer,
+      p,
+      weld.location === 'field' ? `${weld.mark} FW` : weld.mark,
+      sizes.small,
+      'balloon',
+      null,
+    );
   }
   // Centre of gravity.
   const cog = result.weights.centreOfGravity;
@@ -213,7 +276,12 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
     const p = view.project(cog);
     doc.save().lineWidth(0.9).strokeColor(INK.warn);
     doc.circle(p.x, p.y, 5).stroke();
-    doc.moveTo(p.x - 7, p.y).lineTo(p.x + 7, p.y).moveTo(p.x, p.y - 7).lineTo(p.x, p.y + 7).stroke();
+    doc
+      .moveTo(p.x - 7, p.y)
+      .lineTo(p.x + 7, p.y)
+      .moveTo(p.x, p.y - 7)
+      .lineTo(p.x, p.y + 7)
+      .stroke();
     doc.restore();
     const labelW = 50;
     const spots = [
@@ -224,10 +292,16 @@ export function drawIsometric(doc: PDFKit.PDFDocument, area: Rect, input: IsoDra
       { x: p.x - labelW / 2, y: p.y + 10 },
       { x: p.x - labelW / 2, y: p.y - 10 - sizes.small },
     ];
-    const chosen = spots[placer.place(spots.map((q) => ({ x: q.x, y: q.y, w: labelW, h: sizes.small + 2 })))]!;
+    const chosen =
+      spots[placer.place(spots.map((q) => ({ x: q.x, y: q.y, w: labelW, h: sizes.small + 2 })))]!;
     const lx = chosen.x;
     const ly = chosen.y;
-    drawText(doc, 'CoG (empty)', lx, ly, { font: 'cond-bold', size: sizes.small, color: INK.warn, width: 50 });
+    drawText(doc, 'CoG (empty)', lx, ly, {
+      font: 'cond-bold',
+      size: sizes.small,
+      color: INK.warn,
+      width: 50,
+    });
   }
   doc.restore();
   return printed;
@@ -257,7 +331,16 @@ function drawOffsetLegs(
     const q = { ...p, [k]: p[k] + delta[k] };
     const a = view.project(p);
     const b = view.project(q);
-    doc.save().lineWidth(0.6).strokeColor(INK.muted).dash(3, { space: 2 }).moveTo(a.x, a.y).lineTo(b.x, b.y).stroke().undash().restore();
+    doc
+      .save()
+      .lineWidth(0.6)
+      .strokeColor(INK.muted)
+      .dash(3, { space: 2 })
+      .moveTo(a.x, a.y)
+      .lineTo(b.x, b.y)
+      .stroke()
+      .undash()
+      .restore();
     const mmValue = Math.abs(delta[k]);
     const text = formatLength(mmValue, units);
     placeDimension(doc, view, placer, p, q, text, size, centroid, [12, 24], INK.muted);
@@ -284,7 +367,14 @@ function placeDimension(
   const dir = normalise(sub(to, from));
   // Offset along an iso axis square to the run, on either side, nearer and farther.
   const axisA = perpendicularAxis(dir);
-  const axisB = perpendicularAxis(dir, [{ x: 1, y: 0, z: 0 }, { x: 0, y: 1, z: 0 }, { x: 0, y: 0, z: 1 }].filter((v) => Math.abs(dot(v, axisA)) < 0.9));
+  const axisB = perpendicularAxis(
+    dir,
+    [
+      { x: 1, y: 0, z: 0 },
+      { x: 0, y: 1, z: 0 },
+      { x: 0, y: 0, z: 1 },
+    ].filter((v) => Math.abs(dot(v, axisA)) < 0.9),
+  );
   const mid = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
   const candidates: { offset: PagePoint; box: Rect }[] = [];
   doc.font('cond-bold').fontSize(size);
@@ -296,13 +386,22 @@ function placeDimension(
       if (l < 1e-6) continue;
       for (const sign of [1, -1]) {
         const off = { x: (sign * pd.u * d) / l, y: (-sign * pd.v * d) / l };
-        candidates.push({ offset: off, box: rotatedBox({ x: mid.x + off.x, y: mid.y + off.y }, a, b, tw, size + 2) });
+        candidates.push({
+          offset: off,
+          box: rotatedBox({ x: mid.x + off.x, y: mid.y + off.y }, a, b, tw, size + 2),
+        });
       }
     }
   }
   // Prefer the side away from the spool's middle, so dimensions sit outside the pipework.
   candidates.sort((p, q) => awayScore(q.offset, mid, centroid) - awayScore(p.offset, mid, centroid));
-  const stable = candidates.map((c, i) => ({ ...c, i })).sort((p, q) => distances.indexOf(closest(distances, p.offset)) - distances.indexOf(closest(distances, q.offset)) || p.i - q.i);
+  const stable = candidates
+    .map((c, i) => ({ ...c, i }))
+    .sort(
+      (p, q) =>
+        distances.indexOf(closest(distances, p.offset)) - distances.indexOf(closest(distances, q.offset)) ||
+        p.i - q.i,
+    );
   const chosen = stable[placer.place(stable.map((c) => c.box))]!;
   drawDimension(doc, a, b, chosen.offset, text, { size, color });
 }
@@ -373,7 +472,8 @@ function tagLabel(
   const h = size + 5;
   const dirs: PagePoint[] = [];
   if (preferred) dirs.push(preferred, { x: -preferred.x, y: -preferred.y });
-  for (let k = 0; k < 8; k += 1) dirs.push({ x: Math.cos((k * Math.PI) / 4 - Math.PI / 4), y: Math.sin((k * Math.PI) / 4 - Math.PI / 4) });
+  for (let k = 0; k < 8; k += 1)
+    dirs.push({ x: Math.cos((k * Math.PI) / 4 - Math.PI / 4), y: Math.sin((k * Math.PI) / 4 - Math.PI / 4) });
   const candidates: { c: PagePoint; box: Rect }[] = [];
   for (const dist of [16, 26, 38]) {
     for (const d of dirs) {
@@ -385,7 +485,10 @@ function tagLabel(
   doc.save();
   doc.lineWidth(0.5).strokeColor(INK.muted).moveTo(at.x, at.y).lineTo(c.x, c.y).stroke();
   if (style === 'rect') {
-    doc.lineWidth(0.8).rect(c.x - w / 2, c.y - h / 2, w, h).fillAndStroke('#ffffff', INK.black);
+    doc
+      .lineWidth(0.8)
+      .rect(c.x - w / 2, c.y - h / 2, w, h)
+      .fillAndStroke('#ffffff', INK.black);
   } else if (style === 'hex') {
     const hw = w / 2 + 2;
     const hh = h / 2;
@@ -400,10 +503,19 @@ function tagLabel(
       .closePath()
       .fillAndStroke('#ffffff', INK.black);
   } else {
-    doc.lineWidth(0.8).roundedRect(c.x - w / 2, c.y - h / 2, w, h, h / 2).fillAndStroke('#ffffff', INK.black);
+    doc
+      .lineWidth(0.8)
+      .roundedRect(c.x - w / 2, c.y - h / 2, w, h, h / 2)
+      .fillAndStroke('#ffffff', INK.black);
   }
   doc.restore();
-  drawText(doc, text, c.x - w / 2, c.y - size / 2 + 0.5, { font: 'cond-bold', size, width: w, align: 'center', color: INK.black });
+  drawText(doc, text, c.x - w / 2, c.y - size / 2 + 0.5, {
+    font: 'cond-bold',
+    size,
+    width: w,
+    align: 'center',
+    color: INK.black,
+  });
 }
 
 function drawNorthArrow(doc: PDFKit.PDFDocument, origin: PagePoint, sizes: TypeSizes): Rect {
@@ -418,7 +530,12 @@ function drawNorthArrow(doc: PDFKit.PDFDocument, origin: PagePoint, sizes: TypeS
     const d = isoProjectDirection(axis);
     const l = Math.hypot(d.u, d.v);
     const tip = { x: origin.x + (d.u / l) * len, y: origin.y - (d.v / l) * len };
-    doc.lineWidth(main ? 1.6 : 0.7).strokeColor(INK.black).moveTo(origin.x, origin.y).lineTo(tip.x, tip.y).stroke();
+    doc
+      .lineWidth(main ? 1.6 : 0.7)
+      .strokeColor(INK.black)
+      .moveTo(origin.x, origin.y)
+      .lineTo(tip.x, tip.y)
+      .stroke();
     const ux = (tip.x - origin.x) / len;
     const uy = (tip.y - origin.y) / len;
     const hw = main ? 3.2 : 2;

@@ -56,7 +56,11 @@ export function fitIsoViewport(points: Vec3[], frame: Rect, marginPt: number): I
   const innerW = Math.max(1, frame.w - 2 * marginPt);
   const innerH = Math.max(1, frame.h - 2 * marginPt);
   const nominal = 72 / 25.4 / 20;
-  const scale = Math.min(spanU > 1e-6 ? innerW / spanU : Infinity, spanV > 1e-6 ? innerH / spanV : Infinity, Infinity);
+  const scale = Math.min(
+    spanU > 1e-6 ? innerW / spanU : Infinity,
+    spanV > 1e-6 ? innerH / spanV : Infinity,
+    Infinity,
+  );
   const s = Number.isFinite(scale) ? scale : nominal;
   const cu = (minU + maxU) / 2;
   const cv = (minV + maxV) / 2;

@@ -9,7 +9,13 @@ export const PIPE_WIDTH = 2.6;
 export const SMALL_BORE_WIDTH = 1.5;
 
 /** Draws a polyline through projected plant points. */
-export function strokePolyline(doc: PDFKit.PDFDocument, view: IsoViewport, points: Vec3[], width: number, color: string = INK.pipe): void {
+export function strokePolyline(
+  doc: PDFKit.PDFDocument,
+  view: IsoViewport,
+  points: Vec3[],
+  width: number,
+  color: string = INK.pipe,
+): void {
   if (points.length < 2) return;
   const first = view.project(points[0]!);
   doc.save().lineWidth(width).lineCap('round').lineJoin('round').strokeColor(color);
@@ -22,7 +28,14 @@ export function strokePolyline(doc: PDFKit.PDFDocument, view: IsoViewport, point
 }
 
 /** A bar across the pipe at a point, drawn along an iso axis perpendicular to the pipe. */
-export function strokeBar(doc: PDFKit.PDFDocument, view: IsoViewport, at: Vec3, along: Vec3, halfLengthPt: number, width: number): void {
+export function strokeBar(
+  doc: PDFKit.PDFDocument,
+  view: IsoViewport,
+  at: Vec3,
+  along: Vec3,
+  halfLengthPt: number,
+  width: number,
+): void {
   const axis = perpendicularAxis(along);
   const c = view.project(at);
   const tip = view.project(add(at, axis));
@@ -41,24 +54,35 @@ export function strokeBar(doc: PDFKit.PDFDocument, view: IsoViewport, at: Vec3, 
 }
 
 /** Draws one component's body in single-line isometric. */
-export function drawComponentSymbol(doc: PDFKit.PDFDocument, view: IsoViewport, component: ComponentResult): void {
+export function drawComponentSymbol(
+  doc: PDFKit.PDFDocument,
+  view: IsoViewport,
+  component: ComponentResult,
+): void {
   const shape = component.shape;
   const width = isSmallBore(component) ? SMALL_BORE_WIDTH : PIPE_WIDTH;
   const ends = component.ends;
   switch (shape.type) {
     case 'elbow': {
       if (ends.length >= 2) {
-        strokePolyline(doc, view, arcPoints(shape.arcCentre, ends[0]!.point, ends[1]!.point, shape.planeNormal, 18), width);
-      }
-      if (shape.construction === 'mitre') {
-        // Mitre joints are welds; the engine lists them as welds, so the balloons mark them.
+        strokePolyline(
+          doc,
+          view,
+          arcPoints(shape.arcCentre, ends[0]!.point, ends[1]!.point, shape.planeNormal, 18),
+          width,
+        );
       }
       return;
     }
     case 'return': {
       if (ends.length >= 2) {
         const apex = add(shape.arcCentre, scale(normalise(ends[0]!.outward), -shape.bendRadiusMm));
-        strokePolyline(doc, view, arcPoints(shape.arcCentre, ends[0]!.point, ends[1]!.point, shape.planeNormal, 24, apex), width);
+        strokePolyline(
+          doc,
+          view,
+          arcPoints(shape.arcCentre, ends[0]!.point, ends[1]!.point, shape.planeNormal, 24, apex),
+          width,
+        );
       }
       return;
     }
@@ -101,8 +125,24 @@ export function drawComponentSymbol(doc: PDFKit.PDFDocument, view: IsoViewport, 
       if (weldEnd) strokePolyline(doc, view, [weldEnd.point, shape.faceCentre], width);
       const half = Math.max(6, Math.min(16, ((shape.odMm ?? 200) / 2) * view.scale));
       strokeBar(doc, view, shape.faceCentre, shape.outward, half, 2.4);
-      if (weldEnd) strokeBar(doc, view, lerpTowards(shape.faceCentre, weldEnd.point, 0.35), shape.outward, half * 0.55, 1.2);
-      if (shape.blind) strokeBar(doc, view, add(shape.faceCentre, scale(shape.outward, 6 / Math.max(view.scale, 1e-6))), shape.outward, half, 3);
+      if (weldEnd)
+        strokeBar(
+          doc,
+          view,
+          lerpTowards(shape.faceCentre, weldEnd.point, 0.35),
+          shape.outward,
+          half * 0.55,
+          1.2,
+        );
+      if (shape.blind)
+        strokeBar(
+          doc,
+          view,
+          add(shape.faceCentre, scale(shape.outward, 6 / Math.max(view.scale, 1e-6))),
+          shape.outward,
+          half,
+          3,
+        );
       return;
     }
     case 'cap':

@@ -40,10 +40,19 @@ export function paragraphBlock(spec: ParagraphSpec, start = 0): FlowBlock {
       doc.save();
       if (tone !== 'plain') {
         doc.rect(area.x, area.y, area.w, used).fill(tone === 'error' ? INK.warnFill : '#fff6f6');
-        doc.lineWidth(tone === 'error' ? 1.6 : 0.9).strokeColor(accent).rect(area.x, area.y, area.w, used).stroke();
+        doc
+          .lineWidth(tone === 'error' ? 1.6 : 0.9)
+          .strokeColor(accent)
+          .rect(area.x, area.y, area.w, used)
+          .stroke();
       }
       const title = start > 0 ? `${spec.title} (continued)` : spec.title;
-      drawText(doc, title.toUpperCase(), area.x + boxPad, area.y + boxPad, { font: 'cond-bold', size: size * 1.2, color: accent, width: innerW });
+      drawText(doc, title.toUpperCase(), area.x + boxPad, area.y + boxPad, {
+        font: 'cond-bold',
+        size: size * 1.2,
+        color: accent,
+        width: innerW,
+      });
       let py = area.y + boxPad + titleH;
       for (let k = 0; k < count; k += 1) {
         const i = start + k;
@@ -51,7 +60,12 @@ export function paragraphBlock(spec: ParagraphSpec, start = 0): FlowBlock {
           const marker = spec.list === 'numbered' ? `${i + 1}.` : '•';
           drawText(doc, marker, area.x + boxPad, py, { font: 'body-semibold', size, color: accent });
         }
-        drawText(doc, spec.paragraphs[i]!, area.x + boxPad + indent, py, { size, width: innerW - indent, wrap: true, lineGap: 1 });
+        drawText(doc, spec.paragraphs[i]!, area.x + boxPad + indent, py, {
+          size,
+          width: innerW - indent,
+          wrap: true,
+          lineGap: 1,
+        });
         py += heights[k]!;
       }
       doc.restore();

@@ -54,7 +54,27 @@ export interface SawListGroup {
   uncomputed: number;
 }
 
-const NPS_ORDER = ['1/2', '3/4', '1', '1-1/4', '1-1/2', '2', '2-1/2', '3', '4', '5', '6', '8', '10', '12', '14', '16', '18', '20', '24'];
+const NPS_ORDER = [
+  '1/2',
+  '3/4',
+  '1',
+  '1-1/4',
+  '1-1/2',
+  '2',
+  '2-1/2',
+  '3',
+  '4',
+  '5',
+  '6',
+  '8',
+  '10',
+  '12',
+  '14',
+  '16',
+  '18',
+  '20',
+  '24',
+];
 
 /**
  * Groups every piece of the chosen spools by size, schedule and material (largest size first),
@@ -68,7 +88,16 @@ export function sawListGroups(spools: SawListSpool[]): SawListGroup[] {
       const key = `${piece.nps}|${piece.schedule}|${piece.material}`;
       let group = groups.get(key);
       if (!group) {
-        group = { nps: piece.nps, schedule: piece.schedule, material: piece.material, pieces: [], count: 0, totalCutMm: 0, totalStockMm: 0, uncomputed: 0 };
+        group = {
+          nps: piece.nps,
+          schedule: piece.schedule,
+          material: piece.material,
+          pieces: [],
+          count: 0,
+          totalCutMm: 0,
+          totalStockMm: 0,
+          uncomputed: 0,
+        };
         groups.set(key, group);
       }
       group.pieces.push({ spoolMark: spool.mark, revisionLetter: spool.revisionLetter, piece });
@@ -78,7 +107,11 @@ export function sawListGroups(spools: SawListSpool[]): SawListGroup[] {
     group.pieces.sort((a, b) => {
       const la = a.piece.cutLengthMm ?? -Infinity;
       const lb = b.piece.cutLengthMm ?? -Infinity;
-      return lb - la || a.spoolMark.localeCompare(b.spoolMark) || a.piece.mark.localeCompare(b.piece.mark, undefined, { numeric: true });
+      return (
+        lb - la ||
+        a.spoolMark.localeCompare(b.spoolMark) ||
+        a.piece.mark.localeCompare(b.piece.mark, undefined, { numeric: true })
+      );
     });
     for (const { piece } of group.pieces) {
       if (piece.cutLengthMm === null) {
@@ -91,14 +124,22 @@ export function sawListGroups(spools: SawListSpool[]): SawListGroup[] {
     }
   }
   return [...groups.values()].sort(
-    (a, b) => NPS_ORDER.indexOf(b.nps) - NPS_ORDER.indexOf(a.nps) || a.schedule.localeCompare(b.schedule) || a.material.localeCompare(b.material),
+    (a, b) =>
+      NPS_ORDER.indexOf(b.nps) - NPS_ORDER.indexOf(a.nps) ||
+      a.schedule.localeCompare(b.schedule) ||
+      a.material.localeCompare(b.material),
   );
 }
 
 /** Renders the job saw list. */
-export async function renderSawList(input: SawListInput): Promise<{ pdf: Buffer; groups: SawListGroup[]; pageCount: number }> {
+export async function renderSawList(
+  input: SawListInput,
+): Promise<{ pdf: Buffer; groups: SawListGroup[]; pageCount: number }> {
   const { units } = input;
-  const sheet = new SheetDocument(input.paper, { title: `Saw list ${input.jobNumber}`, subject: input.jobTitle });
+  const sheet = new SheetDocument(input.paper, {
+    title: `Saw list ${input.jobNumber}`,
+    subject: input.jobTitle,
+  });
   const { doc, setup } = sheet;
   const sizes = typeSizes(setup);
   const groups = sawListGroups(input.spools);
@@ -108,11 +149,15 @@ export async function renderSawList(input: SawListInput): Promise<{ pdf: Buffer;
   const withErrors = input.spools.filter((s) => !s.result.ok);
   const marks: DocumentMarks = { diagonal: null, bands: [] };
   if (drafts.length > 0) {
-    marks.bands.push(`INCLUDES UNISSUED SPOOLS: ${drafts.map((s) => `${s.mark} rev ${s.revisionLetter} (${s.revisionState})`).join(', ')} — do not cut those pieces.`);
+    marks.bands.push(
+      `INCLUDES UNISSUED SPOOLS: ${drafts.map((s) => `${s.mark} rev ${s.revisionLetter} (${s.revisionState})`).join(', ')} — do not cut those pieces.`,
+    );
     marks.diagonal = 'DRAFT';
   }
   if (withErrors.length > 0) {
-    marks.bands.push(`NOT FOR FABRICATION: ${withErrors.map((s) => s.mark).join(', ')} ha${withErrors.length > 1 ? 've' : 's'} design errors.`);
+    marks.bands.push(
+      `NOT FOR FABRICATION: ${withErrors.map((s) => s.mark).join(', ')} ha${withErrors.length > 1 ? 've' : 's'} design errors.`,
+    );
     marks.diagonal = 'NOT FOR FABRICATION';
   }
   const bandH = sheet.bandHeight(marks);
@@ -122,7 +167,12 @@ export async function renderSawList(input: SawListInput): Promise<{ pdf: Buffer;
     const a = sheet.addPage('Saw list');
     const y = a.y + bandH + gap;
     const w = (a.w - gap * (columnsPerPage + 1)) / columnsPerPage;
-    return Array.from({ length: columnsPerPage }, (_, i) => ({ x: a.x + gap + i * (w + gap), y, w, h: a.y + a.h - y - gap }));
+    return Array.from({ length: columnsPerPage }, (_, i) => ({
+      x: a.x + gap + i * (w + gap),
+      y,
+      w,
+      h: a.y + a.h - y - gap,
+    }));
   };
 
   const blocks: FlowBlock[] = [];
@@ -159,7 +209,16 @@ export async function renderSawList(input: SawListInput): Promise<{ pdf: Buffer;
       };
     });
     rows.push({
-      cells: ['', `Total: ${g.count} pcs`, '', formatLength(g.totalCutMm, units), formatLength(g.totalStockMm, units), g.uncomputed ? `${g.uncomputed} not computed` : '', '', ''],
+      cells: [
+        '',
+        `Total: ${g.count} pcs`,
+        '',
+        formatLength(g.totalCutMm, units),
+        formatLength(g.totalStockMm, units),
+        g.uncomputed ? `${g.uncomputed} not computed` : '',
+        '',
+        '',
+      ],
       emphasis: 'total',
     });
     blocks.push(
@@ -194,13 +253,39 @@ export async function renderSawList(input: SawListInput): Promise<{ pdf: Buffer;
         { header: 'Stock incl. kerf', weight: 1.4, align: 'right', font: 'body-bold' },
       ],
       rows: [
-        ...groups.map((g) => ({ cells: [`NPS ${g.nps} · ${g.schedule} · ${g.material}`, String(g.count), formatLength(g.totalCutMm, units), formatLength(g.totalStockMm, units)] })),
-        { cells: ['All groups', String(totalCount), formatLength(groups.reduce((s, g) => s + g.totalCutMm, 0), units), formatLength(totalStock, units)], emphasis: 'total' as const },
+        ...groups.map((g) => ({
+          cells: [
+            `NPS ${g.nps} · ${g.schedule} · ${g.material}`,
+            String(g.count),
+            formatLength(g.totalCutMm, units),
+            formatLength(g.totalStockMm, units),
+          ],
+        })),
+        {
+          cells: [
+            'All groups',
+            String(totalCount),
+            formatLength(
+              groups.reduce((s, g) => s + g.totalCutMm, 0),
+              units,
+            ),
+            formatLength(totalStock, units),
+          ],
+          emphasis: 'total' as const,
+        },
       ],
       footnote: 'Stock assignment (nesting into stock lengths) is not part of this list yet.',
     }),
   );
-  blocks.push(paragraphBlock({ title: 'Cautions', paragraphs: [...SHEET_CAUTIONS], size: sizes.body, tone: 'caution', list: 'bullet' }));
+  blocks.push(
+    paragraphBlock({
+      title: 'Cautions',
+      paragraphs: [...SHEET_CAUTIONS],
+      size: sizes.body,
+      tone: 'caution',
+      list: 'bullet',
+    }),
+  );
 
   flowBlocks(doc, blocks, { first: columns(), addPage: columns }, gap * 1.5);
 

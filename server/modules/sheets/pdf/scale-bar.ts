@@ -27,11 +27,17 @@ export function drawScaleBar(
   const bars: ScaleBarGeometry[] = [];
   const barH = mm(3);
   let yy = y;
-  drawText(doc, 'THIS BAR IS 100 mm. Measure it before cutting: if it is not 100 mm, reprint at 100 % (actual size).', x, yy, {
-    font: 'body-semibold',
-    size,
-    color: INK.black,
-  });
+  drawText(
+    doc,
+    'THIS BAR IS 100 mm. Measure it before cutting: if it is not 100 mm, reprint at 100 % (actual size).',
+    x,
+    yy,
+    {
+      font: 'body-semibold',
+      size,
+      color: INK.black,
+    },
+  );
   yy += size * 1.4;
   bars.push(segmentedBar(doc, x, yy, 100, 10, barH, (i) => `${i * 10}`, size * 0.8));
   yy += barH + size + 2;
@@ -60,7 +66,12 @@ function segmentedBar(
   }
   doc.lineWidth(0.5).strokeColor(INK.black).rect(x, y, mm(lengthMm), barH).stroke();
   for (let i = 0; i <= steps; i += 1) {
-    drawText(doc, tick(i), x + mm(i * stepMm) - 10, y + barH + 1, { size: labelSize, width: 20, align: 'center', color: INK.muted });
+    drawText(doc, tick(i), x + mm(i * stepMm) - 10, y + barH + 1, {
+      size: labelSize,
+      width: 20,
+      align: 'center',
+      color: INK.muted,
+    });
   }
   doc.restore();
   return { x, y, width: mm(lengthMm), height: barH, lengthMm };

@@ -37,17 +37,35 @@ export function sheetMarks(header: SheetHeader, result: SpoolResult): DocumentMa
   const errors = result.issues.filter((i) => i.severity === 'error').length;
   const bands: string[] = [];
   const state = header.revision.state;
-  if (state === 'draft') bands.push(`DRAFT — revision ${header.revision.letter} is not issued. Do not fabricate from this sheet.`);
+  if (state === 'draft')
+    bands.push(`DRAFT — revision ${header.revision.letter} is not issued. Do not fabricate from this sheet.`);
   if (state === 'superseded') {
     const newer = header.history.find((h) => h.state === 'issued');
-    bands.push(`SUPERSEDED${newer ? ` by revision ${newer.letter}` : ''} — do not use. Get the current sheet.`);
+    bands.push(
+      `SUPERSEDED${newer ? ` by revision ${newer.letter}` : ''} — do not use. Get the current sheet.`,
+    );
   }
-  if (errors > 0) bands.push(`NOT FOR FABRICATION — the design has ${errors} error${errors > 1 ? 's' : ''} (listed on this sheet).`);
-  const diagonal = state === 'superseded' ? 'SUPERSEDED' : state === 'draft' ? (errors > 0 ? 'DRAFT · NOT FOR FABRICATION' : 'DRAFT') : errors > 0 ? 'NOT FOR FABRICATION' : null;
+  if (errors > 0)
+    bands.push(
+      `NOT FOR FABRICATION — the design has ${errors} error${errors > 1 ? 's' : ''} (listed on this sheet).`,
+    );
+  const diagonal =
+    state === 'superseded'
+      ? 'SUPERSEDED'
+      : state === 'draft'
+        ? errors > 0
+          ? 'DRAFT · NOT FOR FABRICATION'
+          : 'DRAFT'
+        : errors > 0
+          ? 'NOT FOR FABRICATION'
+          : null;
   return { diagonal, bands };
 }
 
-function rootDatum(design: SpoolDesign, result: SpoolResult): { label: string; position: SpoolResult['workPoints'][number]['position'] } {
+function rootDatum(
+  design: SpoolDesign,
+  result: SpoolResult,
+): { label: string; position: SpoolResult['workPoints'][number]['position'] } {
   const targets = new Set(design.runs.map((r) => r.to));
   const root = design.nodes.find((n) => !targets.has(n.id)) ?? design.nodes[0]!;
   const position = result.workPoints.find((w) => w.nodeId === root.id)?.position ?? design.origin;
@@ -75,7 +93,10 @@ function sheetNotes(input: SpoolSheetInput, templateProblems: string[]): string[
 /** Renders a spool's fabrication sheet: drawing, tables, flange views, notes, cautions and 1:1 templates. */
 export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolSheetOutput> {
   const { header, result, units, paper, design } = input;
-  const sheet = new SheetDocument(paper, { title: `Spool ${header.spoolMark} rev ${header.revision.letter}`, subject: `${header.jobNumber} ${header.jobTitle}` });
+  const sheet = new SheetDocument(paper, {
+    title: `Spool ${header.spoolMark} rev ${header.revision.letter}`,
+    subject: `${header.jobNumber} ${header.jobTitle}`,
+  });
   const { doc, setup } = sheet;
   const sizes = typeSizes(setup);
   const marks = sheetMarks(header, result);
@@ -91,7 +112,15 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
   const drawingW = crowded ? area.w : area.w * (large ? 0.6 : 0.56);
   const drawing: Rect = { x: area.x, y: top, w: drawingW, h: area.y + area.h - top };
   const dimensions = drawIsometric(doc, drawing, { result, units, sizes, flangeTags });
-  if (!crowded) doc.save().lineWidth(0.6).strokeColor(INK.rule).moveTo(area.x + drawingW, top).lineTo(area.x + drawingW, area.y + area.h).stroke().restore();
+  if (!crowded)
+    doc
+      .save()
+      .lineWidth(0.6)
+      .strokeColor(INK.rule)
+      .moveTo(area.x + drawingW, top)
+      .lineTo(area.x + drawingW, area.y + area.h)
+      .stroke()
+      .restore();
 
   const { figures, problems } = templateFigures(result, units);
   const gap = setup.gutter;
@@ -102,7 +131,8 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
   blocks.push(weightsBlock(result, units, rootDatum(design, result), tableSize));
   blocks.push(cutListBlock(result, units, tableSize));
   blocks.push(weldListBlock(result, tableSize));
-  if (result.flanges.length > 0) blocks.push(flangeDetailsBlock(result.flanges, flangeTags, units, tableSize));
+  if (result.flanges.length > 0)
+    blocks.push(flangeDetailsBlock(result.flanges, flangeTags, units, tableSize));
   const pairs = flangePairsBlock(result, flangeTags, units, tableSize);
   if (pairs) blocks.push(pairs);
   const overall = overallBlock(result, units, tableSize);
@@ -112,7 +142,12 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
   blocks.push(cautionsBlock(sizes.body));
 
   const rightX = area.x + drawingW + gap;
-  const firstColumn: Rect = { x: rightX, y: top + gap, w: area.x + area.w - rightX - gap, h: area.y + area.h - top - 2 * gap };
+  const firstColumn: Rect = {
+    x: rightX,
+    y: top + gap,
+    w: area.x + area.w - rightX - gap,
+    h: area.y + area.h - top - 2 * gap,
+  };
   const columnsPerPage = large ? 3 : 2;
   flowBlocks(
     doc,
@@ -123,7 +158,12 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
         const a = sheet.addPage('Lists, flanges and notes');
         const y = a.y + bandH + gap;
         const w = (a.w - gap * (columnsPerPage + 1)) / columnsPerPage;
-        return Array.from({ length: columnsPerPage }, (_, i) => ({ x: a.x + gap + i * (w + gap), y, w, h: a.y + a.h - y - gap }));
+        return Array.from({ length: columnsPerPage }, (_, i) => ({
+          x: a.x + gap + i * (w + gap),
+          y,
+          w,
+          h: a.y + a.h - y - gap,
+        }));
       },
     },
     gap * 1.5,
@@ -145,7 +185,12 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
       ['Status', header.spoolStatus],
       ['Drawn', header.drawnBy],
       ['Checked', header.checkedBy],
-      ['Date', header.revision.issuedAt ? `${formatSheetDate(header.revision.issuedAt)} issued` : `${formatSheetDate(header.printedAt)} printed`],
+      [
+        'Date',
+        header.revision.issuedAt
+          ? `${formatSheetDate(header.revision.issuedAt)} issued`
+          : `${formatSheetDate(header.printedAt)} printed`,
+      ],
       ['Units', units === 'mm' ? 'mm' : 'ft-in (1/16")'],
     ],
     qrUrl: header.spoolUrl,

@@ -23,7 +23,10 @@ export function drawDiagonalStamp(doc: PDFKit.PDFDocument, area: Rect, text: str
   doc.fontSize(size);
   const w = doc.widthOfString(text);
   doc.rotate(angle, { origin: [cx, cy] });
-  doc.fillOpacity(0.07).strokeOpacity(0.4).lineWidth(Math.max(0.8, size / 90));
+  doc
+    .fillOpacity(0.07)
+    .strokeOpacity(0.4)
+    .lineWidth(Math.max(0.8, size / 90));
   doc.fillColor(INK.warn).strokeColor(INK.warn);
   doc.text(text, cx - w / 2, cy - size * 0.6, { lineBreak: false, fill: true, stroke: true });
   doc.restore();

@@ -74,7 +74,12 @@ export function tableBlock(spec: TableSpec, startRow = 0): FlowBlock {
 
       let y = area.y;
       const title = startRow > 0 ? `${spec.title} (continued)` : spec.title;
-      drawText(doc, title.toUpperCase(), area.x, y, { font: 'cond-bold', size: size * 1.2, color: INK.black, width: area.w });
+      drawText(doc, title.toUpperCase(), area.x, y, {
+        font: 'cond-bold',
+        size: size * 1.2,
+        color: INK.black,
+        width: area.w,
+      });
       y += titleH;
 
       doc.save();
@@ -105,7 +110,11 @@ export function tableBlock(spec: TableSpec, startRow = 0): FlowBlock {
           if (c.checkbox) {
             if (!row.emphasis) {
               const b = size * 0.85;
-              doc.lineWidth(0.7).strokeColor(INK.black).rect(x + (widths[i]! - b) / 2, y + (rowH - b) / 2, b, b).stroke();
+              doc
+                .lineWidth(0.7)
+                .strokeColor(INK.black)
+                .rect(x + (widths[i]! - b) / 2, y + (rowH - b) / 2, b, b)
+                .stroke();
             }
             x += widths[i]!;
             return;
@@ -122,11 +131,20 @@ export function tableBlock(spec: TableSpec, startRow = 0): FlowBlock {
           x += widths[i]!;
         });
         if (row.emphasis === 'total') {
-          doc.lineWidth(0.8).strokeColor(INK.black).moveTo(area.x, y).lineTo(area.x + area.w, y).stroke();
+          doc
+            .lineWidth(0.8)
+            .strokeColor(INK.black)
+            .moveTo(area.x, y)
+            .lineTo(area.x + area.w, y)
+            .stroke();
         }
         y += thisH;
       }
-      doc.lineWidth(0.6).strokeColor(INK.rule).rect(area.x, area.y + titleH, area.w, y - area.y - titleH).stroke();
+      doc
+        .lineWidth(0.6)
+        .strokeColor(INK.rule)
+        .rect(area.x, area.y + titleH, area.w, y - area.y - titleH)
+        .stroke();
       doc.restore();
 
       const done = startRow + fit >= spec.rows.length;
@@ -137,12 +155,18 @@ export function tableBlock(spec: TableSpec, startRow = 0): FlowBlock {
       if (done && spec.footnote) {
         y += 2;
         y += measureWrapped(doc, spec.footnote, area.w, { size: size * 0.85 });
-        drawText(doc, spec.footnote, area.x, y - measureWrapped(doc, spec.footnote, area.w, { size: size * 0.85 }), {
-          size: size * 0.85,
-          color: INK.muted,
-          width: area.w,
-          wrap: true,
-        });
+        drawText(
+          doc,
+          spec.footnote,
+          area.x,
+          y - measureWrapped(doc, spec.footnote, area.w, { size: size * 0.85 }),
+          {
+            size: size * 0.85,
+            color: INK.muted,
+            width: area.w,
+            wrap: true,
+          },
+        );
       }
       return { used: y - area.y, rest: done ? null : tableBlock(spec, startRow + fit) };
     },

@@ -19,22 +19,36 @@ const BOM_CATEGORY: Record<string, string> = {
   'branch-outlet': 'Branch outlet',
 };
 
-const len = (mm: number | null, units: LengthUnits): string => (mm === null ? 'NOT COMPUTED' : formatLength(mm, units));
+const len = (mm: number | null, units: LengthUnits): string =>
+  mm === null ? 'NOT COMPUTED' : formatLength(mm, units);
 
 /** Cut list: one row per pipe piece with size, schedule, material, cut length and end preparations. */
 export function cutListBlock(result: SpoolResult, units: LengthUnits, size: number): FlowBlock {
   const rows: TableRow[] = result.pieces.map((p) => {
     const notes: string[] = [];
     if (p.shortPointLengthMm !== null) notes.push(`short point ${formatLength(p.shortPointLengthMm, units)}`);
-    if (p.fieldFitAllowanceMm > 0) notes.push(`incl. ${formatLength(p.fieldFitAllowanceMm, units)} field fit`);
+    if (p.fieldFitAllowanceMm > 0)
+      notes.push(`incl. ${formatLength(p.fieldFitAllowanceMm, units)} field fit`);
     if (p.heat) notes.push(`heat ${p.heat}`);
     return {
-      cells: [p.mark, p.nps, p.schedule, p.material, len(p.cutLengthMm, units), `${p.ends[0].label} / ${p.ends[1].label}`, notes.join('; ')],
+      cells: [
+        p.mark,
+        p.nps,
+        p.schedule,
+        p.material,
+        len(p.cutLengthMm, units),
+        `${p.ends[0].label} / ${p.ends[1].label}`,
+        notes.join('; '),
+      ],
       emphasis: p.cutLengthMm === null ? 'warn' : undefined,
     };
   });
   const total = result.pieces.reduce((s, p) => s + (p.cutLengthMm ?? 0), 0);
-  if (rows.length > 1) rows.push({ cells: ['Total', '', '', '', formatLength(total, units), `${rows.length} pieces`, ''], emphasis: 'total' });
+  if (rows.length > 1)
+    rows.push({
+      cells: ['Total', '', '', '', formatLength(total, units), `${rows.length} pieces`, ''],
+      emphasis: 'total',
+    });
   return tableBlock({
     title: 'Cut list',
     size,
@@ -55,7 +69,13 @@ export function cutListBlock(result: SpoolResult, units: LengthUnits, size: numb
 /** Weld list: joint mark, type, size, shop or field, what it joins. */
 export function weldListBlock(result: SpoolResult, size: number): FlowBlock {
   const rows: TableRow[] = result.welds.map((w) => ({
-    cells: [w.mark, WELD_TYPE[w.type] ?? w.type, `NPS ${w.nps}`, w.location === 'field' ? 'FIELD' : 'shop', w.joins],
+    cells: [
+      w.mark,
+      WELD_TYPE[w.type] ?? w.type,
+      `NPS ${w.nps}`,
+      w.location === 'field' ? 'FIELD' : 'shop',
+      w.joins,
+    ],
     emphasis: w.location === 'field' ? 'group' : undefined,
   }));
   const shop = result.welds.filter((w) => w.location === 'shop').length;
@@ -81,7 +101,9 @@ export function bomBlock(result: SpoolResult, units: LengthUnits, size: number):
       String(i + 1),
       BOM_CATEGORY[item.category] ?? item.category,
       item.description,
-      item.category === 'pipe' && item.totalCutMm !== null ? formatLength(item.totalCutMm, units) : String(item.count),
+      item.category === 'pipe' && item.totalCutMm !== null
+        ? formatLength(item.totalCutMm, units)
+        : String(item.count),
     ],
   }));
   return tableBlock({
@@ -103,7 +125,12 @@ export function overallBlock(result: SpoolResult, units: LengthUnits, size: numb
   if (!result.overall) return null;
   const { workPointBox: wp, envelopeBox: env } = result.overall;
   const row = (label: string, b: typeof wp): TableRow => ({
-    cells: [label, formatLength(b.sizeMm.x, units), formatLength(b.sizeMm.y, units), formatLength(b.sizeMm.z, units)],
+    cells: [
+      label,
+      formatLength(b.sizeMm.x, units),
+      formatLength(b.sizeMm.y, units),
+      formatLength(b.sizeMm.z, units),
+    ],
   });
   return tableBlock({
     title: 'Overall dimensions',

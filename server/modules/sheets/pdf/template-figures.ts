@@ -51,15 +51,22 @@ function stationCount(odMm: number): number {
 }
 
 /** Every template a spool needs: saddle and header hole per set-on branch, one per mitred bend. */
-export function templateFigures(result: SpoolResult, units: LengthUnits): { figures: TemplateFigure[]; problems: string[] } {
+export function templateFigures(
+  result: SpoolResult,
+  units: LengthUnits,
+): { figures: TemplateFigure[]; problems: string[] } {
   const L = (value: number) => formatLength(value, units);
   const figures: TemplateFigure[] = [];
   const problems: string[] = [];
   for (const c of result.components) {
     const shape = c.shape;
     if (shape.type === 'set-on-branch') {
-      const header = c.ends.find((e) => e.runId !== null && Math.abs(Math.abs(dot(e.outward, shape.headerAxis)) - 1) < 1e-3);
-      const branch = c.ends.find((e) => Math.abs(dot(e.outward, shape.branchAxis) - 1) < 1e-3) ?? c.ends[c.ends.length - 1];
+      const header = c.ends.find(
+        (e) => e.runId !== null && Math.abs(Math.abs(dot(e.outward, shape.headerAxis)) - 1) < 1e-3,
+      );
+      const branch =
+        c.ends.find((e) => Math.abs(dot(e.outward, shape.branchAxis) - 1) < 1e-3) ??
+        c.ends[c.ends.length - 1];
       const branchPiece = result.pieces.find((p) => branch?.runId && p.runIds.includes(branch.runId));
       const headerOd = header?.odMm ?? null;
       const branchOd = branch?.odMm ?? null;
@@ -91,8 +98,16 @@ export function templateFigures(result: SpoolResult, units: LengthUnits): { figu
       const label = `NPS ${shape.branchNps} on NPS ${header?.nps ?? c.nps ?? '?'}`;
       // Branch saddle: wrap round the branch, datum square line at the top, cut line below.
       const wrap = t.branchCircumferenceMm;
-      const stations = t.stations.map((s) => ({ x: s.branchWrapMm, y: s.branchCutBackMm, label: `${s.index}`, ordinateMm: s.branchCutBackMm }));
-      const outline = [...fineStations.map((s) => ({ x: s.branchWrapMm, y: s.branchCutBackMm })), { x: wrap, y: t.stations[0]!.branchCutBackMm }];
+      const stations = t.stations.map((s) => ({
+        x: s.branchWrapMm,
+        y: s.branchCutBackMm,
+        label: `${s.index}`,
+        ordinateMm: s.branchCutBackMm,
+      }));
+      const outline = [
+        ...fineStations.map((s) => ({ x: s.branchWrapMm, y: s.branchCutBackMm })),
+        { x: wrap, y: t.stations[0]!.branchCutBackMm },
+      ];
       figures.push({
         kind: 'branch-saddle',
         title: `Branch saddle ${c.nodeId} · ${label}`,
@@ -103,14 +118,20 @@ export function templateFigures(result: SpoolResult, units: LengthUnits): { figu
         outline,
         closed: false,
         stations,
-        guides: [{ from: { x: 0, y: 0 }, to: { x: wrap, y: 0 }, label: 'DATUM — square line round the branch' }],
+        guides: [
+          { from: { x: 0, y: 0 }, to: { x: wrap, y: 0 }, label: 'DATUM — square line round the branch' },
+        ],
         wrapEndMm: wrap,
         instructions: [
           'Cut out along the outer edge and the cut line. Wrap the datum edge square round the branch end, stations 0 at the top (over the header crest); tape the tab under the start.',
           'Scribe along the cut line, remove the template, cut on the waste side and bevel to the WPS.',
           t.angleOrigin,
         ],
-        facts: [`Branch OD ${L(branchOd)}, header OD ${L(headerOd)}`, `Deepest cut-back ${L(t.maxCutBackMm)}`, ...t.notes],
+        facts: [
+          `Branch OD ${L(branchOd)}, header OD ${L(headerOd)}`,
+          `Deepest cut-back ${L(t.maxCutBackMm)}`,
+          ...t.notes,
+        ],
       });
       // Header hole: the outline round the header (x) and along it (y), crest line and branch centreline as guides.
       const hole = fineStations.map((s) => ({ x: s.headerHoleArcMm, y: s.headerHoleAlongMm }));
@@ -130,8 +151,16 @@ export function templateFigures(result: SpoolResult, units: LengthUnits): { figu
         closed: true,
         stations: [],
         guides: [
-          { from: { x: 0, y: minY - extra * 0.8 }, to: { x: 0, y: maxY + extra * 0.8 }, label: 'HEADER CREST LINE' },
-          { from: { x: minX - extra * 0.8, y: 0 }, to: { x: maxX + extra * 0.8, y: 0 }, label: 'BRANCH CENTRELINE' },
+          {
+            from: { x: 0, y: minY - extra * 0.8 },
+            to: { x: 0, y: maxY + extra * 0.8 },
+            label: 'HEADER CREST LINE',
+          },
+          {
+            from: { x: minX - extra * 0.8, y: 0 },
+            to: { x: maxX + extra * 0.8, y: 0 },
+            label: 'BRANCH CENTRELINE',
+          },
         ],
         wrapEndMm: null,
         instructions: [
@@ -149,15 +178,34 @@ export function templateFigures(result: SpoolResult, units: LengthUnits): { figu
         continue;
       }
       const welds = shape.mitreWelds ?? 2;
-      const calc = mitreTemplate({ odMm: od, bendAngleDeg: shape.angleDeg, pieces: welds + 1, stations: stationCount(od), radiusMm: shape.bendRadiusMm });
+      const calc = mitreTemplate({
+        odMm: od,
+        bendAngleDeg: shape.angleDeg,
+        pieces: welds + 1,
+        stations: stationCount(od),
+        radiusMm: shape.bendRadiusMm,
+      });
       if (!calc.ok) {
         problems.push(`No template for mitred bend ${c.nodeId}: ${calc.message}`);
         continue;
       }
       const t = calc.value;
-      const stations = t.stations.map((s) => ({ x: s.wrapMm, y: s.ordinateMm, label: `${s.index}`, ordinateMm: s.ordinateMm }));
-      const fine = mitreTemplate({ odMm: od, bendAngleDeg: shape.angleDeg, pieces: welds + 1, stations: 360 });
-      const outline = [...(fine.ok ? fine.value.stations : t.stations).map((s) => ({ x: s.wrapMm, y: s.ordinateMm })), { x: t.circumferenceMm, y: 0 }];
+      const stations = t.stations.map((s) => ({
+        x: s.wrapMm,
+        y: s.ordinateMm,
+        label: `${s.index}`,
+        ordinateMm: s.ordinateMm,
+      }));
+      const fine = mitreTemplate({
+        odMm: od,
+        bendAngleDeg: shape.angleDeg,
+        pieces: welds + 1,
+        stations: 360,
+      });
+      const outline = [
+        ...(fine.ok ? fine.value.stations : t.stations).map((s) => ({ x: s.wrapMm, y: s.ordinateMm })),
+        { x: t.circumferenceMm, y: 0 },
+      ];
       figures.push({
         kind: 'mitre',
         title: `Mitre cut ${c.nodeId} · ${Number(t.cutAngleDeg.toFixed(2))}° from square · NPS ${c.nps ?? '?'}`,
@@ -168,7 +216,13 @@ export function templateFigures(result: SpoolResult, units: LengthUnits): { figu
         outline,
         closed: false,
         stations,
-        guides: [{ from: { x: 0, y: 0 }, to: { x: t.circumferenceMm, y: 0 }, label: 'DATUM — square line through the throat' }],
+        guides: [
+          {
+            from: { x: 0, y: 0 },
+            to: { x: t.circumferenceMm, y: 0 },
+            label: 'DATUM — square line through the throat',
+          },
+        ],
         wrapEndMm: t.circumferenceMm,
         instructions: [
           'Wrap the datum edge square round the pipe, station 0 on the throat (inside of the bend); tape the tab under the start.',
@@ -177,7 +231,10 @@ export function templateFigures(result: SpoolResult, units: LengthUnits): { figu
         ],
         facts: [
           `OD ${L(od)}, long-to-short ${L(t.longShortDifferenceMm)}`,
-          ...(t.pieces ?? []).map((p) => `Piece ${p.index + 1} (${p.kind}): centreline ${L(p.centrelineMm)}, throat ${L(p.throatMm)}, back ${L(p.backMm)}`),
+          ...(t.pieces ?? []).map(
+            (p) =>
+              `Piece ${p.index + 1} (${p.kind}): centreline ${L(p.centrelineMm)}, throat ${L(p.throatMm)}, back ${L(p.backMm)}`,
+          ),
         ],
       });
     }

@@ -9,7 +9,13 @@ import { drawText, measureWrapped } from './text';
 
 /** What the template pages drew: per page, its scale bars (for checking the print scale). */
 export interface TemplatePagesReport {
-  pages: { pageIndex: number; figure: string; tiles: string[]; tileCount: number; scaleBars: ScaleBarGeometry[] }[];
+  pages: {
+    pageIndex: number;
+    figure: string;
+    tiles: string[];
+    tileCount: number;
+    scaleBars: ScaleBarGeometry[];
+  }[];
 }
 
 const OVERLAP_MM = 10;
@@ -31,7 +37,12 @@ export function drawTemplatePages(
   for (const figure of figures) {
     const probe = sheet.contentArea();
     const stripH = headerStripHeight(sheet.doc, figure, probe.w, sizes.body, units);
-    const usable: Rect = { x: probe.x + 4, y: probe.y + topInset + stripH, w: probe.w - 8, h: probe.h - topInset - stripH - 4 };
+    const usable: Rect = {
+      x: probe.x + 4,
+      y: probe.y + topInset + stripH,
+      w: probe.w - 8,
+      h: probe.h - topInset - stripH - 4,
+    };
     const areaW = usable.w / mm(1);
     const areaH = (usable.h - labelH) / mm(1);
     const tiles = tileFigure(figure, areaW, areaH);
@@ -50,25 +61,49 @@ export function drawTemplatePages(
         index += 1;
       }
       const names = onPage.map((t) => t.name).join(', ');
-      const area = sheet.addPage(`Template 1:1 · ${figure.kind} · tile${onPage.length > 1 ? 's' : ''} ${names} of ${total}`);
+      const area = sheet.addPage(
+        `Template 1:1 · ${figure.kind} · tile${onPage.length > 1 ? 's' : ''} ${names} of ${total}`,
+      );
       const doc = sheet.doc;
       const y = area.y + topInset + 4;
-      drawText(doc, `${figure.title} — FULL SIZE 1:1`, area.x + 6, y, { font: 'cond-bold', size: sizes.heading * 1.2, width: area.w * 0.6 });
+      drawText(doc, `${figure.title} — FULL SIZE 1:1`, area.x + 6, y, {
+        font: 'cond-bold',
+        size: sizes.heading * 1.2,
+        width: area.w * 0.6,
+      });
       drawText(
         doc,
-        total > 1 ? `${total} tiles, overlap ${formatLength(OVERLAP_MM, units)} at each join: cut each tile out, lay them edge over dashed line, tape.` : 'One piece: cut it out along its border.',
+        total > 1
+          ? `${total} tiles, overlap ${formatLength(OVERLAP_MM, units)} at each join: cut each tile out, lay them edge over dashed line, tape.`
+          : 'One piece: cut it out along its border.',
         area.x + 6,
         y + sizes.heading * 1.5,
         { font: 'body-semibold', size: sizes.body, width: area.w * 0.6 },
       );
       const text = [...figure.instructions, ...figure.facts, SHORT_CAUTION].join('  ');
-      drawText(doc, text, area.x + 6, y + sizes.heading * 1.5 + sizes.body * 1.6, { size: sizes.small, width: area.w * 0.6 - 6, wrap: true, lineGap: 0.5 });
+      drawText(doc, text, area.x + 6, y + sizes.heading * 1.5 + sizes.body * 1.6, {
+        size: sizes.small,
+        width: area.w * 0.6 - 6,
+        wrap: true,
+        lineGap: 0.5,
+      });
       const bar = drawScaleBar(doc, area.x + area.w * 0.62, y, sizes.body, units === 'ft-in');
-      report.pages.push({ pageIndex: sheet.pageCount - 1, figure: figure.title, tiles: onPage.map((t) => t.name), tileCount: total, scaleBars: bar.bars });
+      report.pages.push({
+        pageIndex: sheet.pageCount - 1,
+        figure: figure.title,
+        tiles: onPage.map((t) => t.name),
+        tileCount: total,
+        scaleBars: bar.bars,
+      });
 
       let ty = usable.y;
       for (const tile of onPage) {
-        if (total > 1) drawText(doc, `Tile ${tile.name} of ${total}`, usable.x, ty, { font: 'cond-bold', size: sizes.small, color: INK.black });
+        if (total > 1)
+          drawText(doc, `Tile ${tile.name} of ${total}`, usable.x, ty, {
+            font: 'cond-bold',
+            size: sizes.small,
+            color: INK.black,
+          });
         const box: Rect = { x: usable.x, y: ty + labelH, w: mm(tile.w), h: mm(tile.h) };
         drawTile(doc, box, figure, tile.x, tile.y, units, sizes.small);
         drawJoinMarks(doc, box, tile, sizes.small);
@@ -93,7 +128,11 @@ interface Tile {
 }
 
 /** Cuts a figure into windows no larger than the printable area, overlapping by 10 mm. */
-export function tileFigure(figure: Pick<TemplateFigure, 'widthMm' | 'heightMm'>, areaW: number, areaH: number): Tile[] {
+export function tileFigure(
+  figure: Pick<TemplateFigure, 'widthMm' | 'heightMm'>,
+  areaW: number,
+  areaH: number,
+): Tile[] {
   const nx = figure.widthMm <= areaW ? 1 : Math.ceil((figure.widthMm - OVERLAP_MM) / (areaW - OVERLAP_MM));
   const ny = figure.heightMm <= areaH ? 1 : Math.ceil((figure.heightMm - OVERLAP_MM) / (areaH - OVERLAP_MM));
   const name = (r: number, c: number) => `${String.fromCharCode(65 + r)}${c + 1}`;
@@ -121,10 +160,26 @@ export function tileFigure(figure: Pick<TemplateFigure, 'widthMm' | 'heightMm'>,
 function drawJoinMarks(doc: PDFKit.PDFDocument, box: Rect, tile: Tile, size: number): void {
   const ov = mm(OVERLAP_MM);
   doc.save().lineWidth(0.5).strokeColor(INK.muted).dash(4, { space: 3 });
-  if (tile.left) doc.moveTo(box.x + ov, box.y).lineTo(box.x + ov, box.y + box.h).stroke();
-  if (tile.right) doc.moveTo(box.x + box.w - ov, box.y).lineTo(box.x + box.w - ov, box.y + box.h).stroke();
-  if (tile.above) doc.moveTo(box.x, box.y + ov).lineTo(box.x + box.w, box.y + ov).stroke();
-  if (tile.below) doc.moveTo(box.x, box.y + box.h - ov).lineTo(box.x + box.w, box.y + box.h - ov).stroke();
+  if (tile.left)
+    doc
+      .moveTo(box.x + ov, box.y)
+      .lineTo(box.x + ov, box.y + box.h)
+      .stroke();
+  if (tile.right)
+    doc
+      .moveTo(box.x + box.w - ov, box.y)
+      .lineTo(box.x + box.w - ov, box.y + box.h)
+      .stroke();
+  if (tile.above)
+    doc
+      .moveTo(box.x, box.y + ov)
+      .lineTo(box.x + box.w, box.y + ov)
+      .stroke();
+  if (tile.below)
+    doc
+      .moveTo(box.x, box.y + box.h - ov)
+      .lineTo(box.x + box.w, box.y + box.h - ov)
+      .stroke();
   doc.undash().restore();
   const style = { font: 'cond-semibold' as const, size, color: INK.muted };
   const rightText = (t: string, yy: number) => {
@@ -133,18 +188,39 @@ function drawJoinMarks(doc: PDFKit.PDFDocument, box: Rect, tile: Tile, size: num
   };
   if (tile.left) rightText(`joins ${tile.left} on the left`, box.y - size - 4);
   if (tile.right) rightText(`Lay ${tile.right} over this end, up to the dashed line`, box.y + box.h + 2);
-  if (tile.above) drawText(doc, `Lay ${tile.above} over this edge, up to the dashed line`, box.x + 3, box.y + ov + 2, style);
+  if (tile.above)
+    drawText(
+      doc,
+      `Lay ${tile.above} over this edge, up to the dashed line`,
+      box.x + 3,
+      box.y + ov + 2,
+      style,
+    );
   doc.save().lineWidth(0.6).strokeColor(INK.rule).rect(box.x, box.y, box.w, box.h).stroke().restore();
 }
 
-function headerStripHeight(doc: PDFKit.PDFDocument, figure: TemplateFigure, width: number, size: number, units: LengthUnits): number {
+function headerStripHeight(
+  doc: PDFKit.PDFDocument,
+  figure: TemplateFigure,
+  width: number,
+  size: number,
+  units: LengthUnits,
+): number {
   const text = [...figure.instructions, ...figure.facts, SHORT_CAUTION].join('  ');
   const textH = measureWrapped(doc, text, width * 0.6 - 6, { size: size * 0.88, lineGap: 0.5 });
   const barH = units === 'ft-in' ? mm(26) : mm(16);
   return Math.max(textH + size * 4.5, barH) + 8;
 }
 
-function drawTile(doc: PDFKit.PDFDocument, area: Rect, figure: TemplateFigure, ox: number, oy: number, units: LengthUnits, size: number): void {
+function drawTile(
+  doc: PDFKit.PDFDocument,
+  area: Rect,
+  figure: TemplateFigure,
+  ox: number,
+  oy: number,
+  units: LengthUnits,
+  size: number,
+): void {
   // Figure mm → page pt at exactly 1:1.
   const P = (p: TemplatePoint) => ({
     x: area.x + mm(figure.originMm.x + p.x - ox),
@@ -155,7 +231,11 @@ function drawTile(doc: PDFKit.PDFDocument, area: Rect, figure: TemplateFigure, o
 
   // Figure border (cut-out edge of the paper template).
   const tl = P({ x: -figure.originMm.x + 4, y: -figure.originMm.y + 4 });
-  doc.lineWidth(0.4).strokeColor(INK.faint).rect(tl.x, tl.y, mm(figure.widthMm - 8), mm(figure.heightMm - 8)).stroke();
+  doc
+    .lineWidth(0.4)
+    .strokeColor(INK.faint)
+    .rect(tl.x, tl.y, mm(figure.widthMm - 8), mm(figure.heightMm - 8))
+    .stroke();
 
   for (const guide of figure.guides) {
     const a = P(guide.from);
@@ -163,23 +243,49 @@ function drawTile(doc: PDFKit.PDFDocument, area: Rect, figure: TemplateFigure, o
     doc.lineWidth(0.8).strokeColor(INK.black).moveTo(a.x, a.y).lineTo(b.x, b.y).stroke();
     // Over a station row the label goes above the station numbers.
     const lift = figure.stations.length > 0 ? 2 * size + 5 : size + 2;
-    drawText(doc, guide.label, Math.min(a.x, b.x) + 4, Math.min(a.y, b.y) - lift, { font: 'cond-semibold', size, color: INK.black });
+    drawText(doc, guide.label, Math.min(a.x, b.x) + 4, Math.min(a.y, b.y) - lift, {
+      font: 'cond-semibold',
+      size,
+      color: INK.black,
+    });
   }
   if (figure.wrapEndMm !== null) {
     const a = P({ x: figure.wrapEndMm, y: -6 });
     const b = P({ x: figure.wrapEndMm, y: figure.heightMm - figure.originMm.y - 6 });
-    doc.lineWidth(0.8).strokeColor(INK.black).dash(2, { space: 2 }).moveTo(a.x, a.y).lineTo(b.x, b.y).stroke().undash();
-    drawText(doc, 'END OF WRAP: tape tab under station 0', a.x + 3, a.y + 2, { font: 'cond-semibold', size, color: INK.muted, width: mm(18), wrap: true });
+    doc
+      .lineWidth(0.8)
+      .strokeColor(INK.black)
+      .dash(2, { space: 2 })
+      .moveTo(a.x, a.y)
+      .lineTo(b.x, b.y)
+      .stroke()
+      .undash();
+    drawText(doc, 'END OF WRAP: tape tab under station 0', a.x + 3, a.y + 2, {
+      font: 'cond-semibold',
+      size,
+      color: INK.muted,
+      width: mm(18),
+      wrap: true,
+    });
   }
   // Station lines and ordinates.
   for (const s of figure.stations) {
     const a = P({ x: s.x, y: 0 });
     const b = P({ x: s.x, y: s.y });
     doc.lineWidth(0.35).strokeColor(INK.muted).moveTo(a.x, a.y).lineTo(b.x, b.y).stroke();
-    drawText(doc, s.label, a.x - 10, a.y - size - 1.5, { font: 'cond-bold', size, width: 20, align: 'center' });
+    drawText(doc, s.label, a.x - 10, a.y - size - 1.5, {
+      font: 'cond-bold',
+      size,
+      width: 20,
+      align: 'center',
+    });
     doc.save();
     doc.rotate(90, { origin: [b.x, b.y] });
-    drawText(doc, formatLength(s.ordinateMm, units), b.x + 3, b.y - size - 1, { font: 'cond-semibold', size: size * 0.95, color: INK.dim });
+    drawText(doc, formatLength(s.ordinateMm, units), b.x + 3, b.y - size - 1, {
+      font: 'cond-semibold',
+      size: size * 0.95,
+      color: INK.dim,
+    });
     doc.restore();
   }
   // The cut line.

@@ -13,8 +13,17 @@ export interface TextStyle {
 }
 
 /** Writes text with its top at (x, y); returns the height used. One line unless `wrap`. */
-export function drawText(doc: PDFKit.PDFDocument, value: string, x: number, y: number, style: TextStyle): number {
-  doc.font(style.font ?? 'body').fontSize(style.size).fillColor(style.color ?? INK.text);
+export function drawText(
+  doc: PDFKit.PDFDocument,
+  value: string,
+  x: number,
+  y: number,
+  style: TextStyle,
+): number {
+  doc
+    .font(style.font ?? 'body')
+    .fontSize(style.size)
+    .fillColor(style.color ?? INK.text);
   const options: PDFKit.Mixins.TextOptions = {
     width: style.width,
     align: style.align ?? 'left',
@@ -25,19 +34,29 @@ export function drawText(doc: PDFKit.PDFDocument, value: string, x: number, y: n
   if (!style.wrap && style.width !== undefined && doc.widthOfString(value) > style.width) {
     value = fitToWidth(doc, value, style.width);
   }
-  const height = style.wrap && style.width !== undefined ? doc.heightOfString(value, options) : doc.currentLineHeight();
+  const height =
+    style.wrap && style.width !== undefined ? doc.heightOfString(value, options) : doc.currentLineHeight();
   doc.text(value, x, y, options);
   return height;
 }
 
 /** Height a wrapped paragraph will take at a width. */
-export function measureWrapped(doc: PDFKit.PDFDocument, value: string, width: number, style: TextStyle): number {
+export function measureWrapped(
+  doc: PDFKit.PDFDocument,
+  value: string,
+  width: number,
+  style: TextStyle,
+): number {
   doc.font(style.font ?? 'body').fontSize(style.size);
   return doc.heightOfString(value, { width, lineGap: style.lineGap ?? 0 });
 }
 
 /** Width of a one-line string in a style. */
-export function measureWidth(doc: PDFKit.PDFDocument, value: string, style: Pick<TextStyle, 'font' | 'size'>): number {
+export function measureWidth(
+  doc: PDFKit.PDFDocument,
+  value: string,
+  style: Pick<TextStyle, 'font' | 'size'>,
+): number {
   doc.font(style.font ?? 'body').fontSize(style.size);
   return doc.widthOfString(value);
 }

@@ -66,16 +66,30 @@ export function drawTitleBlock(
     cursor += w;
   }
   doc.lineWidth(0.6);
-  for (const x of xs) doc.moveTo(x, y).lineTo(x, y + h).stroke();
+  for (const x of xs)
+    doc
+      .moveTo(x, y)
+      .lineTo(x, y + h)
+      .stroke();
 
   if (fields.qrUrl) {
     const qrSize = h - 2 * pad - t.tiny - 1;
     drawQrCode(doc, fields.qrUrl, frame.x + (h - qrSize) / 2, y + pad, qrSize);
-    drawText(doc, 'Scan: spool page', frame.x, y + h - pad - t.tiny, { size: t.tiny, color: INK.muted, width: h, align: 'center' });
+    drawText(doc, 'Scan: spool page', frame.x, y + h - pad - t.tiny, {
+      size: t.tiny,
+      color: INK.muted,
+      width: h,
+      align: 'center',
+    });
   }
 
   const label = (value: string, x: number, yy: number, w: number) =>
-    drawText(doc, value.toUpperCase(), x, yy, { font: 'cond-semibold', size: t.tiny, color: INK.muted, width: w });
+    drawText(doc, value.toUpperCase(), x, yy, {
+      font: 'cond-semibold',
+      size: t.tiny,
+      color: INK.muted,
+      width: w,
+    });
 
   // 1: shop, client, job, site.
   {
@@ -100,8 +114,18 @@ export function drawTitleBlock(
     const w = widths[1]! - 2 * pad;
     label(fields.markLabel, x, y + pad, w);
     drawText(doc, fields.mark, x, y + pad + t.tiny + 2, { font: 'cond-bold', size: t.title, width: w });
-    drawText(doc, fields.subMark, x, y + pad + t.tiny + 4 + t.title * 1.15, { font: 'body-medium', size: t.small, width: w, wrap: false });
-    drawText(doc, fields.pageTitle, x, y + h - pad - t.small, { font: 'cond-semibold', size: t.small, color: INK.muted, width: w });
+    drawText(doc, fields.subMark, x, y + pad + t.tiny + 4 + t.title * 1.15, {
+      font: 'body-medium',
+      size: t.small,
+      width: w,
+      wrap: false,
+    });
+    drawText(doc, fields.pageTitle, x, y + h - pad - t.small, {
+      font: 'cond-semibold',
+      size: t.small,
+      color: INK.muted,
+      width: w,
+    });
   }
 
   // 3: revision letter and history.
@@ -111,7 +135,11 @@ export function drawTitleBlock(
     const letterW = fields.revisionLetter ? t.title * 1.6 : 0;
     if (fields.revisionLetter) {
       label('Rev', x, y + pad, letterW);
-      drawText(doc, fields.revisionLetter, x, y + pad + t.tiny + 2, { font: 'cond-bold', size: t.title, width: letterW });
+      drawText(doc, fields.revisionLetter, x, y + pad + t.tiny + 2, {
+        font: 'cond-bold',
+        size: t.title,
+        width: letterW,
+      });
     }
     if (fields.revisionState) {
       const stateText = STATE_LABEL[fields.revisionState];
@@ -120,40 +148,57 @@ export function drawTitleBlock(
       const bw = w - letterW;
       const bh = t.small + 4;
       doc.rect(bx, y + pad, bw, bh).fill(warn ? INK.warn : INK.black);
-      drawText(doc, stateText, bx + 3, y + pad + 2, { font: 'cond-bold', size: t.small, color: '#ffffff', width: bw - 6 });
+      drawText(doc, stateText, bx + 3, y + pad + 2, {
+        font: 'cond-bold',
+        size: t.small,
+        color: '#ffffff',
+        width: bw - 6,
+      });
     }
     // History rows, newest first, as many as fit.
     if (!fields.revisionLetter && fields.history.length === 0) {
       label('Revision', x, y + pad, w);
-      drawText(doc, 'Not revisioned: printed from the current revision of each spool (listed on the sheet).', x, y + pad + t.tiny + 3, {
-        size: t.small,
-        width: w,
-        wrap: true,
-      });
+      drawText(
+        doc,
+        'Not revisioned: printed from the current revision of each spool (listed on the sheet).',
+        x,
+        y + pad + t.tiny + 3,
+        {
+          size: t.small,
+          width: w,
+          wrap: true,
+        },
+      );
     } else {
-    const rowH = t.tiny + 2.5;
-    let yy = y + pad + t.small + 8;
-    const hx = x + letterW;
-    const hw = w - letterW;
-    const cols = [0, 0.12, 0.36, 0.62].map((f) => hx + f * hw);
-    label('Rev', cols[0]!, yy, 0.12 * hw);
-    label('State', cols[1]!, yy, 0.24 * hw);
-    label('Date', cols[2]!, yy, 0.26 * hw);
-    label('Note', cols[3]!, yy, 0.38 * hw);
-    yy += rowH;
-    const maxRows = Math.max(0, Math.floor((y + h - pad - yy) / rowH));
-    const rows = fields.history.slice(0, maxRows);
-    for (const entry of rows) {
-      const style = { size: t.tiny, font: entry.letter === fields.revisionLetter ? ('body-bold' as const) : ('body' as const) };
-      drawText(doc, entry.letter, cols[0]!, yy, { ...style, width: 0.12 * hw });
-      drawText(doc, entry.state, cols[1]!, yy, { ...style, width: 0.24 * hw - 2 });
-      drawText(doc, formatSheetDate(entry.issuedAt), cols[2]!, yy, { ...style, width: 0.26 * hw - 2 });
-      drawText(doc, entry.note || '—', cols[3]!, yy, { ...style, width: 0.38 * hw });
+      const rowH = t.tiny + 2.5;
+      let yy = y + pad + t.small + 8;
+      const hx = x + letterW;
+      const hw = w - letterW;
+      const cols = [0, 0.12, 0.36, 0.62].map((f) => hx + f * hw);
+      label('Rev', cols[0]!, yy, 0.12 * hw);
+      label('State', cols[1]!, yy, 0.24 * hw);
+      label('Date', cols[2]!, yy, 0.26 * hw);
+      label('Note', cols[3]!, yy, 0.38 * hw);
       yy += rowH;
-    }
-    if (fields.history.length > rows.length) {
-      drawText(doc, `+${fields.history.length - rows.length} older`, cols[3]!, y + h - pad - t.tiny, { size: t.tiny, color: INK.muted });
-    }
+      const maxRows = Math.max(0, Math.floor((y + h - pad - yy) / rowH));
+      const rows = fields.history.slice(0, maxRows);
+      for (const entry of rows) {
+        const style = {
+          size: t.tiny,
+          font: entry.letter === fields.revisionLetter ? ('body-bold' as const) : ('body' as const),
+        };
+        drawText(doc, entry.letter, cols[0]!, yy, { ...style, width: 0.12 * hw });
+        drawText(doc, entry.state, cols[1]!, yy, { ...style, width: 0.24 * hw - 2 });
+        drawText(doc, formatSheetDate(entry.issuedAt), cols[2]!, yy, { ...style, width: 0.26 * hw - 2 });
+        drawText(doc, entry.note || '—', cols[3]!, yy, { ...style, width: 0.38 * hw });
+        yy += rowH;
+      }
+      if (fields.history.length > rows.length) {
+        drawText(doc, `+${fields.history.length - rows.length} older`, cols[3]!, y + h - pad - t.tiny, {
+          size: t.tiny,
+          color: INK.muted,
+        });
+      }
     }
   }
 
@@ -167,7 +212,12 @@ export function drawTitleBlock(
       const labelW = w * 0.38;
       label(k, x, yy + 1, labelW);
       if (v === null) {
-        doc.lineWidth(0.4).strokeColor(INK.rule).moveTo(x + labelW, yy + t.small).lineTo(x + w, yy + t.small).stroke();
+        doc
+          .lineWidth(0.4)
+          .strokeColor(INK.rule)
+          .moveTo(x + labelW, yy + t.small)
+          .lineTo(x + w, yy + t.small)
+          .stroke();
       } else {
         drawText(doc, v, x + labelW, yy, { font: 'body-semibold', size: t.small, width: w - labelW });
       }
@@ -179,7 +229,11 @@ export function drawTitleBlock(
     const x = xs[4]! + pad;
     const w = widths[4]! - 2 * pad;
     label('Sheet', x, y + pad, w);
-    drawText(doc, `${sheetNumber} of ${sheetCount}`, x, y + pad + t.tiny + 2, { font: 'cond-bold', size: t.heading * 1.3, width: w });
+    drawText(doc, `${sheetNumber} of ${sheetCount}`, x, y + pad + t.tiny + 2, {
+      font: 'cond-bold',
+      size: t.heading * 1.3,
+      width: w,
+    });
     label('Paper', x, y + h / 2 + 2, w);
     drawText(doc, `${setup.paper} landscape`, x, y + h / 2 + t.tiny + 3, { size: t.small, width: w });
   }
@@ -189,5 +243,11 @@ export function drawTitleBlock(
 /** Draws the outer border of a page. */
 export function drawFrame(doc: PDFKit.PDFDocument, setup: PageSetup): void {
   const { frame } = setup;
-  doc.save().lineWidth(1.2).strokeColor(INK.black).rect(frame.x, frame.y, frame.w, frame.h).stroke().restore();
+  doc
+    .save()
+    .lineWidth(1.2)
+    .strokeColor(INK.black)
+    .rect(frame.x, frame.y, frame.w, frame.h)
+    .stroke()
+    .restore();
 }

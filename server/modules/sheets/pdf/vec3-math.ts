@@ -29,13 +29,20 @@ export function rotateAbout(v: Vec3, k: Vec3, angle: number): Vec3 {
  * Points along a circular arc from `from` to `to` about `centre`, turning about `normal`
  * (either sense: the one that lands on `to` is used; for a half turn `through` picks the side).
  */
-export function arcPoints(centre: Vec3, from: Vec3, to: Vec3, normal: Vec3, segments: number, through?: Vec3): Vec3[] {
+export function arcPoints(
+  centre: Vec3,
+  from: Vec3,
+  to: Vec3,
+  normal: Vec3,
+  segments: number,
+  through?: Vec3,
+): Vec3[] {
   const a = sub(from, centre);
   const b = sub(to, centre);
   const n = normalise(normal);
   const cos = dot(normalise(a), normalise(b));
   const angle = Math.acos(Math.max(-1, Math.min(1, cos)));
-  let sense = 1;
+  let sense: number;
   if (through) {
     const mid = add(centre, rotateAbout(a, n, angle / 2));
     const midOther = add(centre, rotateAbout(a, n, -angle / 2));
@@ -44,13 +51,22 @@ export function arcPoints(centre: Vec3, from: Vec3, to: Vec3, normal: Vec3, segm
     sense = distance(rotateAbout(a, n, angle), b) <= distance(rotateAbout(a, n, -angle), b) ? 1 : -1;
   }
   const points: Vec3[] = [];
-  for (let i = 0; i <= segments; i += 1) points.push(add(centre, rotateAbout(a, n, (sense * angle * i) / segments)));
+  for (let i = 0; i <= segments; i += 1)
+    points.push(add(centre, rotateAbout(a, n, (sense * angle * i) / segments)));
   return points;
 }
 
 /** A plant axis perpendicular to `d` (up, then east, then north), for drawing ticks and offsets. */
-export function perpendicularAxis(d: Vec3, prefer: Vec3[] = [{ x: 0, y: 0, z: 1 }, { x: 1, y: 0, z: 0 }, { x: 0, y: 1, z: 0 }]): Vec3 {
+export function perpendicularAxis(
+  d: Vec3,
+  prefer: Vec3[] = [
+    { x: 0, y: 0, z: 1 },
+    { x: 1, y: 0, z: 0 },
+    { x: 0, y: 1, z: 0 },
+  ],
+): Vec3 {
   const u = normalise(d);
-  for (const axis of prefer) if (Math.abs(dot(axis, u)) < 0.2) return normalise(sub(axis, scale(u, dot(axis, u))));
+  for (const axis of prefer)
+    if (Math.abs(dot(axis, u)) < 0.2) return normalise(sub(axis, scale(u, dot(axis, u))));
   return normalise(cross(u, { x: 0, y: 0, z: 1 }));
 }

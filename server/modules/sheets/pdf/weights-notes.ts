@@ -26,16 +26,42 @@ function signed(mm: number, units: LengthUnits): string {
 }
 
 /** Weights empty and water-filled and the centre of gravity, offset from a named datum. */
-export function weightsBlock(result: SpoolResult, units: LengthUnits, datum: WeightDatum, size: number): FlowBlock {
+export function weightsBlock(
+  result: SpoolResult,
+  units: LengthUnits,
+  datum: WeightDatum,
+  size: number,
+): FlowBlock {
   const w = result.weights;
   const cogCells = (p: Vec3 | null): string[] =>
-    p ? [signed(p.x - datum.position.x, units), signed(p.y - datum.position.y, units), signed(p.z - datum.position.z, units)] : ['—', '—', '—'];
+    p
+      ? [
+          signed(p.x - datum.position.x, units),
+          signed(p.y - datum.position.y, units),
+          signed(p.z - datum.position.z, units),
+        ]
+      : ['—', '—', '—'];
   const rows: TableRow[] = [
     { cells: ['Empty', formatMass(w.emptyKg, units), ...cogCells(w.centreOfGravity)], emphasis: 'total' },
-    { cells: ['Water-filled (hydrotest)', formatMass(w.waterFilledKg, units), ...cogCells(w.centreOfGravityFilled)] },
+    {
+      cells: [
+        'Water-filled (hydrotest)',
+        formatMass(w.waterFilledKg, units),
+        ...cogCells(w.centreOfGravityFilled),
+      ],
+    },
   ];
   if (w.notIncluded.length > 0) {
-    rows.push({ cells: [`Not weighed: ${w.notIncluded.length} item${w.notIncluded.length > 1 ? 's' : ''} (see warnings)`, '', '', '', ''], emphasis: 'warn' });
+    rows.push({
+      cells: [
+        `Not weighed: ${w.notIncluded.length} item${w.notIncluded.length > 1 ? 's' : ''} (see warnings)`,
+        '',
+        '',
+        '',
+        '',
+      ],
+      emphasis: 'warn',
+    });
   }
   return tableBlock({
     title: 'Weight and centre of gravity (estimate)',
@@ -59,7 +85,13 @@ export function notesBlock(lines: string[], size: number): FlowBlock {
 
 /** The safety cautions, boxed. */
 export function cautionsBlock(size: number): FlowBlock {
-  return paragraphBlock({ title: 'Cautions', paragraphs: [...SHEET_CAUTIONS], size, tone: 'caution', list: 'bullet' });
+  return paragraphBlock({
+    title: 'Cautions',
+    paragraphs: [...SHEET_CAUTIONS],
+    size,
+    tone: 'caution',
+    list: 'bullet',
+  });
 }
 
 /** Engine errors (and warnings), boxed in red at the top of the sheet. */
@@ -72,7 +104,10 @@ export function issuesBlock(result: SpoolResult, size: number): FlowBlock | null
     ...warnings.map((i) => `Warning ${i.componentId ? `(${i.componentId}) ` : ''}${i.message}`),
   ];
   return paragraphBlock({
-    title: errors.length > 0 ? `Design errors: ${errors.length} — not for fabrication until fixed` : `Warnings: ${warnings.length}`,
+    title:
+      errors.length > 0
+        ? `Design errors: ${errors.length} — not for fabrication until fixed`
+        : `Warnings: ${warnings.length}`,
     paragraphs,
     size,
     tone: errors.length > 0 ? 'error' : 'caution',

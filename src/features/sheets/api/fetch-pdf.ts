@@ -7,10 +7,18 @@ import { ApiError, toApiError } from '../../../lib/api-error';
 export async function fetchPdf(url: string, signal?: AbortSignal): Promise<Blob> {
   let response: Response;
   try {
-    response = await fetch(url, { credentials: 'same-origin', headers: { Accept: 'application/pdf, application/json' }, signal });
+    response = await fetch(url, {
+      credentials: 'same-origin',
+      headers: { Accept: 'application/pdf, application/json' },
+      signal,
+    });
   } catch (cause) {
     if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
-    throw new ApiError(0, 'network_error', 'Cannot reach the Tackline server. Check the connection and try again.');
+    throw new ApiError(
+      0,
+      'network_error',
+      'Cannot reach the Tackline server. Check the connection and try again.',
+    );
   }
   if (!response.ok) {
     let body: unknown;

@@ -2,8 +2,14 @@ import { apiUrl } from '../../../lib/api-client';
 import type { PaperSize } from '../paper-sizes';
 
 /** URL of a spool's printable sheet; without a revision the server prints the latest issued one (else the draft). */
-export function spoolSheetUrl(spoolId: string, options: { paper: PaperSize; revisionId?: string | null }): string {
-  return apiUrl(`/spools/${spoolId}/sheet.pdf`, { paper: options.paper, revision: options.revisionId ?? undefined });
+export function spoolSheetUrl(
+  spoolId: string,
+  options: { paper: PaperSize; revisionId?: string | null },
+): string {
+  return apiUrl(`/spools/${spoolId}/sheet.pdf`, {
+    paper: options.paper,
+    revision: options.revisionId ?? undefined,
+  });
 }
 
 /** URL of a job's saw list; without spool ids the server takes every open spool of the job. */

@@ -16,7 +16,10 @@ export function SawListActions({ jobId, spoolIds }: SawListActionsProps) {
   const [paper, setPaper] = usePaperSize();
   const { open, print, busy, error } = usePdfActions();
   const url = sawListUrl(jobId, { paper, spoolIds });
-  const scope = spoolIds && spoolIds.length > 0 ? `${spoolIds.length} spool${spoolIds.length === 1 ? '' : 's'}` : 'all spools';
+  const scope =
+    spoolIds && spoolIds.length > 0
+      ? `${spoolIds.length} spool${spoolIds.length === 1 ? '' : 's'}`
+      : 'all spools';
   return (
     <div className="flex flex-col gap-2">
       <div className="flex flex-wrap items-center gap-2">

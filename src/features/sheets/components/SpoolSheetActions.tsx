@@ -16,7 +16,12 @@ interface SpoolSheetActionsProps {
 }
 
 /** Open / print buttons for a spool's fabrication sheet, with the paper choice. */
-export function SpoolSheetActions({ spoolId, revisionId, label = 'Sheet', showPaper = true }: SpoolSheetActionsProps) {
+export function SpoolSheetActions({
+  spoolId,
+  revisionId,
+  label = 'Sheet',
+  showPaper = true,
+}: SpoolSheetActionsProps) {
   const [paper, setPaper] = usePaperSize();
   const { open, print, busy, error } = usePdfActions();
   const url = spoolSheetUrl(spoolId, { paper, revisionId });

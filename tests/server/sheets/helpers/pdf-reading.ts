@@ -21,7 +21,8 @@ export interface PdfPageText {
 
 /** Reads every page's text back out of a PDF, the way a reader or search would see it. */
 export async function readPdfText(pdf: Buffer | Uint8Array): Promise<PdfPageText[]> {
-  const doc = await getDocument({ data: new Uint8Array(pdf), useSystemFonts: false, isEvalSupported: false }).promise;
+  const doc = await getDocument({ data: new Uint8Array(pdf), useSystemFonts: false, isEvalSupported: false })
+    .promise;
   const pages: PdfPageText[] = [];
   for (let n = 1; n <= doc.numPages; n += 1) {
     const page = await doc.getPage(n);
@@ -32,7 +33,12 @@ export async function readPdfText(pdf: Buffer | Uint8Array): Promise<PdfPageText
       if (!('str' in item) || item.str.trim() === '') continue;
       items.push({ str: item.str, x: item.transform[4] as number, y: item.transform[5] as number });
     }
-    pages.push({ width: viewport.width, height: viewport.height, items, text: items.map((i) => i.str).join(' ') });
+    pages.push({
+      width: viewport.width,
+      height: viewport.height,
+      items,
+      text: items.map((i) => i.str).join(' '),
+    });
   }
   await doc.destroy();
   return pages;
@@ -77,7 +83,17 @@ export function renderPageGrey(pdf: Buffer, page: number, dpi: number): GreyImag
   try {
     const file = join(dir, 'in.pdf');
     writeFileSync(file, pdf);
-    execFileSync('pdftoppm', ['-gray', '-r', String(dpi), '-f', String(page), '-l', String(page), file, join(dir, 'page')]);
+    execFileSync('pdftoppm', [
+      '-gray',
+      '-r',
+      String(dpi),
+      '-f',
+      String(page),
+      '-l',
+      String(page),
+      file,
+      join(dir, 'page'),
+    ]);
     const out = readdirSync(dir).find((f) => f.endsWith('.pgm'));
     if (!out) throw new Error('pdftoppm wrote no page');
     return parsePgm(readFileSync(join(dir, out)));
@@ -142,7 +158,8 @@ export async function readPathBoxes(pdf: Buffer, pageNumber: number): Promise<Pa
       if (fn !== OPS.constructPath) return;
       const [paintOp, , minMax] = list.argsArray[i] as [number, unknown, ArrayLike<number> | null];
       if (!minMax) return;
-      const paint = paintOp === OPS.fill || paintOp === OPS.eoFill ? 'fill' : paintOp === OPS.stroke ? 'stroke' : 'other';
+      const paint =
+        paintOp === OPS.fill || paintOp === OPS.eoFill ? 'fill' : paintOp === OPS.stroke ? 'stroke' : 'other';
       boxes.push({ paint, minX: minMax[0]!, minY: minMax[1]!, maxX: minMax[2]!, maxY: minMax[3]! });
     });
     return boxes;

@@ -16,7 +16,9 @@ export const SAMPLE_FILES = [
 
 /** Reads and validates a sample design. */
 export function loadSample(file: string): SpoolDesign {
-  const raw: unknown = JSON.parse(readFileSync(fileURLToPath(new URL(`../../../../samples/${file}`, import.meta.url)), 'utf8'));
+  const raw: unknown = JSON.parse(
+    readFileSync(fileURLToPath(new URL(`../../../../samples/${file}`, import.meta.url)), 'utf8'),
+  );
   return spoolDesignSchema.parse(raw);
 }
 
@@ -28,7 +30,13 @@ export function computedSample(file: string): { design: SpoolDesign; result: Spo
 
 /** A title-block header for renderer tests. */
 export function testHeader(mark: string, state: RevisionState = 'issued'): SheetHeader {
-  const entry = { letter: 'B', state, issuedAt: state === 'draft' ? null : '2026-11-30T10:00:00.000Z', note: 'Branch moved 50 mm', author: 'Ada Detailer' };
+  const entry = {
+    letter: 'B',
+    state,
+    issuedAt: state === 'draft' ? null : '2026-11-30T10:00:00.000Z',
+    note: 'Branch moved 50 mm',
+    author: 'Ada Detailer',
+  };
   return {
     shopName: 'Kestrel Pipe & Steel',
     clientName: 'Harrow Fields Data Centre',
@@ -40,9 +48,25 @@ export function testHeader(mark: string, state: RevisionState = 'issued'): Sheet
     spoolStatus: 'issued',
     revision: entry,
     history: [
-      ...(state === 'superseded' ? [{ letter: 'C', state: 'issued' as const, issuedAt: '2026-12-01T08:00:00.000Z', note: 'Flange rotated', author: 'Ada Detailer' }] : []),
+      ...(state === 'superseded'
+        ? [
+            {
+              letter: 'C',
+              state: 'issued' as const,
+              issuedAt: '2026-12-01T08:00:00.000Z',
+              note: 'Flange rotated',
+              author: 'Ada Detailer',
+            },
+          ]
+        : []),
       entry,
-      { letter: 'A', state: 'superseded', issuedAt: '2026-11-20T09:00:00.000Z', note: 'First issue', author: 'Ada Detailer' },
+      {
+        letter: 'A',
+        state: 'superseded',
+        issuedAt: '2026-11-20T09:00:00.000Z',
+        note: 'First issue',
+        author: 'Ada Detailer',
+      },
     ],
     drawnBy: 'Ada Detailer',
     checkedBy: null,
