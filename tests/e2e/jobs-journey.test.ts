@@ -152,10 +152,10 @@ describe('jobs and spools in the browser', () => {
     await page.waitForURL(/\/users$/);
     await page.getByRole('heading', { name: 'Admins only' }).waitFor();
 
-    await page.getByRole('link', { name: 'Jobs', exact: true }).click();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
     await page.getByRole('link', { name: DEMO_JOB }).waitFor();
     await expect(page.getByRole('button', { name: 'New job' }).count()).resolves.toBe(0);
-    await expect(page.getByRole('link', { name: 'Users' }).count()).resolves.toBe(0);
+    await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Users' }).count()).resolves.toBe(0);
     await saveScreenshot(page, '10-jobs-viewer');
 
     await page.getByRole('link', { name: DEMO_JOB }).click();
@@ -221,12 +221,34 @@ describe('jobs and spools in the browser', () => {
     const page = await browser.freshPage();
     await page.goto(`${app.baseUrl}/sign-in`);
     await signInAs(page, DEMO_USERS.admin);
-    await page.getByRole('link', { name: 'Users' }).click();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Users' }).click();
     await page.getByRole('row').filter({ hasText: 'Anselm Tarrow' }).waitFor();
     await saveScreenshot(page, '13-users-admin');
 
+    // Archiving takes a job out of the default list; the "Archived" filter still finds it.
+    const created = await page.request.post(`${app.baseUrl}/api/jobs`, {
+      data: {
+        number: 'HFD-X-TEMP',
+        title: 'Temporary works',
+        client: 'Harrow Fields Data Centre',
+        spec: { material: 'ASTM A106 Gr B', schedule: 'STD', flangeClass: 150, rootGapMm: 3, sawKerfMm: 3, minPieceLengthMm: 50 },
+      },
+    });
+    expect(created.status()).toBe(201);
+    const { id: tempId } = (await created.json()) as { id: string };
+    await page.goto(`${app.baseUrl}/jobs/${tempId}`);
+    await page.getByRole('button', { name: 'Archive' }).click();
+    await page.getByRole('dialog', { name: /Archive job HFD-X-TEMP/ }).getByRole('button', { name: 'Archive job' }).click();
+    await page.getByText('Archived', { exact: true }).first().waitFor();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
+    await page.getByRole('link', { name: DEMO_JOB }).waitFor();
+    await expect(page.getByRole('link', { name: 'HFD-X-TEMP' }).count()).resolves.toBe(0);
+    await page.getByLabel('Show').selectOption('archived');
+    await page.getByRole('link', { name: 'HFD-X-TEMP' }).waitFor();
+    await saveScreenshot(page, '13b-jobs-archived-filter');
+
     await page.setViewportSize({ width: 820, height: 1180 });
-    await page.getByRole('link', { name: 'Jobs', exact: true }).click();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
     await page.getByRole('link', { name: DEMO_JOB }).click();
     await page.getByRole('row').filter({ hasText: READ_MARK }).waitFor();
     await saveScreenshot(page, '14-job-tablet');

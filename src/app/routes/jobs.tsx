@@ -1,4 +1,4 @@
-import { useNavigate } from 'react-router';
+import { useNavigate, useSearchParams } from 'react-router';
 import { EmptyState } from '../../components/ui/EmptyState';
 import { ErrorState } from '../../components/ui/ErrorState';
 import { PageHeader } from '../../components/ui/PageHeader';
@@ -10,10 +10,15 @@ import { can } from '../../features/auth/permissions';
 import { useJobs } from '../../features/jobs/api/get-jobs';
 import { CreateJobDialog } from '../../features/jobs/components/CreateJobDialog';
 import { JobsTable } from '../../features/jobs/components/JobsTable';
-import { JOB_SORT_FIELDS } from '../../../shared/schemas/job.schema';
+import { JOB_SORT_FIELDS, jobStatusSchema, type JobStatus } from '../../../shared/schemas/job.schema';
+import { jobStatusDisplay } from '../../features/jobs/components/JobStatusBadge';
 import { useListSearchParams } from '../../lib/use-list-search-params';
 
 const PAGE_SIZE = 25;
+const STATUS_FILTERS = [
+  { value: '', label: 'All but archived' },
+  ...jobStatusSchema.options.map((s) => ({ value: s, label: jobStatusDisplay[s].label })),
+];
 const DEFAULT_SORT = { sort: 'number', order: 'asc' } as const;
 
 /** Home: the shop's jobs. */
@@ -21,20 +26,59 @@ export function Component() {
   const user = useCurrentUser();
   const navigate = useNavigate();
   const { state, update, toggleSort } = useListSearchParams(JOB_SORT_FIELDS, DEFAULT_SORT);
-  const jobs = useJobs({ page: state.page, pageSize: PAGE_SIZE, sort: state.sort, order: state.order, q: state.q || undefined });
+  const [params, setParams] = useSearchParams();
+  const statusParam = params.get('status');
+  const status = jobStatusSchema.safeParse(statusParam).success ? (statusParam as JobStatus) : undefined;
+  const jobs = useJobs({
+    page: state.page,
+    pageSize: PAGE_SIZE,
+    sort: state.sort,
+    order: state.order,
+    q: state.q || undefined,
+    status,
+  });
+  const setStatus = (value: string) =>
+    setParams(
+      (prev) => {
+        const next = new URLSearchParams(prev);
+        if (value) next.set('status', value);
+        else next.delete('status');
+        next.delete('page');
+        return next;
+      },
+      { replace: true },
+    );
   const mayCreate = can.manageJobs(user.role);
 
   return (
     <div className="flex flex-col gap-5">
       <PageHeader eyebrow={user.organisation.name} title="Jobs" actions={mayCreate ? <CreateJobDialog /> : null} />
-      <SearchBox label="Search jobs" placeholder="Search number, title, client" value={state.q} onChange={(q) => update({ q, page: 1 })} />
+      <div className="flex flex-wrap items-center gap-3">
+        <SearchBox label="Search jobs" placeholder="Search number, title, client" value={state.q} onChange={(q) => update({ q, page: 1 })} />
+        <label className="flex items-center gap-2 text-sm font-semibold text-ink-800">
+          Show
+          <select
+            value={status ?? ''}
+            onChange={(e) => setStatus(e.target.value)}
+            className="min-h-11 rounded-md border border-steel-300 bg-white px-3 text-sm font-normal"
+          >
+            {STATUS_FILTERS.map((o) => (
+              <option key={o.value} value={o.value}>
+                {o.label}
+              </option>
+            ))}
+          </select>
+        </label>
+      </div>
       {jobs.isPending ? (
         <LoadingBlock label="Loading jobs…" />
       ) : jobs.isError ? (
         <ErrorState error={jobs.error} onRetry={() => void jobs.refetch()} />
       ) : jobs.data.items.length === 0 ? (
-        state.q ? (
-          <EmptyState title="No job matches">Nothing matches “{state.q}”. Try a job number or client name.</EmptyState>
+        state.q || status ? (
+          <EmptyState title="No job matches">
+            {state.q ? `Nothing matches “${state.q}”. Try a job number or client name.` : 'No job has this status.'}
+          </EmptyState>
         ) : (
           <EmptyState title="No jobs yet" action={mayCreate ? <CreateJobDialog /> : null}>
             {mayCreate
