@@ -8,7 +8,7 @@ interface PaginationProps {
   noun?: string;
 }
 
-/** "21–40 of 57 spools" with previous/next buttons; hidden when there is nothing to page. */
+/** "21–40 of 57 spools" (nouns are given plural) with previous/next buttons; hidden when there is nothing to page. */
 export function Pagination({ page, pageSize, total, onPage, noun = 'items' }: PaginationProps) {
   const pages = Math.max(1, Math.ceil(total / pageSize));
   if (total === 0) return null;
@@ -17,10 +17,8 @@ export function Pagination({ page, pageSize, total, onPage, noun = 'items' }: Pa
   return (
     <nav aria-label="Pages" className="flex flex-wrap items-center justify-between gap-3 py-3 text-sm text-steel-600">
       <p>
-        <span className="font-mono">
-          {from}–{to}
-        </span>{' '}
-        of <span className="font-mono">{total}</span> {noun}
+        <span className="font-mono">{from === to ? from : `${from}–${to}`}</span> of{' '}
+        <span className="font-mono">{total}</span> {total === 1 ? noun.replace(/s$/, '') : noun}
       </p>
       {pages > 1 ? (
         <div className="flex items-center gap-2">

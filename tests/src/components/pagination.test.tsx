@@ -19,6 +19,11 @@ describe('Pagination', () => {
     expect(first).toMatch(/disabled="">Previous/);
   });
 
+  it('speaks of one item in the singular', () => {
+    const html = renderToStaticMarkup(<Pagination page={1} pageSize={20} total={1} onPage={noop} noun="spools" />);
+    expect(html).toMatch(/>1<\/span> of <span[^>]*>1<\/span> spool<\/p>/);
+  });
+
   it('renders nothing for an empty list', () => {
     expect(renderToStaticMarkup(<Pagination page={1} pageSize={20} total={0} onPage={noop} />)).toBe('');
   });
