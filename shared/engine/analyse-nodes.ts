@@ -2,10 +2,10 @@
  * Looks up every node's standards dimensions and take-offs (no positions yet): dispatches
  * each node to the take-off step for its kind.
  */
-import { pipeDimensions } from '../standards/pipe-schedules';
 import type { ResolvedSpec } from './compute-result';
 import type { SpoolGraph } from './build-graph';
 import type { NodeRole } from './classify-nodes';
+import { cachedPipeDimensions } from './standards-cache';
 import { addError, type IssueSink } from './issues';
 import type { NodeAnalysis, NodeContext, RunPipe } from './node-analysis';
 import type { RunSizes } from './resolve-sizes';
@@ -25,7 +25,7 @@ export function runPipes(graph: SpoolGraph, sizes: RunSizes, designSpec: Resolve
     const nps = sizes.get(run.id) ?? null;
     let dims = null;
     if (nps) {
-      const look = pipeDimensions(nps, spec.schedule);
+      const look = cachedPipeDimensions(nps, spec.schedule);
       if (look.ok) dims = look.value;
       else addError(issues, 'standard-data-missing', look.missing, run.id);
     }

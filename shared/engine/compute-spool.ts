@@ -97,7 +97,7 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
   const massByNode = new Map(weights.items.map((i) => [i.ref, i.massKg]));
   const components = componentResults(graph, analyses, positions, (id) => massByNode.get(id) ?? null);
   const flanges = flangeOrientations(graph, roles, analyses, positions, spec.boltHoleToleranceMm, angleDeg, issues);
-  const flangePairs = flangePairChecks(graph, roles, analyses, flanges, spec.boltHoleToleranceMm, issues);
+  const flangePairs = flangePairChecks(graph, analyses, directions, flanges, spec.boltHoleToleranceMm, issues);
   const bomItems = buildBillOfMaterials(graph, analyses, pieces, (p) => (p.runIds[0] ? (pipes.get(p.runIds[0])?.spec.sawKerfMm ?? spec.sawKerfMm) : spec.sawKerfMm));
 
   const runs: RunResult[] = [];

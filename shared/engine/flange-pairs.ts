@@ -1,94 +1,79 @@
 /**
  * Relative bolt-hole rotation of every pair of flanges with the same bolt count: flange
  * a's first hole is carried along the spool to flange b (rotated through each bend by the
- * bend itself, as a fitter transfers a hole line along the pipe), then compared with b's
- * holes as designed. The error is given in degrees and in mm at b's bolt circle, with the
+ * bend itself, as a fitter transfers a hole line along the pipe; through a tee or branch
+ * connection by the turn from its run into its branch), then compared with b's holes as
+ * designed. The error is given in degrees and in mm at b's bolt circle, with the
  * correction to apply to b.
  */
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import type { FlangeOrientation, FlangePairCheck } from './compute-result';
 import type { SpoolGraph } from './build-graph';
-import type { NodeRole } from './classify-nodes';
 import { clockwiseAngleDeg } from './clock-angles';
-import { connsOf, correctionFor, wrapToHalfPitch } from './flange-orientation';
+import { correctionFor, wrapToHalfPitch } from './flange-orientation';
+import { apply, applyTransposed, IDENTITY, multiply, rotationBetween, type Mat3 } from './rotation-matrix';
 import { addWarning, type IssueSink } from './issues';
 import type { NodeAnalysis } from './node-analysis';
-import { angleBetweenDeg, anyPerpendicular, cross, dot, negate, normalise, transportAcross } from './vec3-math';
+import { angleBetweenDeg, anyPerpendicular, cross, dot, negate, normalise } from './vec3-math';
 
-/** Nodes from `a` to `b` along the tree (both included), or null if not connected. */
-export function treePath(graph: SpoolGraph, a: string, b: string): string[] | null {
-  const up = (id: string) => {
-    const chain = [id];
-    let cur = id;
-    for (let guard = 0; guard < graph.nodes.size + 1; guard++) {
-      const r = graph.parentRun.get(cur);
-      if (!r) break;
-      cur = r.from;
-      chain.push(cur);
+/**
+ * Transport frame of every run: the rotation carrying a direction from the first root run
+ * to that run through the bends between (each node turns it by the smallest rotation from
+ * the run feeding it to the run leaving it; a 180° return about its bend-plane normal).
+ * Carrying from run a to run b is then frame(b) · frame(a)ᵀ.
+ */
+export function runFrames(graph: SpoolGraph, analyses: Map<string, NodeAnalysis>, directions: Map<string, Vec3>): Map<string, Mat3> {
+  const frames = new Map<string, Mat3>();
+  for (const run of graph.runOrder) {
+    const t = directions.get(run.id)!;
+    const parent = graph.parentRun.get(run.from);
+    let inDir: Vec3;
+    let base: Mat3;
+    if (parent) {
+      inDir = directions.get(parent.id)!;
+      base = frames.get(parent.id) ?? IDENTITY;
+    } else {
+      const first = graph.childRuns.get(run.from)?.[0];
+      if (!first || first.id === run.id) {
+        frames.set(run.id, IDENTITY);
+        continue;
+      }
+      inDir = negate(directions.get(first.id)!);
+      base = frames.get(first.id) ?? IDENTITY;
     }
-    return chain;
-  };
-  const ca = up(a);
-  const cb = up(b);
-  const inB = new Map(cb.map((id, i) => [id, i]));
-  const i = ca.findIndex((id) => inB.has(id));
-  if (i < 0) return null;
-  const j = inB.get(ca[i]!)!;
-  return [...ca.slice(0, i + 1), ...cb.slice(0, j).reverse()];
-}
-
-/** Carries unit vector `h` (perpendicular to the path) from the first node of `path` to the last. */
-function transportAlong(
-  graph: SpoolGraph,
-  roles: Map<string, NodeRole>,
-  analyses: Map<string, NodeAnalysis>,
-  path: string[],
-  h: Vec3,
-): Vec3 | null {
-  const runBetween = (x: string, y: string) => {
-    const r = graph.parentRun.get(y);
-    if (r && r.from === x) return r;
-    const s = graph.parentRun.get(x);
-    return s && s.from === y ? s : null;
-  };
-  let v = h;
-  for (let k = 1; k + 1 < path.length; k++) {
-    const at = path[k]!;
-    const rin = runBetween(path[k - 1]!, at);
-    const rout = runBetween(at, path[k + 1]!);
-    const role = roles.get(at);
-    if (!rin || !rout || !role) return null;
-    const conns = connsOf(role);
-    const cin = conns.find((c) => c.run.id === rin.id);
-    const cout = conns.find((c) => c.run.id === rout.id);
-    if (!cin || !cout) return null;
-    const tIn = negate(cin.outward);
-    const tOut = cout.outward;
-    const detail = analyses.get(at)?.detail;
-    const fallback = detail?.type === 'return' ? (normalise(cross(tIn, detail.offset)) ?? anyPerpendicular(tIn)) : anyPerpendicular(tIn);
-    v = transportAcross(v, tIn, tOut, fallback);
+    const detail = analyses.get(run.from)?.detail;
+    const fallback = detail?.type === 'return' ? (normalise(cross(inDir, detail.offset)) ?? anyPerpendicular(inDir)) : anyPerpendicular(inDir);
+    frames.set(run.id, multiply(rotationBetween(inDir, t, fallback), base));
   }
-  return v;
+  return frames;
 }
 
 /** Checks every pair of flanges with equal bolt counts. */
 export function flangePairChecks(
   graph: SpoolGraph,
-  roles: Map<string, NodeRole>,
   analyses: Map<string, NodeAnalysis>,
+  directions: Map<string, Vec3>,
   flanges: FlangeOrientation[],
   toleranceMm: number,
   issues: IssueSink,
 ): FlangePairCheck[] {
   const out: FlangePairCheck[] = [];
+  if (flanges.length < 2) return out;
+  const frames = runFrames(graph, analyses, directions);
+  const runOfFlange = new Map<string, string>();
+  for (const f of flanges) {
+    const a = analyses.get(f.nodeId);
+    if (a?.role.kind === 'end') runOfFlange.set(f.nodeId, a.role.conn.run.id);
+  }
   for (let i = 0; i < flanges.length; i++) {
     for (let j = i + 1; j < flanges.length; j++) {
       const A = flanges[i]!;
       const B = flanges[j]!;
       if (!A.boltCount || A.boltCount !== B.boltCount) continue;
       const parallelFaces = Math.abs(dot(A.outward, B.outward)) > Math.cos((0.1 * Math.PI) / 180);
-      const path = treePath(graph, A.nodeId, B.nodeId);
-      const carried = path ? transportAlong(graph, roles, analyses, path, A.firstHoleDirection) : null;
+      const fa = frames.get(runOfFlange.get(A.nodeId) ?? '');
+      const fb = frames.get(runOfFlange.get(B.nodeId) ?? '');
+      const carried = fa && fb ? apply(fb, applyTransposed(fa, A.firstHoleDirection)) : null;
       if (!carried) {
         out.push({ a: A.nodeId, b: B.nodeId, parallelFaces, errorDeg: null, errorMm: null, toleranceMm, withinTolerance: null, correction: null });
         continue;

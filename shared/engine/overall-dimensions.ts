@@ -5,13 +5,17 @@
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import type { Box, ComponentResult, OverallDimensions, PipePiece } from './compute-result';
 
-/** Grows a box to hold `p` grown by `r` mm in every axis. */
+/** Grows a box (in place) to hold `p` grown by `r` mm in every axis. */
 function grow(box: { min: Vec3; max: Vec3 } | null, p: Vec3, r: number): { min: Vec3; max: Vec3 } {
   if (!box) return { min: { x: p.x - r, y: p.y - r, z: p.z - r }, max: { x: p.x + r, y: p.y + r, z: p.z + r } };
-  return {
-    min: { x: Math.min(box.min.x, p.x - r), y: Math.min(box.min.y, p.y - r), z: Math.min(box.min.z, p.z - r) },
-    max: { x: Math.max(box.max.x, p.x + r), y: Math.max(box.max.y, p.y + r), z: Math.max(box.max.z, p.z + r) },
-  };
+  const { min, max } = box;
+  if (p.x - r < min.x) min.x = p.x - r;
+  if (p.y - r < min.y) min.y = p.y - r;
+  if (p.z - r < min.z) min.z = p.z - r;
+  if (p.x + r > max.x) max.x = p.x + r;
+  if (p.y + r > max.y) max.y = p.y + r;
+  if (p.z + r > max.z) max.z = p.z + r;
+  return box;
 }
 
 function finish(b: { min: Vec3; max: Vec3 }): Box {

@@ -57,7 +57,8 @@ export function placeRuns(
   const positions = new Map<string, Vec3>();
   const runs = new Map<string, PlacedRun>();
   if (graph.rootId === null) return { runs, positions };
-  positions.set(graph.rootId, origin);
+  // A copy: results are rounded in place and must not touch the caller's design.
+  positions.set(graph.rootId, { x: origin.x, y: origin.y, z: origin.z });
 
   for (const run of graph.runOrder) {
     const from = positions.get(run.from);
@@ -69,7 +70,17 @@ export function placeRuns(
     const start = add(from, fromEnd?.portOffset ?? ZERO);
     const end = addScaled(start, d, len.workPointDistanceMm);
     positions.set(run.to, sub(end, toEnd?.portOffset ?? ZERO));
-    runs.set(run.id, { run, direction: d, fromEnd, toEnd, start, end, ...len });
+    runs.set(run.id, {
+      run, direction: d, fromEnd, toEnd, start, end,
+      workPointDistanceMm: len.workPointDistanceMm,
+      takeOffFromMm: len.takeOffFromMm,
+      takeOffToMm: len.takeOffToMm,
+      gapsMm: len.gapsMm,
+      gapFromMm: len.gapFromMm,
+      gapToMm: len.gapToMm,
+      pipeLengthMm: len.pipeLengthMm,
+      closeCoupled: len.closeCoupled,
+    });
     checkLengthKind(run, graph, issues);
   }
   return { runs, positions };
@@ -86,38 +97,40 @@ export function runLengths(run: SpoolRun, fromEnd: NodeEnd | null, toEnd: NodeEn
   const openF = !fromEnd || fromEnd.joint === 'open';
   const openT = !toEnd || toEnd.joint === 'open';
   const single = openF || openT ? 0 : Math.max(gF, gT);
-  const cannotCouple = [fromEnd, toEnd].find((e) => e && (e.joint === 'socket' || e.joint === 'slip-on' || e.pipeContinues));
+  const noCouple = (e: NodeEnd | null) => e !== null && (e.joint === 'socket' || e.joint === 'slip-on' || e.pipeContinues);
+  const cannotCouple = noCouple(fromEnd) ? fromEnd : noCouple(toEnd) ? toEnd : null;
   const bothOpen = openF && openT;
   const known = tF !== null && tT !== null;
   const stated = run.length.mm;
-  const base = { takeOffFromMm: tF, takeOffToMm: tT };
+  // Plain literals, no object spread: this runs for every run on every keystroke.
+  const mk = (workPointDistanceMm: number, gapsMm: number, gapFromMm: number, gapToMm: number, pipeLengthMm: number | null, closeCoupled: boolean): Lengths => ({
+    workPointDistanceMm,
+    takeOffFromMm: tF,
+    takeOffToMm: tT,
+    gapsMm,
+    gapFromMm,
+    gapToMm,
+    pipeLengthMm,
+    closeCoupled,
+  });
 
   if (run.length.kind === 'cut') {
     if (stated === 0 && !bothOpen) {
       if (cannotCouple) {
         addError(issues, 'overlapping-fittings', `Run ${run.id} has no pipe, but a ${cannotCouple.joint === 'set-on' ? 'branch connection' : cannotCouple.joint} joint needs pipe`, run.id);
-        return { ...base, workPointDistanceMm: (tF ?? 0) + (tT ?? 0), gapsMm: 0, gapFromMm: 0, gapToMm: 0, pipeLengthMm: null, closeCoupled: false };
+        return mk((tF ?? 0) + (tT ?? 0), 0, 0, 0, null, false);
       }
-      return {
-        ...base,
-        workPointDistanceMm: (tF ?? 0) + (tT ?? 0) + single,
-        gapsMm: single,
-        gapFromMm: openF ? 0 : single / 2,
-        gapToMm: openT ? 0 : single / 2,
-        pipeLengthMm: known ? 0 : null,
-        closeCoupled: true,
-      };
+      return mk((tF ?? 0) + (tT ?? 0) + single, single, openF ? 0 : single / 2, openT ? 0 : single / 2, known ? 0 : null, true);
     }
-    return { ...base, workPointDistanceMm: stated + (tF ?? 0) + (tT ?? 0) + gF + gT, gapsMm: gF + gT, gapFromMm: gF, gapToMm: gT, pipeLengthMm: known ? stated : null, closeCoupled: false };
+    return mk(stated + (tF ?? 0) + (tT ?? 0) + gF + gT, gF + gT, gF, gT, known ? stated : null, false);
   }
 
-  const two = { ...base, workPointDistanceMm: stated, gapsMm: gF + gT, gapFromMm: gF, gapToMm: gT };
-  if (!known) return { ...two, pipeLengthMm: null, closeCoupled: false };
+  if (!known) return mk(stated, gF + gT, gF, gT, null, false);
   const pipe = stated - tF - tT - gF - gT;
-  if (pipe >= 0) return { ...two, pipeLengthMm: pipe, closeCoupled: false };
+  if (pipe >= 0) return mk(stated, gF + gT, gF, gT, pipe, false);
   const coupled = stated - tF - tT - single;
   if (Math.abs(coupled) <= tol.closeCoupleMm && !cannotCouple && !bothOpen) {
-    return { ...base, workPointDistanceMm: stated, gapsMm: single, gapFromMm: openF ? 0 : single / 2, gapToMm: openT ? 0 : single / 2, pipeLengthMm: 0, closeCoupled: true };
+    return mk(stated, single, openF ? 0 : single / 2, openT ? 0 : single / 2, 0, true);
   }
   if (coupled < 0) {
     addError(
@@ -134,7 +147,7 @@ export function runLengths(run: SpoolRun, fromEnd: NodeEnd | null, toEnd: NodeEn
       run.id,
     );
   }
-  return { ...two, pipeLengthMm: null, closeCoupled: false };
+  return mk(stated, gF + gT, gF, gT, null, false);
 }
 
 function checkLengthKind(run: SpoolRun, graph: SpoolGraph, issues: IssueSink): void {

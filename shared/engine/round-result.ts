@@ -9,31 +9,39 @@ import type { SpoolResult } from './compute-result';
 export const RESULT_DECIMALS = 4;
 const F = 10 ** RESULT_DECIMALS;
 
-/** A copy of `result` with every number rounded. */
+/** Rounds every number of `result` (in place) and returns it. */
 export function roundResult(result: SpoolResult): SpoolResult {
-  const bad: string[] = [];
-  const walk = (v: unknown, path: string): unknown => {
-    if (typeof v === 'number') {
-      if (!Number.isFinite(v)) {
-        bad.push(path);
-        return null;
-      }
-      const r = Math.round(v * F) / F;
-      return r === 0 ? 0 : r;
+  let bad = 0;
+  // In place, writing only values that change: constants (frozen, already round) are never
+  // written, and nothing from the caller's design reaches the result uncopied.
+  const fix = (v: number): number | null => {
+    if (!Number.isFinite(v)) {
+      bad++;
+      return null;
     }
-    if (Array.isArray(v)) return v.map((x, i) => walk(x, `${path}.${i}`));
-    if (v !== null && typeof v === 'object') {
-      // Copy: shared constant vectors (frozen) and shared points must not be mutated.
-      const out: Record<string, unknown> = {};
-      for (const k of Object.keys(v)) out[k] = walk((v as Record<string, unknown>)[k], path ? `${path}.${k}` : k);
-      return out;
-    }
-    return v;
+    return Math.round(v * F) / F || 0;
   };
-  const rounded = walk(result, '') as SpoolResult;
-  if (bad.length > 0) {
-    rounded.issues.push({ severity: 'error', code: 'internal-error', message: `Engine produced non-numbers at ${bad.slice(0, 5).join(', ')}` });
-    rounded.ok = false;
+  const walk = (o: Record<string, unknown>): void => {
+    for (const k in o) {
+      const v = o[k];
+      if (typeof v === 'number') {
+        const r = fix(v);
+        if (r !== v) o[k] = r;
+      } else if (Array.isArray(v)) {
+        for (let i = 0; i < v.length; i++) {
+          const x: unknown = v[i];
+          if (typeof x === 'number') {
+            const r = fix(x);
+            if (r !== x) v[i] = r;
+          } else if (x !== null && typeof x === 'object') walk(x as Record<string, unknown>);
+        }
+      } else if (v !== null && typeof v === 'object') walk(v as Record<string, unknown>);
+    }
+  };
+  walk(result as unknown as Record<string, unknown>);
+  if (bad > 0) {
+    result.issues.push({ severity: 'error', code: 'internal-error', message: `Engine produced ${bad} non-finite number(s)` });
+    result.ok = false;
   }
-  return rounded;
+  return result;
 }

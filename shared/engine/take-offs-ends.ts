@@ -4,12 +4,12 @@
  * cap's tip, or the pipe end itself.
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
-import { flangeDimensions } from '../standards/flanges';
 import { capDimensions } from '../standards/butt-weld-fittings';
 import { socketWeldDimensions } from '../standards/socket-weld-fittings';
 import { scheduleLabel } from '../standards/pipe-schedules';
 import type { Connection } from './classify-nodes';
 import { addError } from './issues';
+import { cachedFlangeDimensions } from './standards-cache';
 import { buttEnd, openEnd, socketEnd } from './node-end-builders';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
 
@@ -30,7 +30,7 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
       const cls = end.flangeClass ?? spec.flangeClass;
       const wn = end.type === 'weld-neck-flange';
       const look = nps
-        ? flangeDimensions(nps, cls, wn ? 'weld-neck' : 'slip-on', pipe.dims ? { pipeWallMm: pipe.dims.wallMm } : {})
+        ? cachedFlangeDimensions(nps, cls, wn ? 'weld-neck' : 'slip-on', pipe.dims?.wallMm)
         : null;
       if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
       const d = look?.ok ? look.value : null;

@@ -5,8 +5,9 @@
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
 import { reducerDimensions } from '../standards/butt-weld-fittings';
 import { compareNps } from '../standards/nps';
-import { pipeDimensions, scheduleLabel } from '../standards/pipe-schedules';
+import { scheduleLabel } from '../standards/pipe-schedules';
 import type { Connection } from './classify-nodes';
+import { cachedPipeDimensions } from './standards-cache';
 import { addError } from './issues';
 import { buttEnd } from './node-end-builders';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
@@ -47,8 +48,8 @@ export function analyseReducer(ctx: NodeContext, node: ReducerNode, a: Connectio
     flat = typeof side === 'string' ? side : 'as stated';
     const dir = side === 'top' ? UP : side === 'bottom' ? scale(UP, -1) : side;
     const f = normalise(rejectFrom(dir, a.outward));
-    const odL = pipeDimensions(largeNps, ctx.pipe(large.run.id).schedule);
-    const odS = pipeDimensions(smallNps, ctx.pipe(small.run.id).schedule);
+    const odL = cachedPipeDimensions(largeNps, ctx.pipe(large.run.id).schedule);
+    const odS = cachedPipeDimensions(smallNps, ctx.pipe(small.run.id).schedule);
     if (!f) {
       addError(ctx.issues, 'direction-mismatch', `Eccentric reducer ${node.id}: its flat side cannot be "${flat}" on a run along that direction`, node.id);
     } else if (odL.ok && odS.ok) {

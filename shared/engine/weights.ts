@@ -7,9 +7,9 @@ import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import type { PipePiece, WeightItem, WeightResult } from './compute-result';
 import type { SpoolGraph } from './build-graph';
 import { bendVolumes, capVolumes, flangeVolumes, frustumVolumes, tubeVolumes } from './fitting-volumes';
+import { cachedPipeDimensions } from './standards-cache';
 import { addWarning, type IssueSink } from './issues';
 import type { NodeAnalysis, RunPipe } from './node-analysis';
-import { pipeDimensions } from '../standards/pipe-schedules';
 import { add, addScaled, normalise, scale } from './vec3-math';
 
 /** Density of carbon steel, kg/mm³ (7850 kg/m³). */
@@ -25,7 +25,7 @@ type Mass = { steel: number; water: number };
 
 /** Mass (kg) and water (kg) of a pipe piece, from its mass per metre and bore. */
 export function pieceMass(piece: PipePiece, pipe: RunPipe | null): Mass | null {
-  const dims = pipe?.dims ?? (piece.nps ? okOrNull(pipeDimensions(piece.nps, piece.schedule)) : null);
+  const dims = pipe?.dims ?? (piece.nps ? okOrNull(cachedPipeDimensions(piece.nps, piece.schedule)) : null);
   if (!dims || piece.cutLengthMm === null) return null;
   const L = piece.cutLengthMm;
   return { steel: (dims.massKgPerM * L) / 1000, water: tubeVolumes(dims.odMm, dims.idMm, L).water * WATER_KG_PER_MM3 };
@@ -76,8 +76,8 @@ export function componentMass(a: NodeAnalysis, wp: Vec3, pipes: Map<string, RunP
     case 'reducer': {
       if (!d.largeNps || !d.smallNps || d.lengthMm === null) return null;
       const sched = p0?.schedule ?? 'STD';
-      const L = okOrNull(pipeDimensions(d.largeNps, sched));
-      const S = okOrNull(pipeDimensions(d.smallNps, sched));
+      const L = okOrNull(cachedPipeDimensions(d.largeNps, sched));
+      const S = okOrNull(cachedPipeDimensions(d.smallNps, sched));
       if (!L || !S) return null;
       return { mass: volume(frustumVolumes(L.odMm, L.idMm, S.odMm, S.idMm, d.lengthMm)), centroid: wp };
     }

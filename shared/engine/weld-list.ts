@@ -21,7 +21,17 @@ export function buildWeldList(
 ): { welds: WeldResult[]; diameterInches: number } {
   const welds: WeldResult[] = [];
   const push = (w: Omit<WeldResult, 'mark' | 'diameterInches'>) => {
-    welds.push({ ...w, mark: `W${welds.length + 1}`, diameterInches: npsInches(w.nps) });
+    welds.push({
+      mark: `W${welds.length + 1}`,
+      type: w.type,
+      nps: w.nps,
+      diameterInches: npsInches(w.nps),
+      location: w.location,
+      position: w.position,
+      nodeId: w.nodeId,
+      runId: w.runId,
+      joins: w.joins,
+    });
   };
   const name = (nodeId: string) => {
     const n = graph.nodes.get(nodeId);

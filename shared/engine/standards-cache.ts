@@ -1,0 +1,32 @@
+/**
+ * Memoised standards lookups for the engine's hot path (the editor recomputes on every
+ * keystroke). The tables are static and the lookups pure, so a result can be shared;
+ * callers must treat returned values as read-only.
+ */
+import { flangeDimensions, type FlangeClass, type FlangeDimensions, type FlangeType } from '../standards/flanges';
+import type { Lookup } from '../standards/lookup-result';
+import type { Nps } from '../standards/nps';
+import { pipeDimensions, type PipeDimensions, type Schedule } from '../standards/pipe-schedules';
+
+const pipes = new Map<string, Lookup<PipeDimensions>>();
+const flanges = new Map<string, Lookup<FlangeDimensions>>();
+
+/** {@link pipeDimensions}, memoised. */
+export function cachedPipeDimensions(nps: Nps, schedule: Schedule): Lookup<PipeDimensions> {
+  const key = `${nps}|${schedule}`;
+  let hit = pipes.get(key);
+  if (!hit) pipes.set(key, (hit = pipeDimensions(nps, schedule)));
+  return hit;
+}
+
+/** {@link flangeDimensions}, memoised on size, class, type and pipe wall (mm). */
+export function cachedFlangeDimensions(nps: Nps, cls: FlangeClass, type: FlangeType, pipeWallMm: number | undefined): Lookup<FlangeDimensions> {
+  const key = `${nps}|${cls}|${type}|${pipeWallMm ?? ''}`;
+  let hit = flanges.get(key);
+  if (!hit) {
+    hit = flangeDimensions(nps, cls, type, pipeWallMm === undefined ? {} : { pipeWallMm });
+    // Walls come from the pipe tables, so keys stay few; cap anyway.
+    if (flanges.size < 5000) flanges.set(key, hit);
+  }
+  return hit;
+}
