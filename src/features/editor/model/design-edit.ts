@@ -26,14 +26,20 @@ export function without(design: SpoolDesign, ids: Set<string>): SpoolDesign {
 }
 
 /**
- * The length kind a run's two ends call for: both ends open (flange face, pipe end,
- * cap tip) → face-to-face; one → centre-to-face; none → centre-to-centre. A run stated
- * as a cut length keeps `cut`: that is a choice, not a consequence of the ends.
+ * The length kind a run's two ends call for, counting flange faces (the engine's rule:
+ * a flange end's work point is its face): two → face-to-face; one → centre-to-face;
+ * none → centre-to-centre (a bevel end or cap counts as a centre, its end point). A run
+ * stated as a cut length keeps `cut`: that is a choice, not a consequence of the ends.
  */
 export function inferredLengthKind(design: SpoolDesign, run: SpoolRun): RunLengthKind {
   if (run.length.kind === 'cut') return 'cut';
-  const openEnds = [run.from, run.to].filter((id) => nodeById(design, id)?.kind === 'end').length;
-  return openEnds === 2 ? 'face-to-face' : openEnds === 1 ? 'centre-to-face' : 'centre-to-centre';
+  const faces = [run.from, run.to].filter((id) => isFlangeFace(nodeById(design, id))).length;
+  return faces === 2 ? 'face-to-face' : faces === 1 ? 'centre-to-face' : 'centre-to-centre';
+}
+
+/** True for an open end carrying a flange (its work point is the flange face). */
+export function isFlangeFace(node: SpoolNode | undefined): boolean {
+  return node?.kind === 'end' && (node.end.type === 'weld-neck-flange' || node.end.type === 'slip-on-flange');
 }
 
 /** Re-derives the length kind of every run touching `nodeIds` (after a node changed kind). */

@@ -36,7 +36,8 @@ export function CameraRig({ preset, nonce, bounds, hasModel }: { preset: ViewPre
     if (!hasModel && framedOnce.current) return;
     const b = boundsRef.current;
     const fov = 'fov' in camera ? ((camera as { fov: number }).fov * Math.PI) / 180 : Math.PI / 4;
-    const distance = (b.radius / Math.sin(fov / 2)) * 1.08;
+    // A bounding sphere frames loosely; 0.85 of it fills the view without cropping a spool.
+    const distance = (b.radius / Math.sin(fov / 2)) * 0.85;
     const dir = new Vector3(...PRESET_DIRECTIONS[preset]).normalize();
     const centre = new Vector3(...b.centre);
     camera.position.copy(centre.clone().add(dir.multiplyScalar(distance)));

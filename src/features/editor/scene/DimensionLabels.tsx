@@ -5,6 +5,7 @@ import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
 import type { ViewPrefs } from '../model/view-prefs';
 import { toScene } from './scene-units';
+import { isFlangeFace } from '../model/design-edit';
 
 const KIND_SHORT = { 'centre-to-centre': 'C–C', 'centre-to-face': 'C–F', 'face-to-face': 'F–F', cut: 'C–C' } as const;
 
@@ -28,7 +29,12 @@ export const DimensionLabels = memo(function DimensionLabels({
 }) {
   const items = useMemo(() => {
     const ends = new Set(design.nodes.filter((n) => n.kind === 'end').map((n) => n.id));
+    const faces = new Set(design.nodes.filter((n) => isFlangeFace(n)).map((n) => n.id));
     const out: Label[] = [];
+    const box = result.overall?.workPointBox;
+    const centre = box ? { x: (box.min.x + box.max.x) / 2, y: (box.min.y + box.max.y) / 2, z: (box.min.z + box.max.z) / 2 } : { x: 0, y: 0, z: 0 };
+    const od = new Map<string, number>();
+    for (const p of result.pieces) if (p.odMm) for (const id of p.runIds) od.set(id, p.odMm);
     for (const run of result.runs) {
       const open = ends.has(run.from) || ends.has(run.to);
       if (open ? !labels.centreToFace : !labels.centreToCentre) continue;
@@ -38,8 +44,11 @@ export const DimensionLabels = memo(function DimensionLabels({
         y: (run.start.y + run.end.y) / 2,
         z: (run.start.z + run.end.z) / 2,
       };
-      const kind = open ? (ends.has(run.from) && ends.has(run.to) ? 'face-to-face' : 'centre-to-face') : 'centre-to-centre';
-      out.push({ key: `d-${run.runId}`, at: toScene(mid), text: `${KIND_SHORT[kind]} ${formatLength(run.workPointDistanceMm, units)}`, tone: 'dim' });
+      const faceCount = Number(faces.has(run.from)) + Number(faces.has(run.to));
+      const kind = faceCount === 2 ? 'face-to-face' : faceCount === 1 ? 'centre-to-face' : 'centre-to-centre';
+      // Dimension lines sit outside the spool, like on a drawing, clear of the cut labels on the pipe.
+      const at = offsetOutward(mid, run.direction, centre, Math.max(150, (od.get(run.runId) ?? 100) * 1.1));
+      out.push({ key: `d-${run.runId}`, at: toScene(at), text: `${KIND_SHORT[kind]} ${formatLength(run.workPointDistanceMm, units)}`, tone: 'dim' });
     }
     if (labels.cutLengths) {
       for (const p of result.pieces) {
@@ -67,9 +76,24 @@ export const DimensionLabels = memo(function DimensionLabels({
   );
 });
 
+type P = { x: number; y: number; z: number };
+
+/** `mid` moved `distanceMm` away from the spool's centre, square to the run (straight up if the run points at the centre). */
+function offsetOutward(mid: P, direction: P, centre: P, distanceMm: number): P {
+  const away = { x: mid.x - centre.x, y: mid.y - centre.y, z: mid.z - centre.z };
+  const along = away.x * direction.x + away.y * direction.y + away.z * direction.z;
+  let n = { x: away.x - along * direction.x, y: away.y - along * direction.y, z: away.z - along * direction.z };
+  let len = Math.hypot(n.x, n.y, n.z);
+  if (len < 1e-6) {
+    n = Math.abs(direction.z) > 0.9 ? { x: 1, y: 0, z: 0 } : { x: 0, y: 0, z: 1 };
+    len = 1;
+  }
+  return { x: mid.x + (n.x / len) * distanceMm, y: mid.y + (n.y / len) * distanceMm, z: mid.z + (n.z / len) * distanceMm };
+}
+
 const TONE_CLASS: Record<Label['tone'], string> = {
-  dim: 'block -translate-y-4 whitespace-nowrap rounded bg-white/90 px-1.5 py-0.5 font-mono text-[11px] font-semibold text-ink-800 shadow-sm ring-1 ring-steel-300',
-  cut: 'block translate-y-4 whitespace-nowrap rounded bg-spark-100/95 px-1.5 py-0.5 font-mono text-[11px] font-semibold text-spark-700 ring-1 ring-spark-300',
+  dim: 'block whitespace-nowrap rounded bg-white/90 px-1.5 py-0.5 font-mono text-[11px] font-semibold text-ink-800 shadow-sm ring-1 ring-steel-300',
+  cut: 'block whitespace-nowrap rounded bg-spark-100/95 px-1.5 py-0.5 font-mono text-[11px] font-semibold text-spark-700 ring-1 ring-spark-300',
   weld: 'block whitespace-nowrap rounded-full bg-ink-800 px-1.5 py-0.5 font-mono text-[10px] font-bold text-white',
   cog: 'block whitespace-nowrap rounded bg-state-shipped-bg px-1.5 py-0.5 text-[11px] font-semibold text-state-shipped-fg',
 };

@@ -67,7 +67,8 @@ export const SpoolModel = memo(function SpoolModel({
             <ComponentMesh component={c} flange={flanges.get(c.nodeId)} colour={colourFor(state, base)} onClick={pick} />
             <WorkPointMarker
               position={c.position}
-              sizeMm={state.selected ? markerMm * 1.5 : markerMm}
+              // Bends' work points lie off the pipe (where the centrelines cross): keep them small.
+              sizeMm={(state.selected ? 1.5 : 1) * (c.kind === 'elbow' || c.kind === 'return' ? markerMm * 0.6 : markerMm)}
               colour={colourFor(state, SCENE_COLOURS.workPoint)}
               onClick={pick}
             />

@@ -35,7 +35,7 @@ describe('deleteComponent', () => {
     const d = m.getSnapshot().design!;
     expect(d.nodes.map((n) => n.kind)).toEqual(['end', 'end']);
     expect(d.runs).toHaveLength(1);
-    expect(d.runs[0]!.length).toEqual({ mm: 2000, kind: 'face-to-face' });
+    expect(d.runs[0]!.length).toEqual({ mm: 2000, kind: 'centre-to-face' });
     expect(r.ok && r.label).toMatch(/downstream/);
     expect(errors(m)).toEqual([]);
   });
@@ -52,7 +52,7 @@ describe('deleteComponent', () => {
     const d = m.getSnapshot().design!;
     expect(d.nodes.map((n) => n.kind)).toEqual(['end', 'end']);
     expect(d.nodes[1]!.id).toBe(elbow);
-    expect(d.runs[0]!.length.kind).toBe('face-to-face');
+    expect(d.runs[0]!.length.kind).toBe('centre-to-face');
     expect(errors(m)).toEqual([]);
   });
 

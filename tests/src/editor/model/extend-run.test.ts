@@ -20,7 +20,7 @@ describe('extendRun', () => {
     extend(m, 'east', 1000);
     const d = m.getSnapshot().design!;
     expect(d.runs).toHaveLength(1);
-    expect(d.runs[0]!.length).toEqual({ mm: 1000, kind: 'face-to-face' });
+    expect(d.runs[0]!.length).toEqual({ mm: 1000, kind: 'centre-to-face' });
     expect(d.nodes.map((n) => n.kind)).toEqual(['end', 'end']);
     // flange face to bevel: one butt weld at the flange (ASME B16.5 Y + one gap)
     expectMm(cuts(m)[0], 1000 - Y6 - GAP, TABLE_EDITION_MM);
@@ -35,6 +35,8 @@ describe('extendRun', () => {
     const d = m.getSnapshot().design!;
     expect(d.nodes.map((n) => n.kind)).toEqual(['end', 'elbow', 'end']);
     expect(d.runs[0]!.length.kind).toBe('centre-to-face');
+    expect(d.runs[1]!.length.kind).toBe('centre-to-centre');
+    expect(resultOf(m).issues).toEqual([]);
     // P1: flange face to elbow centre 1000 − Y (88.9) − A (229) − two gaps
     expectMm(cuts(m)[0], 1000 - Y6 - A6 - 2 * GAP, TABLE_EDITION_MM);
     // P2: elbow centre to bevel end 800 − A − one gap

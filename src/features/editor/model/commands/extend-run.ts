@@ -54,14 +54,15 @@ export function extendRun(design: SpoolDesign, args: ExtendRunArgs, ctx: Command
       from: from.id,
       to: tipId,
       direction: dir,
-      length: { mm, kind: args.lengthKind ?? 'centre-to-face' },
+      length: { mm, kind: 'centre-to-centre' },
       nps: args.nps ?? from.branchNps,
     };
-    const next: SpoolDesign = {
+    let next: SpoolDesign = {
       ...design,
       nodes: [...design.nodes, { id: tipId, kind: 'end', end: { type: 'bevel' } }],
       runs: [...design.runs, run],
     };
+    next = applyKind(refreshLengthKinds(next, [tipId]), runId, args.lengthKind);
     return done(next, `Branch ${words} from ${from.id}`, { select: selectNode(tipId) });
   }
 
