@@ -283,7 +283,9 @@ export function drawIsometric(
       .lineTo(p.x, p.y + 7)
       .stroke();
     doc.restore();
-    const labelW = 50;
+    const cogText = `CoG, empty ${result.weights.emptyKg.toFixed(0)} kg`;
+    doc.font('cond-bold').fontSize(sizes.small);
+    const labelW = doc.widthOfString(cogText) + 2;
     const spots = [
       { x: p.x + 9, y: p.y + 6 },
       { x: p.x - 9 - labelW, y: p.y - 6 - sizes.small },
@@ -296,12 +298,7 @@ export function drawIsometric(
       spots[placer.place(spots.map((q) => ({ x: q.x, y: q.y, w: labelW, h: sizes.small + 2 })))]!;
     const lx = chosen.x;
     const ly = chosen.y;
-    drawText(doc, 'CoG (empty)', lx, ly, {
-      font: 'cond-bold',
-      size: sizes.small,
-      color: INK.warn,
-      width: 50,
-    });
+    drawText(doc, cogText, lx, ly, { font: 'cond-bold', size: sizes.small, color: INK.warn, width: labelW });
   }
   doc.restore();
   return printed;

@@ -64,14 +64,16 @@ export function drawComponentSymbol(
   const ends = component.ends;
   switch (shape.type) {
     case 'elbow': {
-      if (ends.length >= 2) {
-        strokePolyline(
-          doc,
-          view,
-          arcPoints(shape.arcCentre, ends[0]!.point, ends[1]!.point, shape.planeNormal, 18),
-          width,
-        );
-      }
+      if (ends.length < 2) return;
+      // A mitred bend is pipe: the engine lists its segments as pieces (drawn with the pipe) and
+      // its joints as welds, so there is no fitting body to draw.
+      if (shape.construction === 'mitre') return;
+      strokePolyline(
+        doc,
+        view,
+        arcPoints(shape.arcCentre, ends[0]!.point, ends[1]!.point, shape.planeNormal, 18),
+        width,
+      );
       return;
     }
     case 'return': {
