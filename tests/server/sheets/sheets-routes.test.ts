@@ -104,6 +104,45 @@ describe('GET /api/spools/:id/sheet.pdf', () => {
     expect(draft.headers['content-disposition']).toContain('rev-B-draft');
   });
 
+  it('marks a superseded revision, asked for by id, with the revision that replaced it', async () => {
+    const { spool, issuedId, draftId } = await sampleSpool(shop, { issued: true });
+    const ds = db.dataSource;
+    // Issue B: A becomes superseded.
+    await ds.getRepository(SpoolRevisionEntity).update({ id: issuedId! }, { state: 'superseded' });
+    await ds
+      .getRepository(SpoolRevisionEntity)
+      .update({ id: draftId }, { state: 'issued', issuedAt: new Date('2026-12-01T08:00:00Z') });
+    await ds.getRepository(SpoolEntity).update({ id: spool.id }, { currentRevisionId: draftId });
+    const agent = await signedIn(app, shop.email('inspector'), PASSWORD);
+    const res = await agent
+      .get(`/api/spools/${spool.id}/sheet.pdf?revision=${issuedId}`)
+      .buffer(true)
+      .parse(binary);
+    expect(res.status).toBe(200);
+    const pages = await readPdfText(res.body as Buffer);
+    for (const p of pages) expect(p.text).toContain('SUPERSEDED by revision B');
+    const current = await agent.get(`/api/spools/${spool.id}/sheet.pdf`).buffer(true).parse(binary);
+    expect(current.headers['content-disposition']).toContain('CW-201-S03-rev-B.pdf');
+  });
+
+  it('still prints a design with engine errors, marked NOT FOR FABRICATION with the errors listed', async () => {
+    const { spool, draftId, design } = await sampleSpool(shop);
+    const broken = structuredClone(design);
+    broken.runs[0]!.length = { mm: 10, kind: 'centre-to-face' };
+    await db.dataSource
+      .getRepository(SpoolRevisionEntity)
+      .update({ id: draftId }, { design: broken as never });
+    const agent = await signedIn(app, shop.email('fabricator'), PASSWORD);
+    const res = await agent.get(`/api/spools/${spool.id}/sheet.pdf`).buffer(true).parse(binary);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    const text = (await readPdfText(res.body as Buffer)).map((p) => p.text).join(' ');
+    expect(text).toContain('NOT FOR FABRICATION');
+    const errors = computeSpool(broken).issues.filter((i) => i.severity === 'error');
+    expect(errors.length).toBeGreaterThan(0);
+    for (const e of errors) expect(text.replace(/\s+/g, '')).toContain(e.message.replace(/\s+/g, ''));
+  });
+
   it('answers an unknown spool, another shop’s spool or revision with a 404 JSON error', async () => {
     const mine = await sampleSpool(shop);
     const theirs = await sampleSpool(other);
