@@ -54,7 +54,7 @@ export function weightsBlock(
   if (w.notIncluded.length > 0) {
     rows.push({
       cells: [
-        `Not weighed: ${w.notIncluded.length} item${w.notIncluded.length > 1 ? 's' : ''} (see warnings)`,
+        `Not weighed: ${w.notIncluded.length} item${w.notIncluded.length > 1 ? 's' : ''}`,
         '',
         '',
         '',
