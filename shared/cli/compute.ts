@@ -19,7 +19,9 @@ async function main(argv: string[]): Promise<number> {
     text = await readFile(file, 'utf8');
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    process.stderr.write(`Cannot read ${file}: ${code === 'ENOENT' ? 'no such file' : ((e as Error).message ?? String(e))}\n`);
+    process.stderr.write(
+      `Cannot read ${file}: ${code === 'ENOENT' ? 'no such file' : ((e as Error).message ?? String(e))}\n`,
+    );
     return 1;
   }
   let json: unknown;
@@ -32,7 +34,8 @@ async function main(argv: string[]): Promise<number> {
   const parsed = spoolDesignSchema.safeParse(json);
   if (!parsed.success) {
     process.stderr.write(`${file} is not a valid tackline.spool design:\n`);
-    for (const i of parsed.error.issues) process.stderr.write(`  ${i.path.length ? i.path.join('.') : '(design)'}: ${i.message}\n`);
+    for (const i of parsed.error.issues)
+      process.stderr.write(`  ${i.path.length ? i.path.join('.') : '(design)'}: ${i.message}\n`);
     return 1;
   }
   const result = computeSpool(parsed.data, { trusted: true });

@@ -18,7 +18,12 @@ import { analyseSocketFitting } from './take-offs-sockets';
 import { analyseTee } from './take-offs-tees';
 
 /** Pipe size, schedule, material and dimensions of every run. */
-export function runPipes(graph: SpoolGraph, sizes: RunSizes, designSpec: ResolvedSpec, issues: IssueSink): Map<string, RunPipe> {
+export function runPipes(
+  graph: SpoolGraph,
+  sizes: RunSizes,
+  designSpec: ResolvedSpec,
+  issues: IssueSink,
+): Map<string, RunPipe> {
   const out = new Map<string, RunPipe>();
   for (const run of graph.runOrder) {
     const spec = applySpec(designSpec, run.spec);
@@ -29,7 +34,14 @@ export function runPipes(graph: SpoolGraph, sizes: RunSizes, designSpec: Resolve
       if (look.ok) dims = look.value;
       else addError(issues, 'standard-data-missing', look.missing, run.id);
     }
-    out.set(run.id, { nps, schedule: spec.schedule, material: spec.material, heat: run.heat ?? null, dims, spec });
+    out.set(run.id, {
+      nps,
+      schedule: spec.schedule,
+      material: spec.material,
+      heat: run.heat ?? null,
+      dims,
+      spec,
+    });
   }
   return out;
 }
@@ -79,7 +91,9 @@ function analyseOne(ctx: NodeContext): NodeAnalysis | null {
         : null;
     case 'half-coupling':
     case 'branch-outlet':
-      return role.kind === 'header' ? analyseSmallBore(ctx, node, role.headerA, role.headerB, role.branch, role.branchAngleDeg) : null;
+      return role.kind === 'header'
+        ? analyseSmallBore(ctx, node, role.headerA, role.headerB, role.branch, role.branchAngleDeg)
+        : null;
     case 'reducer':
       return role.kind === 'inline' ? analyseReducer(ctx, node, role.a, role.b) : null;
     case 'socket-fitting':

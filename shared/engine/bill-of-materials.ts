@@ -9,23 +9,49 @@ import type { NodeAnalysis } from './node-analysis';
 import { compareNps } from '../standards/nps';
 import { scheduleLabel } from '../standards/pipe-schedules';
 
-const ORDER: Record<BomItem['category'], number> = { pipe: 0, fitting: 1, flange: 2, 'socket-fitting': 3, 'branch-outlet': 4 };
+const ORDER: Record<BomItem['category'], number> = {
+  pipe: 0,
+  fitting: 1,
+  flange: 2,
+  'socket-fitting': 3,
+  'branch-outlet': 4,
+};
 
 /** Builds the bill of materials, sorted by category, then size (largest first), then text. */
-export function buildBillOfMaterials(graph: SpoolGraph, analyses: Map<string, NodeAnalysis>, pieces: PipePiece[], kerfMm: (piece: PipePiece) => number): BomItem[] {
+export function buildBillOfMaterials(
+  graph: SpoolGraph,
+  analyses: Map<string, NodeAnalysis>,
+  pieces: PipePiece[],
+  kerfMm: (piece: PipePiece) => number,
+): BomItem[] {
   const items = new Map<string, BomItem>();
   for (const p of pieces) {
     const description = `Pipe ${scheduleLabel(p.schedule)}, ${p.material}, ASME B36.10M`;
     const key = `pipe|${p.nps}|${description}`;
-    const it = items.get(key) ?? { category: 'pipe' as const, description, nps: p.nps, count: 0, totalCutMm: 0, totalStockMm: 0 };
+    const it = items.get(key) ?? {
+      category: 'pipe' as const,
+      description,
+      nps: p.nps,
+      count: 0,
+      totalCutMm: 0,
+      totalStockMm: 0,
+    };
     it.count += 1;
     it.totalCutMm = it.totalCutMm === null || p.cutLengthMm === null ? null : it.totalCutMm + p.cutLengthMm;
-    it.totalStockMm = it.totalStockMm === null || p.cutLengthMm === null ? null : it.totalStockMm + p.cutLengthMm + kerfMm(p);
+    it.totalStockMm =
+      it.totalStockMm === null || p.cutLengthMm === null ? null : it.totalStockMm + p.cutLengthMm + kerfMm(p);
     items.set(key, it);
   }
   const count = (category: BomItem['category'], description: string, nps: BomItem['nps']) => {
     const key = `${category}|${nps}|${description}`;
-    const it = items.get(key) ?? { category, description, nps, count: 0, totalCutMm: null, totalStockMm: null };
+    const it = items.get(key) ?? {
+      category,
+      description,
+      nps,
+      count: 0,
+      totalCutMm: null,
+      totalStockMm: null,
+    };
     it.count += 1;
     items.set(key, it);
   };
@@ -34,10 +60,20 @@ export function buildBillOfMaterials(graph: SpoolGraph, analyses: Map<string, No
     if (!a?.bom) continue;
     count(a.bom.category, a.bom.description, a.bom.nps);
     if (a.detail.type === 'flange' && a.detail.blind) {
-      count('flange', `Flange blind RF Class ${a.detail.flangeClass}, ${a.bom.description.split(', ')[1] ?? ''}, ASME B16.5`.replace(', ,', ','), a.bom.nps);
+      count(
+        'flange',
+        `Flange blind RF Class ${a.detail.flangeClass}, ${a.bom.description.split(', ')[1] ?? ''}, ASME B16.5`.replace(
+          ', ,',
+          ',',
+        ),
+        a.bom.nps,
+      );
     }
   }
   return [...items.values()].sort(
-    (x, y) => ORDER[x.category] - ORDER[y.category] || compareNps(y.nps, x.nps) || x.description.localeCompare(y.description),
+    (x, y) =>
+      ORDER[x.category] - ORDER[y.category] ||
+      compareNps(y.nps, x.nps) ||
+      x.description.localeCompare(y.description),
   );
 }

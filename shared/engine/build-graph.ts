@@ -42,7 +42,12 @@ export function buildGraph(design: SpoolDesign, issues: IssueSink): SpoolGraph {
     }
     if (!nodes.has(run.from) || !nodes.has(run.to)) {
       const bad = !nodes.has(run.from) ? run.from : run.to;
-      addError(issues, 'unknown-node', `Run ${run.id} refers to node "${bad}", which is not in the design`, run.id);
+      addError(
+        issues,
+        'unknown-node',
+        `Run ${run.id} refers to node "${bad}", which is not in the design`,
+        run.id,
+      );
       continue;
     }
     if (run.from === run.to) {
@@ -102,10 +107,20 @@ export function buildGraph(design: SpoolDesign, issues: IssueSink): SpoolGraph {
     }
     const unreached = [...nodes.keys()].filter((id) => !seen.has(id));
     if (unreached.length > 0 && roots.length <= 1) {
-      addError(issues, 'cycle', `Nodes ${unreached.join(', ')} form a loop not connected to the root`, unreached[0]);
+      addError(
+        issues,
+        'cycle',
+        `Nodes ${unreached.join(', ')} form a loop not connected to the root`,
+        unreached[0],
+      );
     }
     if (unreached.length > 0) {
-      addError(issues, 'disconnected', `Nodes not reached from root ${rootId}: ${unreached.join(', ')} (left out of the results)`, unreached[0]);
+      addError(
+        issues,
+        'disconnected',
+        `Nodes not reached from root ${rootId}: ${unreached.join(', ')} (left out of the results)`,
+        unreached[0],
+      );
     }
   }
 

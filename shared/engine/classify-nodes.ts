@@ -25,7 +25,13 @@ export type NodeRole =
   /** Two collinear run legs and a branch; `branchAngleDeg` between branch and run axis, in (0, 90]. */
   | { kind: 'tee'; runA: Connection; runB: Connection; branch: Connection; branchAngleDeg: number }
   /** A header passing through, with an optional branch run. */
-  | { kind: 'header'; headerA: Connection; headerB: Connection; branch: Connection | null; branchAngleDeg: number | null }
+  | {
+      kind: 'header';
+      headerA: Connection;
+      headerB: Connection;
+      branch: Connection | null;
+      branchAngleDeg: number | null;
+    }
   /** Not usable; the reason is already an issue. */
   | { kind: 'invalid' };
 
@@ -33,7 +39,11 @@ export type NodeRole =
 export type AngleTolerance = { angleDeg: number };
 
 /** The connections of `nodeId`: its parent run first, then its child runs in design order. */
-export function connectionsOf(graph: SpoolGraph, nodeId: string, directions: Map<string, Vec3>): Connection[] {
+export function connectionsOf(
+  graph: SpoolGraph,
+  nodeId: string,
+  directions: Map<string, Vec3>,
+): Connection[] {
   const out: Connection[] = [];
   const p = graph.parentRun.get(nodeId);
   if (p) out.push({ run: p, isParent: true, outward: negate(directions.get(p.id)!) });
@@ -75,11 +85,21 @@ const WHAT: Record<SpoolNode['kind'], string> = {
 };
 
 /** Classifies one node from its connections, reporting geometry errors. */
-export function classifyNode(node: SpoolNode, conns: Connection[], tol: AngleTolerance, issues: IssueSink): NodeRole {
+export function classifyNode(
+  node: SpoolNode,
+  conns: Connection[],
+  tol: AngleTolerance,
+  issues: IssueSink,
+): NodeRole {
   const [lo, hi] = EXPECTED[node.kind];
   if (conns.length < lo || conns.length > hi) {
     const want = lo === hi ? `${lo}` : `${lo} or ${hi}`;
-    addError(issues, 'wrong-connection-count', `${WHAT[node.kind]} at ${node.id} needs ${want} run(s); it has ${conns.length}`, node.id);
+    addError(
+      issues,
+      'wrong-connection-count',
+      `${WHAT[node.kind]} at ${node.id} needs ${want} run(s); it has ${conns.length}`,
+      node.id,
+    );
     return { kind: 'invalid' };
   }
   if (node.kind === 'end') return { kind: 'end', conn: conns[0]! };
@@ -90,14 +110,24 @@ export function classifyNode(node: SpoolNode, conns: Connection[], tol: AngleTol
     const bend = 180 - between;
     if (node.kind === 'return') {
       if (between > tol.angleDeg) {
-        addError(issues, 'angle-not-made', `Return ${node.id}: its legs must be parallel and on the same side (they are ${fmt(between)}° apart)`, node.id);
+        addError(
+          issues,
+          'angle-not-made',
+          `Return ${node.id}: its legs must be parallel and on the same side (they are ${fmt(between)}° apart)`,
+          node.id,
+        );
         return { kind: 'invalid' };
       }
       return { kind: 'return', a, b };
     }
     if (node.kind === 'reducer' || node.kind === 'half-coupling' || node.kind === 'branch-outlet') {
       if (bend > tol.angleDeg) {
-        addError(issues, 'angle-not-made', `${WHAT[node.kind]} at ${node.id} must sit on a straight line; its runs turn ${fmt(bend)}°`, node.id);
+        addError(
+          issues,
+          'angle-not-made',
+          `${WHAT[node.kind]} at ${node.id} must sit on a straight line; its runs turn ${fmt(bend)}°`,
+          node.id,
+        );
         return { kind: 'invalid' };
       }
       if (node.kind === 'reducer') return { kind: 'inline', a, b };
@@ -122,7 +152,12 @@ export function classifyNode(node: SpoolNode, conns: Connection[], tol: AngleTol
       const branchAngleDeg = raw > 90 ? 180 - raw : raw;
       if (node.kind === 'tee' || node.kind === 'socket-fitting') {
         if (Math.abs(branchAngleDeg - 90) > tol.angleDeg) {
-          addError(issues, 'angle-not-made', `Tee ${node.id}: the branch meets the run at ${fmt(branchAngleDeg)}°; tees are made at 90° only`, node.id);
+          addError(
+            issues,
+            'angle-not-made',
+            `Tee ${node.id}: the branch meets the run at ${fmt(branchAngleDeg)}°; tees are made at 90° only`,
+            node.id,
+          );
           return { kind: 'invalid' };
         }
         return { kind: 'tee', runA: a, runB: b, branch, branchAngleDeg };
@@ -130,7 +165,12 @@ export function classifyNode(node: SpoolNode, conns: Connection[], tol: AngleTol
       return { kind: 'header', headerA: a, headerB: b, branch, branchAngleDeg };
     }
   }
-  addError(issues, 'angle-not-made', `${WHAT[node.kind]} at ${node.id}: no two of its runs are in line, so no header or run passes through`, node.id);
+  addError(
+    issues,
+    'angle-not-made',
+    `${WHAT[node.kind]} at ${node.id}: no two of its runs are in line, so no header or run passes through`,
+    node.id,
+  );
   return { kind: 'invalid' };
 }
 

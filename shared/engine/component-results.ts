@@ -71,14 +71,33 @@ export function componentResults(
         };
         break;
       case 'tee':
-        shape = { type: 'tee', runAxis: a.ends[0]!.conn.outward, branchAxis: a.ends[2]!.conn.outward, branchNps: d.branchNps ?? a.nps ?? ('1' as Nps) };
+        shape = {
+          type: 'tee',
+          runAxis: a.ends[0]!.conn.outward,
+          branchAxis: a.ends[2]!.conn.outward,
+          branchNps: d.branchNps ?? a.nps ?? ('1' as Nps),
+        };
         break;
       case 'branch': {
         const branchNps = d.branchNps ?? a.nps ?? ('1' as Nps);
         if (a.node.kind === 'set-on-branch') {
-          shape = { type: 'set-on-branch', headerAxis: d.headerAxis, branchAxis: d.branchAxis ?? UP, branchNps, angleDeg: d.angleDeg ?? 90, orientationDeg: d.orientationDeg };
+          shape = {
+            type: 'set-on-branch',
+            headerAxis: d.headerAxis,
+            branchAxis: d.branchAxis ?? UP,
+            branchNps,
+            angleDeg: d.angleDeg ?? 90,
+            orientationDeg: d.orientationDeg,
+          };
         } else {
-          shape = { type: 'branch-connection', headerAxis: d.headerAxis, branchAxis: d.branchAxis ?? UP, branchNps, orientationDeg: d.orientationDeg, heightMm: d.heightMm };
+          shape = {
+            type: 'branch-connection',
+            headerAxis: d.headerAxis,
+            branchAxis: d.branchAxis ?? UP,
+            branchNps,
+            orientationDeg: d.orientationDeg,
+            heightMm: d.heightMm,
+          };
           // An open socket or outlet: its face is an end with no run.
           if (d.branchAxis && !a.ends.some((e) => !e.pipeContinues)) {
             const headerOd = od(a.nps);
@@ -98,7 +117,15 @@ export function componentResults(
       case 'reducer': {
         const large = ends.find((e) => e.nps === d.largeNps) ?? ends[0]!;
         const small = ends.find((e) => e !== large) ?? ends[1]!;
-        shape = { type: 'reducer', largeEnd: large.point, smallEnd: small.point, largeOdMm: od(d.largeNps), smallOdMm: od(d.smallNps), eccentric: d.eccentric, lengthMm: d.lengthMm };
+        shape = {
+          type: 'reducer',
+          largeEnd: large.point,
+          smallEnd: small.point,
+          largeOdMm: od(d.largeNps),
+          smallOdMm: od(d.smallNps),
+          eccentric: d.eccentric,
+          lengthMm: d.lengthMm,
+        };
         break;
       }
       case 'flange':
@@ -113,7 +140,15 @@ export function componentResults(
           boltCount: d.boltCount,
           blind: d.blind,
         };
-        ends.push({ runId: null, point: wp, outward: negate(a.ends[0]!.conn.outward), nps: a.nps ?? ('1' as Nps), odMm: d.odMm, joint: 'flange-face', takeOffMm: null });
+        ends.push({
+          runId: null,
+          point: wp,
+          outward: negate(a.ends[0]!.conn.outward),
+          nps: a.nps ?? ('1' as Nps),
+          odMm: d.odMm,
+          joint: 'flange-face',
+          takeOffMm: null,
+        });
         break;
       case 'cap':
         shape = { type: 'cap', axis: negate(a.ends[0]!.conn.outward), lengthMm: d.lengthMm };
@@ -127,13 +162,28 @@ export function componentResults(
       default:
         shape = { type: 'open-end', axis: UP };
     }
-    out.push({ nodeId, kind: a.node.kind, description: a.description, nps: a.nps, position: wp, ends, shape, source: a.source, massKg: massOf(nodeId) });
+    out.push({
+      nodeId,
+      kind: a.node.kind,
+      description: a.description,
+      nps: a.nps,
+      position: wp,
+      ends,
+      shape,
+      source: a.source,
+      massKg: massOf(nodeId),
+    });
   }
   return out;
 }
 
 /** Open ends of the spool with their centre-to-face from the nearest fitting. */
-export function openEnds(graph: SpoolGraph, analyses: Map<string, NodeAnalysis>, positions: Map<string, Vec3>, placed: Map<string, PlacedRun>): OpenEnd[] {
+export function openEnds(
+  graph: SpoolGraph,
+  analyses: Map<string, NodeAnalysis>,
+  positions: Map<string, Vec3>,
+  placed: Map<string, PlacedRun>,
+): OpenEnd[] {
   const out: OpenEnd[] = [];
   for (const nodeId of graph.nodeOrder) {
     const node = graph.nodes.get(nodeId);

@@ -81,9 +81,31 @@ export type ComponentShape =
     }
   | { type: 'return'; arcCentre: Vec3; bendRadiusMm: number; centreToCentreMm: number; planeNormal: Vec3 }
   | { type: 'tee'; runAxis: Vec3; branchAxis: Vec3; branchNps: Nps }
-  | { type: 'set-on-branch'; headerAxis: Vec3; branchAxis: Vec3; branchNps: Nps; angleDeg: number; orientationDeg: number | null }
-  | { type: 'branch-connection'; headerAxis: Vec3; branchAxis: Vec3; branchNps: Nps; orientationDeg: number | null; heightMm: number | null }
-  | { type: 'reducer'; largeEnd: Vec3; smallEnd: Vec3; largeOdMm: number | null; smallOdMm: number | null; eccentric: boolean; lengthMm: number | null }
+  | {
+      type: 'set-on-branch';
+      headerAxis: Vec3;
+      branchAxis: Vec3;
+      branchNps: Nps;
+      angleDeg: number;
+      orientationDeg: number | null;
+    }
+  | {
+      type: 'branch-connection';
+      headerAxis: Vec3;
+      branchAxis: Vec3;
+      branchNps: Nps;
+      orientationDeg: number | null;
+      heightMm: number | null;
+    }
+  | {
+      type: 'reducer';
+      largeEnd: Vec3;
+      smallEnd: Vec3;
+      largeOdMm: number | null;
+      smallOdMm: number | null;
+      eccentric: boolean;
+      lengthMm: number | null;
+    }
   | {
       type: 'flange';
       /** Centre of the raised face, mm plant. */
@@ -293,7 +315,13 @@ export type BomItem = {
 export type BillOfMaterials = { items: BomItem[] };
 
 /** A weighed item. */
-export type WeightItem = { ref: string; description: string; massKg: number; waterKg: number; centroid: Vec3 };
+export type WeightItem = {
+  ref: string;
+  description: string;
+  massKg: number;
+  waterKg: number;
+  centroid: Vec3;
+};
 
 /** Weights and centres of gravity (estimates; see `caution`). */
 export type WeightResult = {

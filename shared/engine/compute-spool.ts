@@ -71,7 +71,9 @@ export function computeSpool(design: unknown, options: ComputeOptions = {}): Spo
   } catch (e) {
     // A bug, not a design problem: keep the caller alive and say so.
     const msg = e instanceof Error ? e.message : String(e);
-    return emptyResult(BUILT_IN_SPEC, [{ severity: 'error', code: 'internal-error', message: `Internal engine error: ${msg}` }]);
+    return emptyResult(BUILT_IN_SPEC, [
+      { severity: 'error', code: 'internal-error', message: `Internal engine error: ${msg}` },
+    ]);
   }
 }
 
@@ -85,20 +87,47 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
   const directions = runDirections(graph);
   const roles = new Map<string, NodeRole>();
   for (const id of graph.nodeOrder) {
-    roles.set(id, classifyNode(graph.nodes.get(id)!, connectionsOf(graph, id, directions), { angleDeg }, issues));
+    roles.set(
+      id,
+      classifyNode(graph.nodes.get(id)!, connectionsOf(graph, id, directions), { angleDeg }, issues),
+    );
   }
   const sizes = resolveSizes(graph, roles, spec.nps, issues);
   const pipes = runPipes(graph, sizes, spec, issues);
   const analyses = analyseNodes(graph, roles, pipes, spec, angleDeg, issues);
-  const { runs: placed, positions } = placeRuns(graph, analyses, directions, design.origin, { closeCoupleMm }, issues);
+  const { runs: placed, positions } = placeRuns(
+    graph,
+    analyses,
+    directions,
+    design.origin,
+    { closeCoupleMm },
+    issues,
+  );
   const { pieces, marks } = buildCutList(graph, analyses, placed, pipes, positions, issues);
   const { welds, diameterInches } = buildWeldList(graph, analyses, placed, positions, marks);
   const weights = computeWeights(graph, pieces, analyses, positions, pipes, issues);
   const massByNode = new Map(weights.items.map((i) => [i.ref, i.massKg]));
   const components = componentResults(graph, analyses, positions, (id) => massByNode.get(id) ?? null);
-  const flanges = flangeOrientations(graph, roles, analyses, positions, spec.boltHoleToleranceMm, angleDeg, issues);
-  const flangePairs = flangePairChecks(graph, analyses, directions, flanges, spec.boltHoleToleranceMm, issues);
-  const bomItems = buildBillOfMaterials(graph, analyses, pieces, (p) => (p.runIds[0] ? (pipes.get(p.runIds[0])?.spec.sawKerfMm ?? spec.sawKerfMm) : spec.sawKerfMm));
+  const flanges = flangeOrientations(
+    graph,
+    roles,
+    analyses,
+    positions,
+    spec.boltHoleToleranceMm,
+    angleDeg,
+    issues,
+  );
+  const flangePairs = flangePairChecks(
+    graph,
+    analyses,
+    directions,
+    flanges,
+    spec.boltHoleToleranceMm,
+    issues,
+  );
+  const bomItems = buildBillOfMaterials(graph, analyses, pieces, (p) =>
+    p.runIds[0] ? (pipes.get(p.runIds[0])?.spec.sawKerfMm ?? spec.sawKerfMm) : spec.sawKerfMm,
+  );
 
   const runs: RunResult[] = [];
   for (const run of graph.runOrder) {
@@ -134,7 +163,9 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
     version: 1,
     ok: !hasErrors(issues),
     spec,
-    workPoints: graph.nodeOrder.filter((id) => positions.has(id)).map((id) => ({ nodeId: id, position: positions.get(id)! })),
+    workPoints: graph.nodeOrder
+      .filter((id) => positions.has(id))
+      .map((id) => ({ nodeId: id, position: positions.get(id)! })),
     components,
     runs,
     pieces,
@@ -167,7 +198,16 @@ function emptyResult(spec: ResolvedSpec, issues: Issue[]): SpoolResult {
     openEnds: [],
     overall: null,
     bom: { items: [] },
-    weights: { emptyKg: 0, waterKg: 0, waterFilledKg: 0, centreOfGravity: null, centreOfGravityFilled: null, items: [], notIncluded: [], caution: WEIGHT_CAUTION },
+    weights: {
+      emptyKg: 0,
+      waterKg: 0,
+      waterFilledKg: 0,
+      centreOfGravity: null,
+      centreOfGravityFilled: null,
+      items: [],
+      notIncluded: [],
+      caution: WEIGHT_CAUTION,
+    },
     issues,
   };
 }

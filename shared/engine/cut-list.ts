@@ -19,10 +19,17 @@ export const SQUARE_END_MAX_WALL_MM = 3;
 export const COMPOUND_BEVEL_MIN_WALL_MM = 22;
 
 /** Preparation of a pipe end meeting `end` at node `nodeId`, for a pipe of wall `wallMm`. */
-export function endPrepFor(end: NodeEnd | null, nodeId: string, wallMm: number | null, branchOf?: string): EndPrep {
+export function endPrepFor(
+  end: NodeEnd | null,
+  nodeId: string,
+  wallMm: number | null,
+  branchOf?: string,
+): EndPrep {
   const bevel = (): EndPrep => {
-    if (wallMm !== null && wallMm <= SQUARE_END_MAX_WALL_MM) return { type: 'square', label: 'square (wall ≤ 3 mm)', nodeId };
-    if (wallMm !== null && wallMm > COMPOUND_BEVEL_MIN_WALL_MM) return { type: 'compound-bevel', label: 'compound bevel 37.5°/10°', nodeId };
+    if (wallMm !== null && wallMm <= SQUARE_END_MAX_WALL_MM)
+      return { type: 'square', label: 'square (wall ≤ 3 mm)', nodeId };
+    if (wallMm !== null && wallMm > COMPOUND_BEVEL_MIN_WALL_MM)
+      return { type: 'compound-bevel', label: 'compound bevel 37.5°/10°', nodeId };
     return { type: 'bevel', label: 'bevel 37.5°', nodeId };
   };
   if (!end) return bevel();
@@ -43,7 +50,8 @@ export function endPrepFor(end: NodeEnd | null, nodeId: string, wallMm: number |
 
 /** Where the pipe itself ends at a run end, mm plant (port + take-off + gap along the run). */
 function pipeEndPoint(placed: PlacedRun, atFrom: boolean): Vec3 {
-  if (atFrom) return addScaled(placed.start, placed.direction, (placed.takeOffFromMm ?? 0) + placed.gapFromMm);
+  if (atFrom)
+    return addScaled(placed.start, placed.direction, (placed.takeOffFromMm ?? 0) + placed.gapFromMm);
   return addScaled(placed.end, placed.direction, -((placed.takeOffToMm ?? 0) + placed.gapToMm));
 }
 
@@ -82,7 +90,14 @@ export function buildCutList(
   for (const runIds of groups) {
     const first = pipes.get(runIds[0]!)!;
     // Terminal ends: run ends that are not pass-through.
-    const terminals: { point: Vec3; end: NodeEnd | null; nodeId: string; allowance: number; placed: PlacedRun; atFrom: boolean }[] = [];
+    const terminals: {
+      point: Vec3;
+      end: NodeEnd | null;
+      nodeId: string;
+      allowance: number;
+      placed: PlacedRun;
+      atFrom: boolean;
+    }[] = [];
     let total: number | null = 0;
     let shortDelta: number | null = null;
     for (const id of runIds) {
@@ -94,7 +109,8 @@ export function buildCutList(
         const nodeId = atFrom ? p.run.from : p.run.to;
         const an = analyses.get(nodeId);
         const allowance = an?.detail.type === 'open-end' ? an.detail.fieldFitAllowanceMm : 0;
-        if (end?.shortPointTakeOffMm != null && end.takeOffMm !== null) shortDelta = end.shortPointTakeOffMm - end.takeOffMm;
+        if (end?.shortPointTakeOffMm != null && end.takeOffMm !== null)
+          shortDelta = end.shortPointTakeOffMm - end.takeOffMm;
         terminals.push({ point: pipeEndPoint(p, atFrom), end, nodeId, allowance, placed: p, atFrom });
       }
     }
@@ -124,7 +140,10 @@ export function buildCutList(
       stockLengthMm: cut === null ? null : cut + first.spec.sawKerfMm,
       start: t0.point,
       end: t1.point,
-      ends: [endPrepFor(t0.end, t0.nodeId, wall, branchHeader(t0)), endPrepFor(t1.end, t1.nodeId, wall, branchHeader(t1))],
+      ends: [
+        endPrepFor(t0.end, t0.nodeId, wall, branchHeader(t0)),
+        endPrepFor(t1.end, t1.nodeId, wall, branchHeader(t1)),
+      ],
       massKg: null,
     };
     if (!first.nps) continue;
@@ -165,7 +184,10 @@ export function buildCutList(
         odMm: pipe.dims?.odMm ?? null,
         wallMm: pipe.dims?.wallMm ?? null,
         cutLengthMm: cut,
-        shortPointLengthMm: cut !== null && pipe.dims ? Math.max(0, cut - pipe.dims.odMm * Math.tan((cutDeg * Math.PI) / 180)) : null,
+        shortPointLengthMm:
+          cut !== null && pipe.dims
+            ? Math.max(0, cut - pipe.dims.odMm * Math.tan((cutDeg * Math.PI) / 180))
+            : null,
         fieldFitAllowanceMm: 0,
         stockLengthMm: cut === null ? null : cut + pipe.spec.sawKerfMm,
         start: addScaled(v0, dir, g / 2),
@@ -183,7 +205,14 @@ export function buildCutList(
  * (outward), radius R (mm), total deflection `angleDeg` and `welds` joints: the vertices of
  * the polygon circumscribing the bend arc, from leg `a` to leg `b`.
  */
-export function mitreVertices(wp: Vec3, oa: Vec3, ob: Vec3, R: number, angleDeg: number, welds: number): Vec3[] {
+export function mitreVertices(
+  wp: Vec3,
+  oa: Vec3,
+  ob: Vec3,
+  R: number,
+  angleDeg: number,
+  welds: number,
+): Vec3[] {
   const theta = (angleDeg * Math.PI) / 180;
   const alpha = theta / welds;
   const bis = normalise(add(oa, ob));
@@ -195,7 +224,8 @@ export function mitreVertices(wp: Vec3, oa: Vec3, ob: Vec3, R: number, angleDeg:
   const endTangent = addScaled(wp, ob, R * Math.tan(theta / 2));
   // Sweep sense: the rotation about ±n that carries the start radius to the end radius.
   const trial = rotateAbout(radial, n, theta);
-  const sense = dot(sub(add(centre, trial), endTangent), sub(add(centre, trial), endTangent)) < 1e-6 * R * R ? 1 : -1;
+  const sense =
+    dot(sub(add(centre, trial), endTangent), sub(add(centre, trial), endTangent)) < 1e-6 * R * R ? 1 : -1;
   const out: Vec3[] = [];
   const reach = R / Math.cos(alpha / 2);
   for (let i = 0; i < welds; i++) {
@@ -227,7 +257,11 @@ function checkBranchClearance(
     const a = analyses.get(through);
     const branchEnd = a?.ends.find((e) => !e.pipeContinues);
     const branchNps = a?.detail.type === 'branch' ? a.detail.branchNps : null;
-    const branchOd = branchEnd ? pipes.get(branchEnd.conn.run.id)?.dims?.odMm : branchNps ? pipeOdOf(branchNps) : null;
+    const branchOd = branchEnd
+      ? pipes.get(branchEnd.conn.run.id)?.dims?.odMm
+      : branchNps
+        ? pipeOdOf(branchNps)
+        : null;
     if (!branchOd) continue;
     if (p.pipeLengthMm < branchOd / 2) {
       addError(
@@ -251,9 +285,19 @@ function checkLength(piece: PipePiece, pipe: RunPipe, issues: IssueSink): void {
   if (cut === null) return;
   const min = pipe.spec.minPieceLengthMm;
   if (cut < min) {
-    addError(issues, 'piece-too-short', `Piece ${piece.mark} (run ${piece.runIds.join(', ')}) would be ${round(cut)} mm, shorter than the ${min} mm minimum`, runId);
+    addError(
+      issues,
+      'piece-too-short',
+      `Piece ${piece.mark} (run ${piece.runIds.join(', ')}) would be ${round(cut)} mm, shorter than the ${min} mm minimum`,
+      runId,
+    );
   } else if (piece.odMm !== null && cut < piece.odMm) {
-    addWarning(issues, 'piece-shorter-than-diameter', `Piece ${piece.mark} is ${round(cut)} mm, shorter than its outside diameter (${piece.odMm} mm): hard to fit and weld`, runId);
+    addWarning(
+      issues,
+      'piece-shorter-than-diameter',
+      `Piece ${piece.mark} is ${round(cut)} mm, shorter than its outside diameter (${piece.odMm} mm): hard to fit and weld`,
+      runId,
+    );
   }
 }
 

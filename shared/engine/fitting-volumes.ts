@@ -12,12 +12,23 @@ export function tubeVolumes(D: number, d: number, L: number): { steel: number; w
 }
 
 /** Torus shell: bend of radius R (mm) through `angleRad`, outside D, bore d, mm³. */
-export function bendVolumes(D: number, d: number, R: number, angleRad: number): { steel: number; water: number } {
+export function bendVolumes(
+  D: number,
+  d: number,
+  R: number,
+  angleRad: number,
+): { steel: number; water: number } {
   return tubeVolumes(D, d, R * angleRad);
 }
 
 /** Frustum shell of length H from (D1, d1) to (D2, d2), mm³. */
-export function frustumVolumes(D1: number, d1: number, D2: number, d2: number, H: number): { steel: number; water: number } {
+export function frustumVolumes(
+  D1: number,
+  d1: number,
+  D2: number,
+  d2: number,
+  H: number,
+): { steel: number; water: number } {
   const f = (a: number, b: number) => (Math.PI * H * (a * a + a * b + b * b)) / 12;
   return { steel: Math.max(0, f(D1, D2) - f(d1, d2)), water: f(d1, d2) };
 }

@@ -24,7 +24,11 @@ export function wrapToHalfPitch(deg: number, pitchDeg: number): number {
 }
 
 /** A rotation of `deltaDeg` (positive = clockwise seen facing) as a correction. */
-export function correctionFor(flangeId: string, deltaDeg: number, boltCircleMm: number | null): RotationCorrection {
+export function correctionFor(
+  flangeId: string,
+  deltaDeg: number,
+  boltCircleMm: number | null,
+): RotationCorrection {
   return {
     flangeId,
     rotateDeg: Math.abs(deltaDeg),

@@ -22,7 +22,11 @@ import { angleBetweenDeg, anyPerpendicular, cross, dot, negate, normalise } from
  * the run feeding it to the run leaving it; a 180° return about its bend-plane normal).
  * Carrying from run a to run b is then frame(b) · frame(a)ᵀ.
  */
-export function runFrames(graph: SpoolGraph, analyses: Map<string, NodeAnalysis>, directions: Map<string, Vec3>): Map<string, Mat3> {
+export function runFrames(
+  graph: SpoolGraph,
+  analyses: Map<string, NodeAnalysis>,
+  directions: Map<string, Vec3>,
+): Map<string, Mat3> {
   const frames = new Map<string, Mat3>();
   for (const run of graph.runOrder) {
     const t = directions.get(run.id)!;
@@ -42,7 +46,10 @@ export function runFrames(graph: SpoolGraph, analyses: Map<string, NodeAnalysis>
       base = frames.get(first.id) ?? IDENTITY;
     }
     const detail = analyses.get(run.from)?.detail;
-    const fallback = detail?.type === 'return' ? (normalise(cross(inDir, detail.offset)) ?? anyPerpendicular(inDir)) : anyPerpendicular(inDir);
+    const fallback =
+      detail?.type === 'return'
+        ? (normalise(cross(inDir, detail.offset)) ?? anyPerpendicular(inDir))
+        : anyPerpendicular(inDir);
     frames.set(run.id, multiply(rotationBetween(inDir, t, fallback), base));
   }
   return frames;
@@ -75,7 +82,16 @@ export function flangePairChecks(
       const fb = frames.get(runOfFlange.get(B.nodeId) ?? '');
       const carried = fa && fb ? apply(fb, applyTransposed(fa, A.firstHoleDirection)) : null;
       if (!carried) {
-        out.push({ a: A.nodeId, b: B.nodeId, parallelFaces, errorDeg: null, errorMm: null, toleranceMm, withinTolerance: null, correction: null });
+        out.push({
+          a: A.nodeId,
+          b: B.nodeId,
+          parallelFaces,
+          errorDeg: null,
+          errorMm: null,
+          toleranceMm,
+          withinTolerance: null,
+          correction: null,
+        });
         continue;
       }
       const view = negate(B.outward);
@@ -86,13 +102,23 @@ export function flangePairChecks(
         z: carried.z - B.outward.z * dot(carried, B.outward),
       });
       if (!carriedInPlane || angleBetweenDeg(carried, carriedInPlane) > 1) {
-        out.push({ a: A.nodeId, b: B.nodeId, parallelFaces, errorDeg: null, errorMm: null, toleranceMm, withinTolerance: null, correction: null });
+        out.push({
+          a: A.nodeId,
+          b: B.nodeId,
+          parallelFaces,
+          errorDeg: null,
+          errorMm: null,
+          toleranceMm,
+          withinTolerance: null,
+          correction: null,
+        });
         continue;
       }
       const pitch = 360 / B.boltCount!;
       const err = wrapToHalfPitch(clockwiseAngleDeg(B.firstHoleDirection, view, carriedInPlane), pitch);
       const errorDeg = Math.abs(err) < 1e-9 ? 0 : err;
-      const errorMm = B.boltCircleMm === null ? null : ((B.boltCircleMm / 2) * Math.abs(errorDeg) * Math.PI) / 180;
+      const errorMm =
+        B.boltCircleMm === null ? null : ((B.boltCircleMm / 2) * Math.abs(errorDeg) * Math.PI) / 180;
       const within = errorMm === null ? null : errorMm <= toleranceMm;
       const correction = errorDeg === 0 ? null : correctionFor(B.nodeId, errorDeg, B.boltCircleMm);
       if (within === false) {
@@ -103,7 +129,16 @@ export function flangePairChecks(
           B.nodeId,
         );
       }
-      out.push({ a: A.nodeId, b: B.nodeId, parallelFaces, errorDeg, errorMm, toleranceMm, withinTolerance: within, correction });
+      out.push({
+        a: A.nodeId,
+        b: B.nodeId,
+        parallelFaces,
+        errorDeg,
+        errorMm,
+        toleranceMm,
+        withinTolerance: within,
+        correction,
+      });
     }
   }
   return out;

@@ -52,11 +52,39 @@ export type NodeEnd = {
 
 /** Kind-specific facts for drawing and weighing. */
 export type NodeDetail =
-  | { type: 'elbow'; angleDeg: number; bendRadiusMm: number | null; construction: 'fitting' | 'mitre'; mitreWelds: number | null; mitreSegmentMm: number | null }
+  | {
+      type: 'elbow';
+      angleDeg: number;
+      bendRadiusMm: number | null;
+      construction: 'fitting' | 'mitre';
+      mitreWelds: number | null;
+      mitreSegmentMm: number | null;
+    }
   | { type: 'return'; bendRadiusMm: number | null; centreToCentreMm: number | null; offset: Vec3 }
-  | { type: 'tee'; branchNps: Nps | null; runCentreToEndMm: number | null; branchCentreToEndMm: number | null }
-  | { type: 'branch'; branchNps: Nps | null; angleDeg: number | null; orientationDeg: number | null; branchAxis: Vec3 | null; headerAxis: Vec3; heightMm: number | null }
-  | { type: 'reducer'; largeNps: Nps | null; smallNps: Nps | null; lengthMm: number | null; eccentric: boolean; largeEnd: Vec3 | null; smallEnd: Vec3 | null }
+  | {
+      type: 'tee';
+      branchNps: Nps | null;
+      runCentreToEndMm: number | null;
+      branchCentreToEndMm: number | null;
+    }
+  | {
+      type: 'branch';
+      branchNps: Nps | null;
+      angleDeg: number | null;
+      orientationDeg: number | null;
+      branchAxis: Vec3 | null;
+      headerAxis: Vec3;
+      heightMm: number | null;
+    }
+  | {
+      type: 'reducer';
+      largeNps: Nps | null;
+      smallNps: Nps | null;
+      lengthMm: number | null;
+      eccentric: boolean;
+      largeEnd: Vec3 | null;
+      smallEnd: Vec3 | null;
+    }
   | {
       type: 'flange';
       flangeType: 'weld-neck-flange' | 'slip-on-flange';

@@ -7,7 +7,8 @@ import type { Box, ComponentResult, OverallDimensions, PipePiece } from './compu
 
 /** Grows a box (in place) to hold `p` grown by `r` mm in every axis. */
 function grow(box: { min: Vec3; max: Vec3 } | null, p: Vec3, r: number): { min: Vec3; max: Vec3 } {
-  if (!box) return { min: { x: p.x - r, y: p.y - r, z: p.z - r }, max: { x: p.x + r, y: p.y + r, z: p.z + r } };
+  if (!box)
+    return { min: { x: p.x - r, y: p.y - r, z: p.z - r }, max: { x: p.x + r, y: p.y + r, z: p.z + r } };
   const { min, max } = box;
   if (p.x - r < min.x) min.x = p.x - r;
   if (p.y - r < min.y) min.y = p.y - r;
@@ -19,11 +20,18 @@ function grow(box: { min: Vec3; max: Vec3 } | null, p: Vec3, r: number): { min: 
 }
 
 function finish(b: { min: Vec3; max: Vec3 }): Box {
-  return { min: b.min, max: b.max, sizeMm: { x: b.max.x - b.min.x, y: b.max.y - b.min.y, z: b.max.z - b.min.z } };
+  return {
+    min: b.min,
+    max: b.max,
+    sizeMm: { x: b.max.x - b.min.x, y: b.max.y - b.min.y, z: b.max.z - b.min.z },
+  };
 }
 
 /** Boxes of the placed spool, or null when nothing is placed. */
-export function overallDimensions(components: ComponentResult[], pieces: PipePiece[]): OverallDimensions | null {
+export function overallDimensions(
+  components: ComponentResult[],
+  pieces: PipePiece[],
+): OverallDimensions | null {
   let wp: { min: Vec3; max: Vec3 } | null = null;
   let env: { min: Vec3; max: Vec3 } | null = null;
   for (const c of components) {
@@ -48,7 +56,11 @@ export function overallDimensions(components: ComponentResult[], pieces: PipePie
       } else if (c.shape.type === 'return' && c.ends[0]) {
         // A return's back lies opposite its legs.
         const o = c.ends[0].outward;
-        env = grow(env, { x: centre.x - o.x * r, y: centre.y - o.y * r, z: centre.z - o.z * r }, (c.ends[0].odMm ?? 0) / 2);
+        env = grow(
+          env,
+          { x: centre.x - o.x * r, y: centre.y - o.y * r, z: centre.z - o.z * r },
+          (c.ends[0].odMm ?? 0) / 2,
+        );
       }
     }
   }

@@ -71,7 +71,12 @@ export function placeRuns(
     const end = addScaled(start, d, len.workPointDistanceMm);
     positions.set(run.to, sub(end, toEnd?.portOffset ?? ZERO));
     runs.set(run.id, {
-      run, direction: d, fromEnd, toEnd, start, end,
+      run,
+      direction: d,
+      fromEnd,
+      toEnd,
+      start,
+      end,
       workPointDistanceMm: len.workPointDistanceMm,
       takeOffFromMm: len.takeOffFromMm,
       takeOffToMm: len.takeOffToMm,
@@ -89,7 +94,13 @@ export function placeRuns(
 type Lengths = Omit<PlacedRun, 'run' | 'direction' | 'fromEnd' | 'toEnd' | 'start' | 'end'>;
 
 /** The lengths of one run from its stated length and its two ends' take-offs. */
-export function runLengths(run: SpoolRun, fromEnd: NodeEnd | null, toEnd: NodeEnd | null, tol: LengthTolerance, issues: IssueSink): Lengths {
+export function runLengths(
+  run: SpoolRun,
+  fromEnd: NodeEnd | null,
+  toEnd: NodeEnd | null,
+  tol: LengthTolerance,
+  issues: IssueSink,
+): Lengths {
   const tF = fromEnd ? fromEnd.takeOffMm : null;
   const tT = toEnd ? toEnd.takeOffMm : null;
   const gF = fromEnd?.gapMm ?? 0;
@@ -97,13 +108,21 @@ export function runLengths(run: SpoolRun, fromEnd: NodeEnd | null, toEnd: NodeEn
   const openF = !fromEnd || fromEnd.joint === 'open';
   const openT = !toEnd || toEnd.joint === 'open';
   const single = openF || openT ? 0 : Math.max(gF, gT);
-  const noCouple = (e: NodeEnd | null) => e !== null && (e.joint === 'socket' || e.joint === 'slip-on' || e.pipeContinues);
+  const noCouple = (e: NodeEnd | null) =>
+    e !== null && (e.joint === 'socket' || e.joint === 'slip-on' || e.pipeContinues);
   const cannotCouple = noCouple(fromEnd) ? fromEnd : noCouple(toEnd) ? toEnd : null;
   const bothOpen = openF && openT;
   const known = tF !== null && tT !== null;
   const stated = run.length.mm;
   // Plain literals, no object spread: this runs for every run on every keystroke.
-  const mk = (workPointDistanceMm: number, gapsMm: number, gapFromMm: number, gapToMm: number, pipeLengthMm: number | null, closeCoupled: boolean): Lengths => ({
+  const mk = (
+    workPointDistanceMm: number,
+    gapsMm: number,
+    gapFromMm: number,
+    gapToMm: number,
+    pipeLengthMm: number | null,
+    closeCoupled: boolean,
+  ): Lengths => ({
     workPointDistanceMm,
     takeOffFromMm: tF,
     takeOffToMm: tT,
@@ -117,10 +136,22 @@ export function runLengths(run: SpoolRun, fromEnd: NodeEnd | null, toEnd: NodeEn
   if (run.length.kind === 'cut') {
     if (stated === 0 && !bothOpen) {
       if (cannotCouple) {
-        addError(issues, 'overlapping-fittings', `Run ${run.id} has no pipe, but a ${cannotCouple.joint === 'set-on' ? 'branch connection' : cannotCouple.joint} joint needs pipe`, run.id);
+        addError(
+          issues,
+          'overlapping-fittings',
+          `Run ${run.id} has no pipe, but a ${cannotCouple.joint === 'set-on' ? 'branch connection' : cannotCouple.joint} joint needs pipe`,
+          run.id,
+        );
         return mk((tF ?? 0) + (tT ?? 0), 0, 0, 0, null, false);
       }
-      return mk((tF ?? 0) + (tT ?? 0) + single, single, openF ? 0 : single / 2, openT ? 0 : single / 2, known ? 0 : null, true);
+      return mk(
+        (tF ?? 0) + (tT ?? 0) + single,
+        single,
+        openF ? 0 : single / 2,
+        openT ? 0 : single / 2,
+        known ? 0 : null,
+        true,
+      );
     }
     return mk(stated + (tF ?? 0) + (tT ?? 0) + gF + gT, gF + gT, gF, gT, known ? stated : null, false);
   }
@@ -159,10 +190,20 @@ function checkLengthKind(run: SpoolRun, graph: SpoolGraph, issues: IssueSink): v
   };
   const faces = Number(isFace(run.from)) + Number(isFace(run.to));
   if (kind === 'centre-to-face' && faces !== 1) {
-    addWarning(issues, 'length-kind-mismatch', `Run ${run.id} is dimensioned centre-to-face but ${faces === 0 ? 'neither end is' : 'both ends are'} a flange face`, run.id);
+    addWarning(
+      issues,
+      'length-kind-mismatch',
+      `Run ${run.id} is dimensioned centre-to-face but ${faces === 0 ? 'neither end is' : 'both ends are'} a flange face`,
+      run.id,
+    );
   }
   if (kind === 'face-to-face' && faces !== 2) {
-    addWarning(issues, 'length-kind-mismatch', `Run ${run.id} is dimensioned face-to-face but only ${faces} of its ends is a flange face`, run.id);
+    addWarning(
+      issues,
+      'length-kind-mismatch',
+      `Run ${run.id} is dimensioned face-to-face but only ${faces} of its ends is a flange face`,
+      run.id,
+    );
   }
 }
 

@@ -33,7 +33,8 @@ export function resolveSizes(
       const expected = expect(kid.id);
       const stated = kid.nps ?? null;
       if (stated && expected && stated !== expected) {
-        const branchOfSetOn = node.kind === 'set-on-branch' && role.kind === 'header' && role.branch?.run.id === kid.id;
+        const branchOfSetOn =
+          node.kind === 'set-on-branch' && role.kind === 'header' && role.branch?.run.id === kid.id;
         if (!(branchOfSetOn && compareNps(stated, expected) < 0)) {
           addError(
             issues,
@@ -44,7 +45,13 @@ export function resolveSizes(
         }
       }
       const nps = stated ?? expected;
-      if (!nps) addError(issues, 'size-unknown', `Run ${kid.id} has no size: state its NPS (or the design's main size)`, kid.id);
+      if (!nps)
+        addError(
+          issues,
+          'size-unknown',
+          `Run ${kid.id} has no size: state its NPS (or the design's main size)`,
+          kid.id,
+        );
       sizes.set(kid.id, nps);
     }
   }
@@ -83,7 +90,12 @@ function expectedSizes(
       if (role.branch.isParent) {
         // Entered from the branch: the run size is only known for an equal tee.
         if (branchNps && parentNps && branchNps !== parentNps) {
-          addError(issues, 'size-mismatch', `Tee ${node.id}: the run feeding its branch is NPS ${parentNps}, the tee's branch is NPS ${branchNps}`, node.id);
+          addError(
+            issues,
+            'size-mismatch',
+            `Tee ${node.id}: the run feeding its branch is NPS ${parentNps}, the tee's branch is NPS ${branchNps}`,
+            node.id,
+          );
         }
         return () => (branchNps && branchNps !== parentNps ? null : parentNps);
       }
@@ -94,7 +106,12 @@ function expectedSizes(
       if (role.kind !== 'header') return () => base;
       if (role.branch?.isParent) {
         if (parentNps && parentNps !== node.branchNps) {
-          addError(issues, 'size-mismatch', `${node.id}: the branch run is NPS ${parentNps}, the connection is NPS ${node.branchNps}`, node.id);
+          addError(
+            issues,
+            'size-mismatch',
+            `${node.id}: the branch run is NPS ${parentNps}, the connection is NPS ${node.branchNps}`,
+            node.id,
+          );
         }
         return () => kidsMain;
       }

@@ -42,6 +42,9 @@ export function applySpec(base: ResolvedSpec, overrides: SpecOverrides | undefin
  * The design-wide spec: built-in defaults, then the job's defaults, then the design's own
  * `spec`. Runs and nodes layer their own `spec` on top (see {@link applySpec}).
  */
-export function resolveSpec(design: { spec?: SpecOverrides | undefined }, jobDefaults?: SpecOverrides): ResolvedSpec {
+export function resolveSpec(
+  design: { spec?: SpecOverrides | undefined },
+  jobDefaults?: SpecOverrides,
+): ResolvedSpec {
   return applySpec(applySpec(BUILT_IN_SPEC, jobDefaults), design.spec);
 }

@@ -40,7 +40,11 @@ export function roundResult(result: SpoolResult): SpoolResult {
   };
   walk(result as unknown as Record<string, unknown>);
   if (bad > 0) {
-    result.issues.push({ severity: 'error', code: 'internal-error', message: `Engine produced ${bad} non-finite number(s)` });
+    result.issues.push({
+      severity: 'error',
+      code: 'internal-error',
+      message: `Engine produced ${bad} non-finite number(s)`,
+    });
     result.ok = false;
   }
   return result;

@@ -7,12 +7,22 @@ import type { RunLengthKind } from '../schemas/spool-design-run.schema';
 import type { RunResult } from './compute-result';
 
 /** Work-point distance from a cut length: cut + both take-offs + the run's root gaps, mm. */
-export function runLengthFromCut(cutMm: number, takeOffFromMm: number, takeOffToMm: number, gapsMm: number): number {
+export function runLengthFromCut(
+  cutMm: number,
+  takeOffFromMm: number,
+  takeOffToMm: number,
+  gapsMm: number,
+): number {
   return cutMm + takeOffFromMm + takeOffToMm + gapsMm;
 }
 
 /** Cut length from a work-point distance; null when the fittings leave no room (never negative), mm. */
-export function cutFromRunLength(workPointDistanceMm: number, takeOffFromMm: number, takeOffToMm: number, gapsMm: number): number | null {
+export function cutFromRunLength(
+  workPointDistanceMm: number,
+  takeOffFromMm: number,
+  takeOffToMm: number,
+  gapsMm: number,
+): number | null {
   const cut = workPointDistanceMm - takeOffFromMm - takeOffToMm - gapsMm;
   return cut >= 0 ? cut : null;
 }

@@ -11,7 +11,11 @@
  * `longPointMm` is the smallest t (the generator reaching deepest: the flank of a square
  * branch), `shortPointMm` the largest (the crotch). null when r > R.
  */
-export function setOnBranchReach(R: number, r: number, angleDeg: number): { longPointMm: number; shortPointMm: number } | null {
+export function setOnBranchReach(
+  R: number,
+  r: number,
+  angleDeg: number,
+): { longPointMm: number; shortPointMm: number } | null {
   if (!(r > 0) || !(R > 0) || r > R + 1e-9) return null;
   const beta = (angleDeg * Math.PI) / 180;
   const sb = Math.sin(beta);

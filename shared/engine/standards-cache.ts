@@ -3,7 +3,12 @@
  * keystroke). The tables are static and the lookups pure, so a result can be shared;
  * callers must treat returned values as read-only.
  */
-import { flangeDimensions, type FlangeClass, type FlangeDimensions, type FlangeType } from '../standards/flanges';
+import {
+  flangeDimensions,
+  type FlangeClass,
+  type FlangeDimensions,
+  type FlangeType,
+} from '../standards/flanges';
 import type { Lookup } from '../standards/lookup-result';
 import type { Nps } from '../standards/nps';
 import { pipeDimensions, type PipeDimensions, type Schedule } from '../standards/pipe-schedules';
@@ -20,7 +25,12 @@ export function cachedPipeDimensions(nps: Nps, schedule: Schedule): Lookup<PipeD
 }
 
 /** {@link flangeDimensions}, memoised on size, class, type and pipe wall (mm). */
-export function cachedFlangeDimensions(nps: Nps, cls: FlangeClass, type: FlangeType, pipeWallMm: number | undefined): Lookup<FlangeDimensions> {
+export function cachedFlangeDimensions(
+  nps: Nps,
+  cls: FlangeClass,
+  type: FlangeType,
+  pipeWallMm: number | undefined,
+): Lookup<FlangeDimensions> {
   const key = `${nps}|${cls}|${type}|${pipeWallMm ?? ''}`;
   let hit = flanges.get(key);
   if (!hit) {

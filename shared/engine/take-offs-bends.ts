@@ -26,7 +26,13 @@ export function cutElbowTakeOffMm(bendRadiusMm: number, angleDeg: number): numbe
 }
 
 /** Analyses an elbow between legs `a` and `b` meeting at `angleDeg` of deflection. */
-export function analyseElbow(ctx: NodeContext, node: ElbowNode, a: Connection, b: Connection, angleDeg: number): NodeAnalysis {
+export function analyseElbow(
+  ctx: NodeContext,
+  node: ElbowNode,
+  a: Connection,
+  b: Connection,
+  angleDeg: number,
+): NodeAnalysis {
   const pipe = ctx.pipe(a.run.id);
   const nps = pipe.nps;
   const radius = node.radius ?? 'long';
@@ -40,14 +46,32 @@ export function analyseElbow(ctx: NodeContext, node: ElbowNode, a: Connection, b
   const fail = (msg: string): NodeAnalysis => {
     addError(ctx.issues, 'angle-not-made', msg, node.id);
     return {
-      node, role: ctx.role, nps, ends: [buttEnd(a, nps, null, gA), buttEnd(b, nps, null, gB)],
-      description: `Elbow ${rr}, NPS ${nps ?? '?'}`, bom: null, source: null, internalWelds: [],
-      detail: { type: 'elbow', angleDeg, bendRadiusMm: null, construction: mitre ? 'mitre' : 'fitting', mitreWelds: null, mitreSegmentMm: null },
+      node,
+      role: ctx.role,
+      nps,
+      ends: [buttEnd(a, nps, null, gA), buttEnd(b, nps, null, gB)],
+      description: `Elbow ${rr}, NPS ${nps ?? '?'}`,
+      bom: null,
+      source: null,
+      internalWelds: [],
+      detail: {
+        type: 'elbow',
+        angleDeg,
+        bendRadiusMm: null,
+        construction: mitre ? 'mitre' : 'fitting',
+        mitreWelds: null,
+        mitreSegmentMm: null,
+      },
     };
   };
-  if (angleDeg < tol) return fail(`Elbow ${node.id}: its runs are in a straight line (${round(angleDeg)}° of bend); remove the elbow or turn a run`);
+  if (angleDeg < tol)
+    return fail(
+      `Elbow ${node.id}: its runs are in a straight line (${round(angleDeg)}° of bend); remove the elbow or turn a run`,
+    );
   if (angleDeg > MAX_BEND_DEG + tol) {
-    return fail(`Elbow ${node.id}: a ${round(angleDeg)}° bend is more than one elbow makes (90° at most); use two elbows or a return`);
+    return fail(
+      `Elbow ${node.id}: a ${round(angleDeg)}° bend is more than one elbow makes (90° at most); use two elbows or a return`,
+    );
   }
   if (!nps) return fail(`Elbow ${node.id}: size unknown`);
 
@@ -65,7 +89,12 @@ export function analyseElbow(ctx: NodeContext, node: ElbowNode, a: Connection, b
     const g = spec.rootGapMm;
     const segment = welds > 1 ? 2 * tHalf - g : null;
     if (segment !== null && segment <= 0) {
-      addError(ctx.issues, 'overlapping-fittings', `Mitred bend ${node.id}: ${welds} welds on radius ${round(R)} mm leave no room for the segments`, node.id);
+      addError(
+        ctx.issues,
+        'overlapping-fittings',
+        `Mitred bend ${node.id}: ${welds} welds on radius ${round(R)} mm leave no room for the segments`,
+        node.id,
+      );
     }
     const end = (c: Connection, gap: number) => ({
       ...buttEnd(c, nps, takeOff, gap / 2),
@@ -73,14 +102,35 @@ export function analyseElbow(ctx: NodeContext, node: ElbowNode, a: Connection, b
       mitreCutDeg: per / 2,
     });
     return {
-      node, role: ctx.role, nps,
+      node,
+      role: ctx.role,
+      nps,
       // A single mitre is one weld, listed once (at the first leg).
       ends: [end(a, g), welds === 1 ? { ...end(b, g), weldType: null, weldCount: 0 } : end(b, g)],
       description: `Mitred bend ${round(angleDeg)}°, ${welds + 1} pieces, R ${round(R)} mm, NPS ${nps} ${sched}`,
       bom: null,
-      source: base90.ok ? `radius from ${base90.value.source}` : 'radius 1.5 × NPS (long) / 1.0 × NPS (short), nominal',
-      internalWelds: welds > 1 ? [{ type: 'butt', nps, count: welds - 2 >= 0 ? welds - 2 : 0, joins: `mitre segments of ${node.id}` }] : [],
-      detail: { type: 'elbow', angleDeg, bendRadiusMm: R, construction: 'mitre', mitreWelds: welds, mitreSegmentMm: segment !== null && segment > 0 ? segment : null },
+      source: base90.ok
+        ? `radius from ${base90.value.source}`
+        : 'radius 1.5 × NPS (long) / 1.0 × NPS (short), nominal',
+      internalWelds:
+        welds > 1
+          ? [
+              {
+                type: 'butt',
+                nps,
+                count: welds - 2 >= 0 ? welds - 2 : 0,
+                joins: `mitre segments of ${node.id}`,
+              },
+            ]
+          : [],
+      detail: {
+        type: 'elbow',
+        angleDeg,
+        bendRadiusMm: R,
+        construction: 'mitre',
+        mitreWelds: welds,
+        mitreSegmentMm: segment !== null && segment > 0 ? segment : null,
+      },
     };
   }
 
@@ -107,16 +157,30 @@ export function analyseElbow(ctx: NodeContext, node: ElbowNode, a: Connection, b
       source = `${base90.value.source}; cut to ${round(angleDeg)}°, take-off R·tan(θ/2)`;
     }
     what = `Elbow ${rr} cut to ${round(angleDeg)}° (from 90°)`;
-    addWarning(ctx.issues, 'cut-elbow', `Elbow ${node.id} is cut from a 90° ${rr} elbow to ${round(angleDeg)}°: mark and trim it before fit-up`, node.id);
+    addWarning(
+      ctx.issues,
+      'cut-elbow',
+      `Elbow ${node.id} is cut from a 90° ${rr} elbow to ${round(angleDeg)}°: mark and trim it before fit-up`,
+      node.id,
+    );
   }
   return {
-    node, role: ctx.role, nps,
+    node,
+    role: ctx.role,
+    nps,
     ends: [buttEnd(a, nps, takeOff, gA), buttEnd(b, nps, takeOff, gB)],
     description: `${what}, NPS ${nps} ${sched}, ASME B16.9`,
     bom: { category: 'fitting', description: `${what} ${sched}, ${spec.fittingMaterial}, ASME B16.9`, nps },
     source,
     internalWelds: [],
-    detail: { type: 'elbow', angleDeg, bendRadiusMm: R, construction: 'fitting', mitreWelds: null, mitreSegmentMm: null },
+    detail: {
+      type: 'elbow',
+      angleDeg,
+      bendRadiusMm: R,
+      construction: 'fitting',
+      mitreWelds: null,
+      mitreSegmentMm: null,
+    },
   };
 }
 
@@ -124,7 +188,12 @@ export function analyseElbow(ctx: NodeContext, node: ElbowNode, a: Connection, b
  * Analyses a 180° return. `a` is the incoming leg. Both faces lie in the plane through the
  * centre of the bend, so take-off 0 from the ports, which sit ±O/2 along the offset.
  */
-export function analyseReturn(ctx: NodeContext, node: ReturnNode, a: Connection, b: Connection): NodeAnalysis {
+export function analyseReturn(
+  ctx: NodeContext,
+  node: ReturnNode,
+  a: Connection,
+  b: Connection,
+): NodeAnalysis {
   const pipe = ctx.pipe(a.run.id);
   const nps = pipe.nps;
   const radius = node.radius ?? 'long';
@@ -133,7 +202,12 @@ export function analyseReturn(ctx: NodeContext, node: ReturnNode, a: Connection,
   const sched = scheduleLabel(pipe.schedule);
   const u = normalise(rejectFrom(node.offsetDirection, a.outward));
   if (!u) {
-    addError(ctx.issues, 'direction-mismatch', `Return ${node.id}: its offset direction must not be along the legs`, node.id);
+    addError(
+      ctx.issues,
+      'direction-mismatch',
+      `Return ${node.id}: its offset direction must not be along the legs`,
+      node.id,
+    );
   }
   const look = nps ? elbowDimensions(nps, radius === 'long' ? 'LR180' : 'SR180') : null;
   if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
@@ -143,10 +217,18 @@ export function analyseReturn(ctx: NodeContext, node: ReturnNode, a: Connection,
   const endA = { ...buttEnd(a, nps, takeOff, ctx.specAt(a.run.id).rootGapMm), portOffset: scale(half, -1) };
   const endB = { ...buttEnd(b, nps, takeOff, ctx.specAt(b.run.id).rootGapMm), portOffset: half };
   return {
-    node, role: ctx.role, nps,
+    node,
+    role: ctx.role,
+    nps,
     ends: [endA, endB],
     description: `Return 180° ${rr}, NPS ${nps ?? '?'} ${sched}, ASME B16.9`,
-    bom: nps ? { category: 'fitting', description: `Return 180° ${rr} ${sched}, ${spec.fittingMaterial}, ASME B16.9`, nps } : null,
+    bom: nps
+      ? {
+          category: 'fitting',
+          description: `Return 180° ${rr} ${sched}, ${spec.fittingMaterial}, ASME B16.9`,
+          nps,
+        }
+      : null,
     source: look?.ok ? look.value.source : null,
     internalWelds: [],
     detail: {

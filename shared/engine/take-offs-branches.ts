@@ -33,7 +33,14 @@ function odOf(nps: Nps | null): number | null {
 }
 
 /** Analyses a set-on branch: header legs `a`, `b`, branch leg `branch` at `angleDeg`. */
-export function analyseSetOn(ctx: NodeContext, node: SetOnNode, a: Connection, b: Connection, branch: Connection, angleDeg: number): NodeAnalysis {
+export function analyseSetOn(
+  ctx: NodeContext,
+  node: SetOnNode,
+  a: Connection,
+  b: Connection,
+  branch: Connection,
+  angleDeg: number,
+): NodeAnalysis {
   const header = ctx.pipe(a.run.id);
   const br = ctx.pipe(branch.run.id);
   const h = headerAxis(a);
@@ -41,9 +48,19 @@ export function analyseSetOn(ctx: NodeContext, node: SetOnNode, a: Connection, b
   const branchOd = br.dims?.odMm ?? odOf(br.nps);
   let reach: ReturnType<typeof setOnBranchReach> = null;
   if (header.nps && br.nps && compareNps(br.nps, header.nps) > 0) {
-    addError(ctx.issues, 'size-mismatch', `Set-on branch ${node.id}: the branch (NPS ${br.nps}) is larger than its header (NPS ${header.nps})`, node.id);
+    addError(
+      ctx.issues,
+      'size-mismatch',
+      `Set-on branch ${node.id}: the branch (NPS ${br.nps}) is larger than its header (NPS ${header.nps})`,
+      node.id,
+    );
   } else if (angleDeg < MIN_SET_ON_ANGLE_DEG) {
-    addError(ctx.issues, 'angle-not-made', `Set-on branch ${node.id} meets its header at ${round(angleDeg)}°; below ${MIN_SET_ON_ANGLE_DEG}° the saddle cannot be fitted`, node.id);
+    addError(
+      ctx.issues,
+      'angle-not-made',
+      `Set-on branch ${node.id} meets its header at ${round(angleDeg)}°; below ${MIN_SET_ON_ANGLE_DEG}° the saddle cannot be fitted`,
+      node.id,
+    );
   } else if (headerOd && branchOd) {
     reach = setOnBranchReach(headerOd / 2, branchOd / 2, angleDeg);
   }
@@ -57,13 +74,23 @@ export function analyseSetOn(ctx: NodeContext, node: SetOnNode, a: Connection, b
   const orientationDeg = orientationOfBranch(h, branch.outward);
   const square = Math.abs(angleDeg - 90) <= ctx.angleToleranceDeg;
   return {
-    node, role: ctx.role, nps: header.nps,
+    node,
+    role: ctx.role,
+    nps: header.nps,
     ends: [throughEnd(a, header.nps), throughEnd(b, ctx.pipe(b.run.id).nps), brEnd],
     description: `Set-on branch NPS ${br.nps ?? '?'} on NPS ${header.nps ?? '?'}${square ? '' : ` at ${round(angleDeg)}°`}`,
     bom: null,
     source: 'saddle reach from the intersection of two cylinders (outside diameters, ASME B36.10M)',
     internalWelds: [],
-    detail: { type: 'branch', branchNps: br.nps, angleDeg, orientationDeg, branchAxis: branch.outward, headerAxis: h, heightMm: null },
+    detail: {
+      type: 'branch',
+      branchNps: br.nps,
+      angleDeg,
+      orientationDeg,
+      branchAxis: branch.outward,
+      headerAxis: h,
+      heightMm: null,
+    },
   };
 }
 
@@ -83,14 +110,24 @@ export function analyseSmallBore(
   const R = headerOd !== null ? headerOd / 2 : null;
   const what = node.kind === 'half-coupling' ? 'Half coupling' : 'Branch outlet';
   if (header.nps && compareNps(node.branchNps, header.nps) >= 0) {
-    addError(ctx.issues, 'size-mismatch', `${what} ${node.id}: NPS ${node.branchNps} on an NPS ${header.nps} header; small-bore connections must be smaller than the header`, node.id);
+    addError(
+      ctx.issues,
+      'size-mismatch',
+      `${what} ${node.id}: NPS ${node.branchNps} on an NPS ${header.nps} header; small-bore connections must be smaller than the header`,
+      node.id,
+    );
   }
 
   let axis: Vec3 | null = null;
   let orientationDeg: number | null = null;
   if (branch) {
     if (angleDeg !== null && Math.abs(angleDeg - 90) > tol) {
-      addError(ctx.issues, 'angle-not-made', `${what} ${node.id}: its branch meets the header at ${round(angleDeg)}°; it is made square (90°) only`, node.id);
+      addError(
+        ctx.issues,
+        'angle-not-made',
+        `${what} ${node.id}: its branch meets the header at ${round(angleDeg)}°; it is made square (90°) only`,
+        node.id,
+      );
     }
     axis = branch.outward;
     orientationDeg = orientationOfBranch(h, branch.outward);
@@ -109,7 +146,12 @@ export function analyseSmallBore(
     orientationDeg = ((node.orientationDeg % 360) + 360) % 360;
     axis = branchDirectionFromOrientation(h, orientationDeg);
   } else {
-    addError(ctx.issues, 'orientation-missing', `${what} ${node.id} has no branch run and no orientationDeg: state where around the header it sits`, node.id);
+    addError(
+      ctx.issues,
+      'orientation-missing',
+      `${what} ${node.id} has no branch run and no orientationDeg: state where around the header it sits`,
+      node.id,
+    );
   }
 
   const spec = ctx.specAt(a.run.id);
@@ -122,11 +164,24 @@ export function analyseSmallBore(
       heightMm = look.value.lengthMm ?? null;
       source = look.value.source;
     } else if (branch) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
-    else addWarning(ctx.issues, 'weight-incomplete', `${what} ${node.id}: ${look.missing}; drawn without its length`, node.id);
+    else
+      addWarning(
+        ctx.issues,
+        'weight-incomplete',
+        `${what} ${node.id}: ${look.missing}; drawn without its length`,
+        node.id,
+      );
     if (branch) {
       const gap = ctx.specAt(branch.run.id).socketGapMm;
-      const take = look.ok && heightMm !== null && R !== null ? R + heightMm - look.value.centreToBottomMm + gap : null;
-      if (look.ok && heightMm === null) addError(ctx.issues, 'standard-data-missing', `No half-coupling length for NPS ${node.branchNps}`, node.id);
+      const take =
+        look.ok && heightMm !== null && R !== null ? R + heightMm - look.value.centreToBottomMm + gap : null;
+      if (look.ok && heightMm === null)
+        addError(
+          ctx.issues,
+          'standard-data-missing',
+          `No half-coupling length for NPS ${node.branchNps}`,
+          node.id,
+        );
       brEnd = socketEnd(branch, ctx.pipe(branch.run.id).nps, take);
     }
   } else {
@@ -135,12 +190,21 @@ export function analyseSmallBore(
     if (branch) {
       const p = ctx.pipe(branch.run.id);
       if (node.outletEnd === 'butt') {
-        brEnd = buttEnd(branch, p.nps, R !== null ? R + node.heightMm : null, ctx.specAt(branch.run.id).rootGapMm);
+        brEnd = buttEnd(
+          branch,
+          p.nps,
+          R !== null ? R + node.heightMm : null,
+          ctx.specAt(branch.run.id).rootGapMm,
+        );
       } else {
         const sock = socketWeldDimensions(node.branchNps, 'coupling');
         if (!sock.ok) addError(ctx.issues, 'standard-data-missing', sock.missing, node.id);
         const gap = ctx.specAt(branch.run.id).socketGapMm;
-        brEnd = socketEnd(branch, p.nps, sock.ok && R !== null ? R + node.heightMm - sock.value.socketDepthMm + gap : null);
+        brEnd = socketEnd(
+          branch,
+          p.nps,
+          sock.ok && R !== null ? R + node.heightMm - sock.value.socketDepthMm + gap : null,
+        );
       }
     }
   }
@@ -156,12 +220,29 @@ export function analyseSmallBore(
   const ends = [throughEnd(a, header.nps), throughEnd(b, ctx.pipe(b.run.id).nps)];
   if (brEnd) ends.push(brEnd);
   return {
-    node, role: ctx.role, nps: header.nps, ends,
+    node,
+    role: ctx.role,
+    nps: header.nps,
+    ends,
     description: desc,
-    bom: { category: node.kind === 'half-coupling' ? 'socket-fitting' : 'branch-outlet', description: bomDesc, nps: node.branchNps },
+    bom: {
+      category: node.kind === 'half-coupling' ? 'socket-fitting' : 'branch-outlet',
+      description: bomDesc,
+      nps: node.branchNps,
+    },
     source,
-    internalWelds: [{ type: 'branch', nps: node.branchNps, count: 1, joins: `${what.toLowerCase()} ${node.id} to header` }],
-    detail: { type: 'branch', branchNps: node.branchNps, angleDeg: branch ? angleDeg : 90, orientationDeg, branchAxis: axis, headerAxis: h, heightMm },
+    internalWelds: [
+      { type: 'branch', nps: node.branchNps, count: 1, joins: `${what.toLowerCase()} ${node.id} to header` },
+    ],
+    detail: {
+      type: 'branch',
+      branchNps: node.branchNps,
+      angleDeg: branch ? angleDeg : 90,
+      orientationDeg,
+      branchAxis: axis,
+      headerAxis: h,
+      heightMm,
+    },
   };
 }
 

@@ -40,7 +40,12 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
       }
       const e = wn
         ? buttEnd(conn, nps, takeOff, spec.rootGapMm, 'flange')
-        : { ...socketEnd(conn, nps, takeOff), joint: 'slip-on' as const, weldType: 'slip-on-fillet' as const, weldCount: 2 };
+        : {
+            ...socketEnd(conn, nps, takeOff),
+            joint: 'slip-on' as const,
+            weldType: 'slip-on-fillet' as const,
+            weldCount: 2,
+          };
       const kind = wn ? 'weld neck' : 'slip-on';
       const blind = end.blind === true;
       const description = `Flange ${kind} RF Class ${cls}, NPS ${nps ?? '?'}${wn ? ` ${sched} bore` : ''}, ASME B16.5${blind ? ', with blind flange' : ''}`;
@@ -48,7 +53,13 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
         ...base,
         ends: [e],
         description,
-        bom: nps ? { category: 'flange', description: `Flange ${kind} RF Class ${cls}${wn ? ` ${sched} bore` : ''}, ${spec.flangeMaterial}, ASME B16.5`, nps } : null,
+        bom: nps
+          ? {
+              category: 'flange',
+              description: `Flange ${kind} RF Class ${cls}${wn ? ` ${sched} bore` : ''}, ${spec.flangeMaterial}, ASME B16.5`,
+              nps,
+            }
+          : null,
         source: d?.source ?? null,
         detail: {
           type: 'flange',
@@ -75,7 +86,9 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
         ...base,
         ends: [buttEnd(conn, nps, len, spec.rootGapMm)],
         description: `Cap, NPS ${nps ?? '?'} ${sched}, ASME B16.9`,
-        bom: nps ? { category: 'fitting', description: `Cap ${sched}, ${spec.fittingMaterial}, ASME B16.9`, nps } : null,
+        bom: nps
+          ? { category: 'fitting', description: `Cap ${sched}, ${spec.fittingMaterial}, ASME B16.9`, nps }
+          : null,
         source: look?.ok ? look.value.source : null,
         detail: { type: 'cap', lengthMm: len, socket: false },
       };
@@ -87,12 +100,19 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
       // Work point at the cap's tip: the pipe end sits (length − socket depth) + gap from it.
       const len = d?.lengthMm ?? null;
       const takeOff = d && len !== null ? len - d.socketDepthMm + spec.socketGapMm : null;
-      if (d && len === null) addError(ctx.issues, 'standard-data-missing', `No socket-weld cap length for NPS ${nps}`, node.id);
+      if (d && len === null)
+        addError(ctx.issues, 'standard-data-missing', `No socket-weld cap length for NPS ${nps}`, node.id);
       return {
         ...base,
         ends: [socketEnd(conn, nps, takeOff)],
         description: `Socket-weld cap Class 3000, NPS ${nps ?? '?'}, ASME B16.11`,
-        bom: nps ? { category: 'socket-fitting', description: `Socket-weld cap Class 3000, ${spec.flangeMaterial}, ASME B16.11`, nps } : null,
+        bom: nps
+          ? {
+              category: 'socket-fitting',
+              description: `Socket-weld cap Class 3000, ${spec.flangeMaterial}, ASME B16.11`,
+              nps,
+            }
+          : null,
         source: d?.source ?? null,
         detail: { type: 'cap', lengthMm: len, socket: true },
       };

@@ -16,16 +16,37 @@ import { normalise, rejectFrom, scale, UP, ZERO } from './vec3-math';
 type ReducerNode = Extract<SpoolNode, { kind: 'reducer' }>;
 
 /** Analyses a reducer between legs `a` and `b` (collinear). */
-export function analyseReducer(ctx: NodeContext, node: ReducerNode, a: Connection, b: Connection): NodeAnalysis {
+export function analyseReducer(
+  ctx: NodeContext,
+  node: ReducerNode,
+  a: Connection,
+  b: Connection,
+): NodeAnalysis {
   const pa = ctx.pipe(a.run.id);
   const pb = ctx.pipe(b.run.id);
   const spec = ctx.specAt(a.run.id);
   const eccentric = node.type === 'eccentric';
   const fallback: NodeAnalysis = {
-    node, role: ctx.role, nps: pa.nps,
-    ends: [buttEnd(a, pa.nps, null, spec.rootGapMm), buttEnd(b, pb.nps, null, ctx.specAt(b.run.id).rootGapMm)],
-    description: `Reducer ${eccentric ? 'eccentric' : 'concentric'}`, bom: null, source: null, internalWelds: [],
-    detail: { type: 'reducer', largeNps: null, smallNps: null, lengthMm: null, eccentric, largeEnd: null, smallEnd: null },
+    node,
+    role: ctx.role,
+    nps: pa.nps,
+    ends: [
+      buttEnd(a, pa.nps, null, spec.rootGapMm),
+      buttEnd(b, pb.nps, null, ctx.specAt(b.run.id).rootGapMm),
+    ],
+    description: `Reducer ${eccentric ? 'eccentric' : 'concentric'}`,
+    bom: null,
+    source: null,
+    internalWelds: [],
+    detail: {
+      type: 'reducer',
+      largeNps: null,
+      smallNps: null,
+      lengthMm: null,
+      eccentric,
+      largeEnd: null,
+      smallEnd: null,
+    },
   };
   if (!pa.nps || !pb.nps) return fallback;
   const cmp = compareNps(pa.nps, pb.nps);
@@ -51,7 +72,12 @@ export function analyseReducer(ctx: NodeContext, node: ReducerNode, a: Connectio
     const odL = cachedPipeDimensions(largeNps, ctx.pipe(large.run.id).schedule);
     const odS = cachedPipeDimensions(smallNps, ctx.pipe(small.run.id).schedule);
     if (!f) {
-      addError(ctx.issues, 'direction-mismatch', `Eccentric reducer ${node.id}: its flat side cannot be "${flat}" on a run along that direction`, node.id);
+      addError(
+        ctx.issues,
+        'direction-mismatch',
+        `Eccentric reducer ${node.id}: its flat side cannot be "${flat}" on a run along that direction`,
+        node.id,
+      );
     } else if (odL.ok && odS.ok) {
       // The flat side stays flush, so the small end's axis moves away from it.
       smallOffset = scale(f, -(odL.value.odMm - odS.value.odMm) / 2);
@@ -60,12 +86,21 @@ export function analyseReducer(ctx: NodeContext, node: ReducerNode, a: Connectio
   const sched = scheduleLabel(pa.schedule);
   const kind = eccentric ? `eccentric, flat ${flat}` : 'concentric';
   const largeEnd = buttEnd(large, largeNps, half, ctx.specAt(large.run.id).rootGapMm);
-  const smallEnd = { ...buttEnd(small, smallNps, half, ctx.specAt(small.run.id).rootGapMm), portOffset: smallOffset };
+  const smallEnd = {
+    ...buttEnd(small, smallNps, half, ctx.specAt(small.run.id).rootGapMm),
+    portOffset: smallOffset,
+  };
   return {
-    node, role: ctx.role, nps: largeNps,
+    node,
+    role: ctx.role,
+    nps: largeNps,
     ends: large === a ? [largeEnd, smallEnd] : [smallEnd, largeEnd],
     description: `Reducer ${kind}, NPS ${largeNps} × ${smallNps} ${sched}, ASME B16.9`,
-    bom: { category: 'fitting', description: `Reducer ${eccentric ? "eccentric" : "concentric"} NPS ${largeNps} × ${smallNps} ${sched}, ${spec.fittingMaterial}, ASME B16.9`, nps: largeNps },
+    bom: {
+      category: 'fitting',
+      description: `Reducer ${eccentric ? 'eccentric' : 'concentric'} NPS ${largeNps} × ${smallNps} ${sched}, ${spec.fittingMaterial}, ASME B16.9`,
+      nps: largeNps,
+    },
     source: look.ok ? look.value.source : null,
     internalWelds: [],
     detail: { type: 'reducer', largeNps, smallNps, lengthMm: H, eccentric, largeEnd: null, smallEnd: null },

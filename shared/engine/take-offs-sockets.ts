@@ -22,7 +22,11 @@ const NAMES: Record<'elbow90' | 'elbow45' | 'tee' | 'coupling', string> = {
 /** Analyses a socket-weld fitting from its role (bend 90/45, inline coupling, tee). */
 export function analyseSocketFitting(ctx: NodeContext, node: SocketNode, role: NodeRole): NodeAnalysis {
   const conns: Connection[] =
-    role.kind === 'bend' || role.kind === 'inline' ? [role.a, role.b] : role.kind === 'tee' ? [role.runA, role.runB, role.branch] : [];
+    role.kind === 'bend' || role.kind === 'inline'
+      ? [role.a, role.b]
+      : role.kind === 'tee'
+        ? [role.runA, role.runB, role.branch]
+        : [];
   const tol = ctx.angleToleranceDeg;
   let fitting: 'elbow90' | 'elbow45' | 'tee' | 'coupling' | null = null;
   if (role.kind === 'inline') fitting = 'coupling';
@@ -44,19 +48,36 @@ export function analyseSocketFitting(ctx: NodeContext, node: SocketNode, role: N
   for (const c of conns) {
     const p = ctx.pipe(c.run.id);
     if (nps && p.nps && p.nps !== nps) {
-      addError(ctx.issues, 'size-mismatch', `Socket-weld fitting ${node.id}: run ${c.run.id} is NPS ${p.nps}, the fitting is NPS ${nps}`, node.id);
+      addError(
+        ctx.issues,
+        'size-mismatch',
+        `Socket-weld fitting ${node.id}: run ${c.run.id} is NPS ${p.nps}, the fitting is NPS ${nps}`,
+        node.id,
+      );
     }
   }
   const look = nps && fitting ? socketWeldDimensions(nps, fitting as SocketFittingKind) : null;
   if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
   const A = look?.ok ? look.value.centreToBottomMm : null;
   const spec = ctx.specAt(conns[0]?.run.id ?? null);
-  const ends = conns.map((c) => socketEnd(c, ctx.pipe(c.run.id).nps, A !== null ? A + ctx.specAt(c.run.id).socketGapMm : null));
+  const ends = conns.map((c) =>
+    socketEnd(c, ctx.pipe(c.run.id).nps, A !== null ? A + ctx.specAt(c.run.id).socketGapMm : null),
+  );
   const name = fitting ? NAMES[fitting] : 'Socket-weld fitting';
   return {
-    node, role, nps, ends,
+    node,
+    role,
+    nps,
+    ends,
     description: `${name} Class 3000, NPS ${nps ?? '?'}, ASME B16.11`,
-    bom: nps && fitting ? { category: 'socket-fitting', description: `${name} Class 3000, ${spec.flangeMaterial}, ASME B16.11`, nps } : null,
+    bom:
+      nps && fitting
+        ? {
+            category: 'socket-fitting',
+            description: `${name} Class 3000, ${spec.flangeMaterial}, ASME B16.11`,
+            nps,
+          }
+        : null,
     source: look?.ok ? look.value.source : null,
     internalWelds: [],
     detail: { type: 'socket-fitting', fitting },

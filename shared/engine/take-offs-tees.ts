@@ -13,7 +13,13 @@ import type { NodeAnalysis, NodeContext } from './node-analysis';
 type TeeNode = Extract<SpoolNode, { kind: 'tee' }>;
 
 /** Analyses a butt-weld tee with run legs `runA`, `runB` and `branch`. */
-export function analyseTee(ctx: NodeContext, node: TeeNode, runA: Connection, runB: Connection, branch: Connection): NodeAnalysis {
+export function analyseTee(
+  ctx: NodeContext,
+  node: TeeNode,
+  runA: Connection,
+  runB: Connection,
+  branch: Connection,
+): NodeAnalysis {
   const pa = ctx.pipe(runA.run.id);
   const pb = ctx.pipe(runB.run.id);
   const pBr = ctx.pipe(branch.run.id);
@@ -21,7 +27,12 @@ export function analyseTee(ctx: NodeContext, node: TeeNode, runA: Connection, ru
   const branchNps = node.branchNps ?? pBr.nps ?? runNps;
   const spec = ctx.specAt(runA.run.id);
   if (pa.nps && pb.nps && pa.nps !== pb.nps) {
-    addError(ctx.issues, 'size-mismatch', `Tee ${node.id}: its run ends are NPS ${pa.nps} and NPS ${pb.nps}; a tee's run is one size`, node.id);
+    addError(
+      ctx.issues,
+      'size-mismatch',
+      `Tee ${node.id}: its run ends are NPS ${pa.nps} and NPS ${pb.nps}; a tee's run is one size`,
+      node.id,
+    );
   }
   const look = runNps && branchNps ? teeDimensions(runNps, branchNps) : null;
   if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
@@ -31,14 +42,22 @@ export function analyseTee(ctx: NodeContext, node: TeeNode, runA: Connection, ru
   const size = runNps === branchNps ? `NPS ${runNps ?? '?'}` : `NPS ${runNps} × ${branchNps}`;
   const kind = runNps === branchNps ? 'equal' : 'reducing';
   return {
-    node, role: ctx.role, nps: runNps,
+    node,
+    role: ctx.role,
+    nps: runNps,
     ends: [
       buttEnd(runA, pa.nps, C, ctx.specAt(runA.run.id).rootGapMm),
       buttEnd(runB, pb.nps, C, ctx.specAt(runB.run.id).rootGapMm),
       buttEnd(branch, pBr.nps, M, ctx.specAt(branch.run.id).rootGapMm),
     ],
     description: `Tee ${kind}, ${size} ${sched}, ASME B16.9`,
-    bom: runNps ? { category: 'fitting', description: `Tee ${kind} ${size} ${sched}, ${spec.fittingMaterial}, ASME B16.9`, nps: runNps } : null,
+    bom: runNps
+      ? {
+          category: 'fitting',
+          description: `Tee ${kind} ${size} ${sched}, ${spec.fittingMaterial}, ASME B16.9`,
+          nps: runNps,
+        }
+      : null,
     source: look?.ok ? look.value.source : null,
     internalWelds: [],
     detail: { type: 'tee', branchNps, runCentreToEndMm: C, branchCentreToEndMm: M },

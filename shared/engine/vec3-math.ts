@@ -93,7 +93,11 @@ export function transportAcross(v: Vec3, from: Vec3, to: Vec3, fallbackAxis: Vec
 /** Rounds each coordinate to `decimals` places (for stable output). */
 export function roundVec(a: Vec3, decimals = 3): Vec3 {
   const f = 10 ** decimals;
-  return { x: Math.round(a.x * f) / f || 0, y: Math.round(a.y * f) / f || 0, z: Math.round(a.z * f) / f || 0 };
+  return {
+    x: Math.round(a.x * f) / f || 0,
+    y: Math.round(a.y * f) / f || 0,
+    z: Math.round(a.z * f) / f || 0,
+  };
 }
 /** True when every coordinate is a finite number. */
 export function isFiniteVec(a: Vec3): boolean {

@@ -28,7 +28,10 @@ export function pieceMass(piece: PipePiece, pipe: RunPipe | null): Mass | null {
   const dims = pipe?.dims ?? (piece.nps ? okOrNull(cachedPipeDimensions(piece.nps, piece.schedule)) : null);
   if (!dims || piece.cutLengthMm === null) return null;
   const L = piece.cutLengthMm;
-  return { steel: (dims.massKgPerM * L) / 1000, water: tubeVolumes(dims.odMm, dims.idMm, L).water * WATER_KG_PER_MM3 };
+  return {
+    steel: (dims.massKgPerM * L) / 1000,
+    water: tubeVolumes(dims.odMm, dims.idMm, L).water * WATER_KG_PER_MM3,
+  };
 }
 
 function okOrNull<T>(l: { ok: true; value: T } | { ok: false }): T | null {
@@ -36,12 +39,19 @@ function okOrNull<T>(l: { ok: true; value: T } | { ok: false }): T | null {
 }
 
 /** Mass and centroid of one component, or null when it cannot be weighed. */
-export function componentMass(a: NodeAnalysis, wp: Vec3, pipes: Map<string, RunPipe>): { mass: Mass; centroid: Vec3 } | null {
+export function componentMass(
+  a: NodeAnalysis,
+  wp: Vec3,
+  pipes: Map<string, RunPipe>,
+): { mass: Mass; centroid: Vec3 } | null {
   const end0 = a.ends[0];
   if (!end0) return null;
   const p0 = pipes.get(end0.conn.run.id);
   const dims = p0?.dims;
-  const volume = (v: Mass): Mass => ({ steel: v.steel * STEEL_KG_PER_MM3, water: v.water * WATER_KG_PER_MM3 });
+  const volume = (v: Mass): Mass => ({
+    steel: v.steel * STEEL_KG_PER_MM3,
+    water: v.water * WATER_KG_PER_MM3,
+  });
   const d = a.detail;
   switch (d.type) {
     case 'elbow': {
@@ -57,7 +67,10 @@ export function componentMass(a: NodeAnalysis, wp: Vec3, pipes: Map<string, RunP
     case 'return': {
       if (!dims || d.bendRadiusMm === null) return null;
       const R = d.bendRadiusMm;
-      return { mass: volume(bendVolumes(dims.odMm, dims.idMm, R, Math.PI)), centroid: addScaled(wp, end0.conn.outward, (-2 * R) / Math.PI) };
+      return {
+        mass: volume(bendVolumes(dims.odMm, dims.idMm, R, Math.PI)),
+        centroid: addScaled(wp, end0.conn.outward, (-2 * R) / Math.PI),
+      };
     }
     case 'tee': {
       const br = a.ends[2];
@@ -70,7 +83,8 @@ export function componentMass(a: NodeAnalysis, wp: Vec3, pipes: Map<string, RunP
       const mBr = volume(branch);
       const total = mRun.steel + mBr.steel;
       const brCentre = addScaled(wp, br.conn.outward, dims.odMm / 2 + stub / 2);
-      const centroid = total > 0 ? add(scale(wp, mRun.steel / total), scale(brCentre, mBr.steel / total)) : wp;
+      const centroid =
+        total > 0 ? add(scale(wp, mRun.steel / total), scale(brCentre, mBr.steel / total)) : wp;
       return { mass: { steel: total, water: mRun.water + mBr.water }, centroid };
     }
     case 'reducer': {
@@ -82,7 +96,15 @@ export function componentMass(a: NodeAnalysis, wp: Vec3, pipes: Map<string, RunP
       return { mass: volume(frustumVolumes(L.odMm, L.idMm, S.odMm, S.idMm, d.lengthMm)), centroid: wp };
     }
     case 'flange': {
-      if (!dims || d.odMm === null || d.thicknessMm === null || d.hubLengthMm === null || d.boltCount === null || d.boltHoleDiaMm === null) return null;
+      if (
+        !dims ||
+        d.odMm === null ||
+        d.thicknessMm === null ||
+        d.hubLengthMm === null ||
+        d.boltCount === null ||
+        d.boltHoleDiaMm === null
+      )
+        return null;
       const wn = d.flangeType === 'weld-neck-flange';
       const shape = {
         odMm: d.odMm,
@@ -101,16 +123,30 @@ export function componentMass(a: NodeAnalysis, wp: Vec3, pipes: Map<string, RunP
       let centroid = addScaled(wp, into, (d.hubLengthMm + (d.raisedFaceMm ?? 0)) / 3);
       let steel = f.steel;
       if (d.blind) {
-        const b = volume(flangeVolumes({ ...shape, hubLengthMm: d.thicknessMm, hubDiaAtBaseMm: null, boreMm: 0, weldEndOdMm: null }));
+        const b = volume(
+          flangeVolumes({
+            ...shape,
+            hubLengthMm: d.thicknessMm,
+            hubDiaAtBaseMm: null,
+            boreMm: 0,
+            weldEndOdMm: null,
+          }),
+        );
         const bc = addScaled(wp, into, -d.thicknessMm / 2);
-        centroid = add(scale(centroid, f.steel / (f.steel + b.steel)), scale(bc, b.steel / (f.steel + b.steel)));
+        centroid = add(
+          scale(centroid, f.steel / (f.steel + b.steel)),
+          scale(bc, b.steel / (f.steel + b.steel)),
+        );
         steel += b.steel;
       }
       return { mass: { steel, water: f.water }, centroid };
     }
     case 'cap': {
       if (!dims || d.lengthMm === null || d.socket) return null;
-      return { mass: volume(capVolumes(dims.odMm, d.lengthMm, dims.wallMm)), centroid: addScaled(wp, end0.conn.outward, d.lengthMm / 2) };
+      return {
+        mass: volume(capVolumes(dims.odMm, d.lengthMm, dims.wallMm)),
+        centroid: addScaled(wp, end0.conn.outward, d.lengthMm / 2),
+      };
     }
     default:
       return null;
@@ -136,23 +172,44 @@ export function computeWeights(
     }
     piece.massKg = round(m.steel, 2);
     const centroid = scale(add(piece.start, piece.end), 0.5);
-    items.push({ ref: piece.mark, description: `Pipe ${piece.mark} NPS ${piece.nps}`, massKg: m.steel, waterKg: m.water, centroid });
+    items.push({
+      ref: piece.mark,
+      description: `Pipe ${piece.mark} NPS ${piece.nps}`,
+      massKg: m.steel,
+      waterKg: m.water,
+      centroid,
+    });
   }
   for (const nodeId of graph.nodeOrder) {
     const a = analyses.get(nodeId);
     const wp = positions.get(nodeId);
     if (!a || !wp) continue;
     const t = a.detail.type;
-    if (t === 'open-end' || (t === 'branch' && a.node.kind === 'set-on-branch') || (t === 'elbow' && a.detail.type === 'elbow' && a.detail.construction === 'mitre')) continue;
+    if (
+      t === 'open-end' ||
+      (t === 'branch' && a.node.kind === 'set-on-branch') ||
+      (t === 'elbow' && a.detail.type === 'elbow' && a.detail.construction === 'mitre')
+    )
+      continue;
     const m = componentMass(a, wp, pipes);
     if (!m) {
       notIncluded.push(`${a.description} (${nodeId})`);
       continue;
     }
-    items.push({ ref: nodeId, description: a.description, massKg: m.mass.steel, waterKg: m.mass.water, centroid: m.centroid });
+    items.push({
+      ref: nodeId,
+      description: a.description,
+      massKg: m.mass.steel,
+      waterKg: m.mass.water,
+      centroid: m.centroid,
+    });
   }
   if (notIncluded.length > 0) {
-    addWarning(issues, 'weight-incomplete', `Not included in the weight (no dimensions to weigh by): ${notIncluded.join('; ')}`);
+    addWarning(
+      issues,
+      'weight-incomplete',
+      `Not included in the weight (no dimensions to weigh by): ${notIncluded.join('; ')}`,
+    );
   }
   const emptyKg = items.reduce((s, i) => s + i.massKg, 0);
   const waterKg = items.reduce((s, i) => s + i.waterKg, 0);

@@ -44,7 +44,16 @@ export function buildWeldList(
     const at = positions.get(nodeId);
     if (!a || !at) return;
     for (const w of a.internalWelds) {
-      for (let i = 0; i < w.count; i++) push({ type: w.type, nps: w.nps, location: 'shop', position: at, nodeId, runId: null, joins: w.joins });
+      for (let i = 0; i < w.count; i++)
+        push({
+          type: w.type,
+          nps: w.nps,
+          location: 'shop',
+          position: at,
+          nodeId,
+          runId: null,
+          joins: w.joins,
+        });
     }
   };
   const atEnd = (p: PlacedRun, atFrom: boolean) => {
@@ -60,13 +69,30 @@ export function buildWeldList(
     const position = addScaled(port, along, (end.takeOffMm ?? 0) + gap / 2);
     const piece = pieceMarks.get(p.run.id) ?? 'pipe';
     if (a.detail.type === 'open-end') {
-      if (a.detail.fieldWeld) push({ type: 'butt', nps, location: 'field', position, nodeId, runId: p.run.id, joins: `${piece} to the line (field)` });
+      if (a.detail.fieldWeld)
+        push({
+          type: 'butt',
+          nps,
+          location: 'field',
+          position,
+          nodeId,
+          runId: p.run.id,
+          joins: `${piece} to the line (field)`,
+        });
       return;
     }
     if (!end.weldType) return;
     for (let i = 0; i < end.weldCount; i++) {
       const which = end.weldType === 'slip-on-fillet' ? (i === 0 ? ' (hub fillet)' : ' (bore fillet)') : '';
-      push({ type: end.weldType, nps, location: 'shop', position, nodeId, runId: p.run.id, joins: `${piece} to ${name(nodeId)}${which}` });
+      push({
+        type: end.weldType,
+        nps,
+        location: 'shop',
+        position,
+        nodeId,
+        runId: p.run.id,
+        joins: `${piece} to ${name(nodeId)}${which}`,
+      });
     }
   };
 
@@ -80,9 +106,19 @@ export function buildWeldList(
       const open = (a: NodeAnalysis | undefined) => a?.detail.type === 'open-end';
       if (fa && ta && p.fromEnd && p.toEnd && !open(fa) && !open(ta)) {
         const nps = p.fromEnd.nps ?? fa.nps;
-        const type: WeldType = p.fromEnd.weldType === 'flange' || p.toEnd.weldType === 'flange' ? 'flange' : 'butt';
+        const type: WeldType =
+          p.fromEnd.weldType === 'flange' || p.toEnd.weldType === 'flange' ? 'flange' : 'butt';
         const position = addScaled(p.start, p.direction, (p.takeOffFromMm ?? 0) + p.gapFromMm);
-        if (nps) push({ type, nps, location: 'shop', position, nodeId: run.from, runId: run.id, joins: `${name(run.from)} to ${name(run.to)} (no pipe)` });
+        if (nps)
+          push({
+            type,
+            nps,
+            location: 'shop',
+            position,
+            nodeId: run.from,
+            runId: run.id,
+            joins: `${name(run.from)} to ${name(run.to)} (no pipe)`,
+          });
       } else {
         // A fitting's own weld end is the spool's open end: only a field weld, if any.
         for (const [a, end, nodeId, at, other] of [
@@ -90,7 +126,15 @@ export function buildWeldList(
           [fa, p.fromEnd, run.from, p.start, run.to],
         ] as const) {
           if (a?.detail.type === 'open-end' && a.detail.fieldWeld && end?.nps) {
-            push({ type: 'butt', nps: end.nps, location: 'field', position: at, nodeId, runId: run.id, joins: `${name(other)} to the line (field)` });
+            push({
+              type: 'butt',
+              nps: end.nps,
+              location: 'field',
+              position: at,
+              nodeId,
+              runId: run.id,
+              joins: `${name(other)} to the line (field)`,
+            });
           }
         }
       }

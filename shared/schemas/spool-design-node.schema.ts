@@ -69,9 +69,7 @@ export const endSpecSchema = z.discriminatedUnion('type', [
 export type EndSpec = z.infer<typeof endSpecSchema>;
 
 /** An open end of the spool: exactly one run meets it. */
-export const endNodeSchema = z
-  .object({ ...nodeBase, kind: z.literal('end'), end: endSpecSchema })
-  .strict();
+export const endNodeSchema = z.object({ ...nodeBase, kind: z.literal('end'), end: endSpecSchema }).strict();
 
 /**
  * A bend between two runs. The angle is derived from the two run directions: 90° and
@@ -116,9 +114,7 @@ export const teeNodeSchema = z
  * runs through unbroken. Branch size = the branch run's size (equal or smaller). The
  * branch axis may meet the header at 90° or at an angle (not below 30°).
  */
-export const setOnBranchNodeSchema = z
-  .object({ ...nodeBase, kind: z.literal('set-on-branch') })
-  .strict();
+export const setOnBranchNodeSchema = z.object({ ...nodeBase, kind: z.literal('set-on-branch') }).strict();
 
 /**
  * Orientation of a small-bore connection around its header, degrees clockwise looking
@@ -176,9 +172,7 @@ export const reducerNodeSchema = z
  * A Class 3000 socket-weld fitting (ASME B16.11) joining small-bore runs: two runs at 90°
  * or 45° (elbow), two collinear runs (coupling), three runs (tee). Work point = fitting centre.
  */
-export const socketFittingNodeSchema = z
-  .object({ ...nodeBase, kind: z.literal('socket-fitting') })
-  .strict();
+export const socketFittingNodeSchema = z.object({ ...nodeBase, kind: z.literal('socket-fitting') }).strict();
 
 /** A work point with the one component that sits there. */
 export const spoolNodeSchema = z.discriminatedUnion('kind', [

@@ -15,10 +15,9 @@ export const vec3Schema = z
 export type Vec3 = z.infer<typeof vec3Schema>;
 
 /** A direction: a {@link vec3Schema} that is not the zero vector. Length is ignored. */
-export const directionSchema = vec3Schema.refine(
-  (v) => Math.hypot(v.x, v.y, v.z) > 1e-9,
-  { message: 'Direction must not be the zero vector' },
-);
+export const directionSchema = vec3Schema.refine((v) => Math.hypot(v.x, v.y, v.z) > 1e-9, {
+  message: 'Direction must not be the zero vector',
+});
 
 /**
  * Id of a node or run inside one design: short, stable, chosen by the editor

@@ -44,13 +44,21 @@ export const spoolDesignSchema = spoolDesignObjectSchema.superRefine((design, ct
   design.nodes.forEach((node, i) => {
     const prior = seen.get(node.id);
     if (prior) {
-      ctx.addIssue({ code: 'custom', path: ['nodes', i, 'id'], message: `Duplicate id "${node.id}" (already used by ${prior})` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['nodes', i, 'id'],
+        message: `Duplicate id "${node.id}" (already used by ${prior})`,
+      });
     } else seen.set(node.id, `nodes.${i}`);
   });
   design.runs.forEach((run, i) => {
     const prior = seen.get(run.id);
     if (prior) {
-      ctx.addIssue({ code: 'custom', path: ['runs', i, 'id'], message: `Duplicate id "${run.id}" (already used by ${prior})` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['runs', i, 'id'],
+        message: `Duplicate id "${run.id}" (already used by ${prior})`,
+      });
     } else seen.set(run.id, `runs.${i}`);
   });
 });

@@ -26,20 +26,55 @@ function bigSpool(components: number): SpoolDesign {
       const b = `b${i}`;
       const bf = `bf${i}`;
       const side = dirs[(i + 1) % 3]!;
-      nodes.push({ id: b, kind: 'set-on-branch' }, { id: bf, kind: 'end', end: { type: 'weld-neck-flange' } });
-      runs.push({ id: `ra${i}`, from: prev, to: b, direction: dir, length: { mm: 1200, kind: 'centre-to-centre' } });
-      runs.push({ id: `rb${i}`, from: b, to: bf, direction: side, length: { mm: 700, kind: 'centre-to-face' }, nps: '4' });
+      nodes.push(
+        { id: b, kind: 'set-on-branch' },
+        { id: bf, kind: 'end', end: { type: 'weld-neck-flange' } },
+      );
+      runs.push({
+        id: `ra${i}`,
+        from: prev,
+        to: b,
+        direction: dir,
+        length: { mm: 1200, kind: 'centre-to-centre' },
+      });
+      runs.push({
+        id: `rb${i}`,
+        from: b,
+        to: bf,
+        direction: side,
+        length: { mm: 700, kind: 'centre-to-face' },
+        nps: '4',
+      });
       prev = b;
     }
     const e = `e${i}`;
     nodes.push({ id: e, kind: 'elbow' });
-    runs.push({ id: `r${i}`, from: prev, to: e, direction: dir, length: { mm: 1500, kind: 'centre-to-centre' } });
+    runs.push({
+      id: `r${i}`,
+      from: prev,
+      to: e,
+      direction: dir,
+      length: { mm: 1500, kind: 'centre-to-centre' },
+    });
     prev = e;
     i++;
   }
   nodes.push({ id: 'fEnd', kind: 'end', end: { type: 'weld-neck-flange' } });
-  runs.push({ id: 'rEnd', from: prev, to: 'fEnd', direction: dirs[i % 3]!, length: { mm: 1500, kind: 'centre-to-face' } });
-  return { format: 'tackline.spool', version: 1, spec: { nps: '10' }, origin: { x: 0, y: 0, z: 0 }, nodes, runs };
+  runs.push({
+    id: 'rEnd',
+    from: prev,
+    to: 'fEnd',
+    direction: dirs[i % 3]!,
+    length: { mm: 1500, kind: 'centre-to-face' },
+  });
+  return {
+    format: 'tackline.spool',
+    version: 1,
+    spec: { nps: '10' },
+    origin: { x: 0, y: 0, z: 0 },
+    nodes,
+    runs,
+  };
 }
 
 const big = bigSpool(200);
@@ -52,20 +87,34 @@ const job = Array.from({ length: 500 }, (_, k) => samples[k % samples.length]!);
 // Sanity outside the timed loop: the generated spool computes cleanly.
 const check = computeSpool(big);
 if (!check.ok || check.components.length !== 200) {
-  throw new Error(`bench spool is not clean: ${check.components.length} components, ${JSON.stringify(check.issues.slice(0, 3))}`);
+  throw new Error(
+    `bench spool is not clean: ${check.components.length} components, ${JSON.stringify(check.issues.slice(0, 3))}`,
+  );
 }
 
 // Warm up first: the editor recomputes a design many times, so steady state is what counts.
 const OPTIONS = { time: 3000, warmupTime: 1000, warmupIterations: 20 };
 
 describe('computeSpool', () => {
-  bench('200-component spool (validated)', () => {
-    computeSpool(big);
-  }, OPTIONS);
-  bench('200-component spool (trusted, already validated)', () => {
-    computeSpool(bigParsed, { trusted: true });
-  }, OPTIONS);
-  bench('500-spool job (the samples, cycled)', () => {
-    for (const d of job) computeSpool(d);
-  }, OPTIONS);
+  bench(
+    '200-component spool (validated)',
+    () => {
+      computeSpool(big);
+    },
+    OPTIONS,
+  );
+  bench(
+    '200-component spool (trusted, already validated)',
+    () => {
+      computeSpool(bigParsed, { trusted: true });
+    },
+    OPTIONS,
+  );
+  bench(
+    '500-spool job (the samples, cycled)',
+    () => {
+      for (const d of job) computeSpool(d);
+    },
+    OPTIONS,
+  );
 });

@@ -4,7 +4,8 @@ import { setOnBranchReach } from '../../../shared/engine/set-on-branch-geometry'
 import { bevel, design, DOWN, EAST, NORTH, run, SOUTH, UP, wn, WEST } from './helpers/design-builder';
 
 const runOf = (r: ReturnType<typeof computeSpool>, id: string) => r.runs.find((x) => x.runId === id)!;
-const pos = (r: ReturnType<typeof computeSpool>, id: string) => r.workPoints.find((w) => w.nodeId === id)!.position;
+const pos = (r: ReturnType<typeof computeSpool>, id: string) =>
+  r.workPoints.find((w) => w.nodeId === id)!.position;
 
 describe('set-on branches', () => {
   // Saddle depth R − √(R² − r²): NPS 4 on NPS 6 (r 57.15, R 84.15) → 22.38 mm; NPS 6 on NPS 12
@@ -12,10 +13,13 @@ describe('set-on branches', () => {
   it.each([
     [84.15, 57.15, 22.38],
     [161.9, 84.15, 23.59],
-  ])('the crotch is %f − √(R² − r²) shorter than the flank (header R %f, branch r %f → %f mm)', (R, r, depth) => {
-    const reach = setOnBranchReach(R, r, 90)!;
-    expect(reach.shortPointMm - reach.longPointMm).toBeCloseTo(depth, 2);
-  });
+  ])(
+    'the crotch is %f − √(R² − r²) shorter than the flank (header R %f, branch r %f → %f mm)',
+    (R, r, depth) => {
+      const reach = setOnBranchReach(R, r, 90)!;
+      expect(reach.shortPointMm - reach.longPointMm).toBeCloseTo(depth, 2);
+    },
+  );
 
   it('an equal branch reaches down to the header axis at its flanks (depth = header radius)', () => {
     const reach = setOnBranchReach(84.15, 84.15, 90)!;
@@ -33,7 +37,11 @@ describe('set-on branches', () => {
     const r = computeSpool(
       design(
         [wn('f1'), { id: 'b1', kind: 'set-on-branch' }, wn('f2'), wn('f3')],
-        [run('r1', 'f1', 'b1', EAST, 1000, 'centre-to-face'), run('r2', 'b1', 'f2', EAST, 1000, 'centre-to-face'), run('r3', 'b1', 'f3', UP, 600, 'centre-to-face', { nps: '4' })],
+        [
+          run('r1', 'f1', 'b1', EAST, 1000, 'centre-to-face'),
+          run('r2', 'b1', 'f2', EAST, 1000, 'centre-to-face'),
+          run('r3', 'b1', 'f3', UP, 600, 'centre-to-face', { nps: '4' }),
+        ],
         { nps: '6', rootGapMm: 3 },
       ),
     );
@@ -53,7 +61,11 @@ describe('set-on branches', () => {
     const r = computeSpool(
       design(
         [wn('f1'), { id: 'b1', kind: 'set-on-branch' }, wn('f2'), wn('f3')],
-        [run('r1', 'f1', 'b1', EAST, 1000), run('r2', 'b1', 'f2', EAST, 1000), run('r3', 'b1', 'f3', UP, 600, 'centre-to-face', { nps: '10' })],
+        [
+          run('r1', 'f1', 'b1', EAST, 1000),
+          run('r2', 'b1', 'f2', EAST, 1000),
+          run('r3', 'b1', 'f3', UP, 600, 'centre-to-face', { nps: '10' }),
+        ],
         { nps: '6' },
       ),
     );
@@ -66,7 +78,11 @@ describe('tees, reducers and returns', () => {
     const r = computeSpool(
       design(
         [wn('f1'), { id: 't1', kind: 'tee' }, wn('f2'), wn('f3')],
-        [run('r1', 'f1', 't1', EAST, 800, 'centre-to-face'), run('r2', 't1', 'f2', EAST, 800, 'centre-to-face'), run('r3', 't1', 'f3', SOUTH, 500, 'centre-to-face')],
+        [
+          run('r1', 'f1', 't1', EAST, 800, 'centre-to-face'),
+          run('r2', 't1', 'f2', EAST, 800, 'centre-to-face'),
+          run('r3', 't1', 'f3', SOUTH, 500, 'centre-to-face'),
+        ],
         { nps: '6' },
       ),
     );
@@ -79,7 +95,11 @@ describe('tees, reducers and returns', () => {
     const r = computeSpool(
       design(
         [wn('f1'), { id: 't1', kind: 'tee' }, wn('f2'), wn('f3')],
-        [run('r1', 'f1', 't1', EAST, 800), run('r2', 't1', 'f2', EAST, 800), run('r3', 't1', 'f3', { x: 1, y: 1, z: 0 }, 800)],
+        [
+          run('r1', 'f1', 't1', EAST, 800),
+          run('r2', 't1', 'f2', EAST, 800),
+          run('r3', 't1', 'f3', { x: 1, y: 1, z: 0 }, 800),
+        ],
         { nps: '6' },
       ),
     );
@@ -90,7 +110,10 @@ describe('tees, reducers and returns', () => {
     const r = computeSpool(
       design(
         [wn('f1'), { id: 'x1', kind: 'reducer', toNps: '6', type: 'eccentric', flatSide: 'top' }, wn('f2')],
-        [run('r1', 'f1', 'x1', EAST, 600, 'centre-to-face'), run('r2', 'x1', 'f2', EAST, 600, 'centre-to-face')],
+        [
+          run('r1', 'f1', 'x1', EAST, 600, 'centre-to-face'),
+          run('r2', 'x1', 'f2', EAST, 600, 'centre-to-face'),
+        ],
         { nps: '10' },
       ),
     );
@@ -103,7 +126,11 @@ describe('tees, reducers and returns', () => {
 
   it('a reducer with the same size both ends is a size mismatch', () => {
     const r = computeSpool(
-      design([wn('f1'), { id: 'x1', kind: 'reducer', toNps: '10' }, wn('f2')], [run('r1', 'f1', 'x1', EAST, 600), run('r2', 'x1', 'f2', EAST, 600)], { nps: '10' }),
+      design(
+        [wn('f1'), { id: 'x1', kind: 'reducer', toNps: '10' }, wn('f2')],
+        [run('r1', 'f1', 'x1', EAST, 600), run('r2', 'x1', 'f2', EAST, 600)],
+        { nps: '10' },
+      ),
     );
     expect(r.issues.some((i) => i.code === 'size-mismatch')).toBe(true);
   });
@@ -124,7 +151,11 @@ describe('tees, reducers and returns', () => {
 
   it('a return whose legs are not parallel is an angle no fitting makes', () => {
     const r = computeSpool(
-      design([bevel('a'), { id: 'u1', kind: 'return', offsetDirection: NORTH }, bevel('b')], [run('r1', 'a', 'u1', EAST, 1000), run('r2', 'u1', 'b', DOWN, 1000)], { nps: '6' }),
+      design(
+        [bevel('a'), { id: 'u1', kind: 'return', offsetDirection: NORTH }, bevel('b')],
+        [run('r1', 'a', 'u1', EAST, 1000), run('r2', 'u1', 'b', DOWN, 1000)],
+        { nps: '6' },
+      ),
     );
     expect(r.issues.find((i) => i.code === 'angle-not-made')?.componentId).toBe('u1');
   });
@@ -148,7 +179,11 @@ describe('small-bore connections', () => {
 
   it('asks for an orientation when an open half coupling has none', () => {
     const r = computeSpool(
-      design([wn('f1'), { id: 'c1', kind: 'half-coupling', branchNps: '1' }, wn('f2')], [run('r1', 'f1', 'c1', NORTH, 500), run('r2', 'c1', 'f2', NORTH, 500)], { nps: '6' }),
+      design(
+        [wn('f1'), { id: 'c1', kind: 'half-coupling', branchNps: '1' }, wn('f2')],
+        [run('r1', 'f1', 'c1', NORTH, 500), run('r2', 'c1', 'f2', NORTH, 500)],
+        { nps: '6' },
+      ),
     );
     expect(r.issues.find((i) => i.code === 'orientation-missing')?.componentId).toBe('c1');
   });
@@ -156,7 +191,12 @@ describe('small-bore connections', () => {
   it('takes a butt-weld outlet branch off at header radius + stated height', () => {
     const r = computeSpool(
       design(
-        [wn('f1'), { id: 'o1', kind: 'branch-outlet', branchNps: '2', outletEnd: 'butt', heightMm: 38 }, wn('f2'), bevel('b')],
+        [
+          wn('f1'),
+          { id: 'o1', kind: 'branch-outlet', branchNps: '2', outletEnd: 'butt', heightMm: 38 },
+          wn('f2'),
+          bevel('b'),
+        ],
         [run('r1', 'f1', 'o1', EAST, 800), run('r2', 'o1', 'f2', EAST, 800), run('r3', 'o1', 'b', UP, 400)],
         { nps: '10' },
       ),
@@ -168,8 +208,12 @@ describe('small-bore connections', () => {
 
 describe('end preparations', () => {
   it('bevels butt-weld ends above 3 mm wall and cuts them square at or below (ASME B16.25)', () => {
-    const thin = computeSpool(design([bevel('a'), bevel('b')], [run('r1', 'a', 'b', EAST, 500, 'cut')], { nps: '1', schedule: '10' }));
-    const std = computeSpool(design([bevel('a'), bevel('b')], [run('r1', 'a', 'b', EAST, 500, 'cut')], { nps: '6' }));
+    const thin = computeSpool(
+      design([bevel('a'), bevel('b')], [run('r1', 'a', 'b', EAST, 500, 'cut')], { nps: '1', schedule: '10' }),
+    );
+    const std = computeSpool(
+      design([bevel('a'), bevel('b')], [run('r1', 'a', 'b', EAST, 500, 'cut')], { nps: '6' }),
+    );
     expect(thin.pieces[0]!.wallMm).toBeLessThanOrEqual(3);
     expect(thin.pieces[0]!.ends[0]!.type).toBe('square');
     expect(std.pieces[0]!.ends[0]!.label).toBe('bevel 37.5°');
@@ -177,7 +221,11 @@ describe('end preparations', () => {
 
   it('adds the field-fit allowance to the cut length only', () => {
     const r = computeSpool(
-      design([wn('f1'), { id: 'a', kind: 'end', end: { type: 'bevel', fieldFitAllowanceMm: 75 } }], [run('r1', 'f1', 'a', EAST, 1000, 'centre-to-face')], { nps: '6' }),
+      design(
+        [wn('f1'), { id: 'a', kind: 'end', end: { type: 'bevel', fieldFitAllowanceMm: 75 } }],
+        [run('r1', 'f1', 'a', EAST, 1000, 'centre-to-face')],
+        { nps: '6' },
+      ),
     );
     expect(r.pieces[0]!.cutLengthMm).toBe(runOf(r, 'r1').pipeLengthMm! + 75);
     expect(r.openEnds.find((e) => e.nodeId === 'a')!.centreToFaceMm).toBe(1000);

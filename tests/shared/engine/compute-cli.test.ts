@@ -10,7 +10,11 @@ const tsx = join('node_modules', '.bin', 'tsx');
 const cli = (file: string) =>
   run(tsx, ['shared/cli/compute.ts', file]).then(
     (r) => ({ code: 0, stdout: r.stdout, stderr: r.stderr }),
-    (e: { code: number; stdout: string; stderr: string }) => ({ code: e.code, stdout: e.stdout, stderr: e.stderr }),
+    (e: { code: number; stdout: string; stderr: string }) => ({
+      code: e.code,
+      stdout: e.stdout,
+      stderr: e.stderr,
+    }),
   );
 
 describe('compute CLI', () => {
@@ -41,7 +45,16 @@ describe('compute CLI', () => {
 
   it('exits 1 naming the schema path of a bad design', async () => {
     const f = join(dir, 'shape.json');
-    writeFileSync(f, JSON.stringify({ format: 'tackline.spool', version: 1, origin: { x: 0, y: 0, z: 0 }, nodes: [{ id: 'a', kind: 'end', end: { type: 'hose' } }], runs: [] }));
+    writeFileSync(
+      f,
+      JSON.stringify({
+        format: 'tackline.spool',
+        version: 1,
+        origin: { x: 0, y: 0, z: 0 },
+        nodes: [{ id: 'a', kind: 'end', end: { type: 'hose' } }],
+        runs: [],
+      }),
+    );
     const r = await cli(f);
     expect(r.code).toBe(1);
     expect(r.stderr).toContain('nodes.0.end.type');

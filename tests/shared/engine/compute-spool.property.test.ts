@@ -32,7 +32,11 @@ describe('computeSpool on random valid designs', () => {
           expect(run.pipeLengthMm).not.toBeNull();
           const sum = run.pipeLengthMm! + run.takeOffFromMm! + run.takeOffToMm! + run.gapsMm;
           expect(Math.abs(run.workPointDistanceMm - sum)).toBeLessThan(PRECISION_MM);
-          const placed = Math.hypot(run.end.x - run.start.x, run.end.y - run.start.y, run.end.z - run.start.z);
+          const placed = Math.hypot(
+            run.end.x - run.start.x,
+            run.end.y - run.start.y,
+            run.end.z - run.start.z,
+          );
           expect(Math.abs(placed - run.workPointDistanceMm)).toBeLessThan(PRECISION_MM * 10);
         }
         // A stated cut length comes back as the piece's cut length.
@@ -48,7 +52,11 @@ describe('computeSpool on random valid designs', () => {
     fc.assert(
       fc.property(
         chainParams,
-        fc.record({ x: fc.double({ min: -5e4, max: 5e4, noNaN: true }), y: fc.double({ min: -5e4, max: 5e4, noNaN: true }), z: fc.double({ min: -5e3, max: 5e3, noNaN: true }) }),
+        fc.record({
+          x: fc.double({ min: -5e4, max: 5e4, noNaN: true }),
+          y: fc.double({ min: -5e4, max: 5e4, noNaN: true }),
+          z: fc.double({ min: -5e3, max: 5e3, noNaN: true }),
+        }),
         fc.double({ min: 0, max: 360, noNaN: true }),
         (p, t, deg) => {
           const d = chainDesign(p);
@@ -56,7 +64,9 @@ describe('computeSpool on random valid designs', () => {
           const b = computeSpool(moved(d, t, deg));
           expect(b.pieces.map((x) => x.mark)).toEqual(a.pieces.map((x) => x.mark));
           a.pieces.forEach((pa, i) => expect(b.pieces[i]!.cutLengthMm!).toBeCloseTo(pa.cutLengthMm!, 2));
-          expect(b.welds.map((w) => [w.type, w.nps, w.location])).toEqual(a.welds.map((w) => [w.type, w.nps, w.location]));
+          expect(b.welds.map((w) => [w.type, w.nps, w.location])).toEqual(
+            a.welds.map((w) => [w.type, w.nps, w.location]),
+          );
           expect(b.diameterInches).toBe(a.diameterInches);
           expect(b.weights.emptyKg).toBeCloseTo(a.weights.emptyKg, 2);
           expect(b.weights.waterFilledKg).toBeCloseTo(a.weights.waterFilledKg, 2);
@@ -99,21 +109,64 @@ describe('computeSpool on bad input', () => {
   type Mutation = (d: SpoolDesign, pick: number) => SpoolDesign;
   const mutations: [string, Mutation][] = [
     ['drop a run', (d, k) => ({ ...d, runs: d.runs.filter((_, i) => i !== k % d.runs.length) })],
-    ['point a run at a missing node', (d, k) => ({ ...d, runs: d.runs.map((r, i) => (i === k % d.runs.length ? { ...r, to: 'nowhere' } : r)) })],
-    ['make a run too short for its fittings', (d, k) => ({ ...d, runs: d.runs.map((r, i) => (i === k % d.runs.length ? { ...r, length: { mm: 20, kind: 'centre-to-centre' as const } } : r)) })],
-    ['fold a run back on itself (180° at an elbow)', (d, k) => {
-      const out = d.runs.filter((r) => r.from.startsWith('e'));
-      if (out.length === 0) return { ...d, runs: d.runs.map((r) => ({ ...r, direction: { x: 0, y: 0, z: 1 } })), nodes: [...d.nodes, { id: 'e9', kind: 'elbow' }] };
-      const target = out[k % out.length]!;
-      const prev = d.runs.find((r) => r.to === target.from)!.direction;
-      return { ...d, runs: d.runs.map((r) => (r === target ? { ...r, direction: { x: -prev.x, y: -prev.y, z: -prev.z } } : r)) };
-    }],
-    ['add a loop', (d) => ({ ...d, runs: [...d.runs, { ...d.runs[0]!, id: 'loop', from: d.runs[d.runs.length - 1]!.to, to: d.runs[0]!.to }] })],
-    ['put socket-weld caps on a 14" line (no B16.11 data above NPS 2)', (d) => ({
-      ...d,
-      spec: { ...d.spec, nps: '14' as const },
-      nodes: d.nodes.map((n) => (n.id === 'n0' || n.id === 'nEnd' ? { id: n.id, kind: 'end' as const, end: { type: 'socket-cap' as const } } : n)),
-    })],
+    [
+      'point a run at a missing node',
+      (d, k) => ({
+        ...d,
+        runs: d.runs.map((r, i) => (i === k % d.runs.length ? { ...r, to: 'nowhere' } : r)),
+      }),
+    ],
+    [
+      'make a run too short for its fittings',
+      (d, k) => ({
+        ...d,
+        runs: d.runs.map((r, i) =>
+          i === k % d.runs.length ? { ...r, length: { mm: 20, kind: 'centre-to-centre' as const } } : r,
+        ),
+      }),
+    ],
+    [
+      'fold a run back on itself (180° at an elbow)',
+      (d, k) => {
+        const out = d.runs.filter((r) => r.from.startsWith('e'));
+        if (out.length === 0)
+          return {
+            ...d,
+            runs: d.runs.map((r) => ({ ...r, direction: { x: 0, y: 0, z: 1 } })),
+            nodes: [...d.nodes, { id: 'e9', kind: 'elbow' }],
+          };
+        const target = out[k % out.length]!;
+        const prev = d.runs.find((r) => r.to === target.from)!.direction;
+        return {
+          ...d,
+          runs: d.runs.map((r) =>
+            r === target ? { ...r, direction: { x: -prev.x, y: -prev.y, z: -prev.z } } : r,
+          ),
+        };
+      },
+    ],
+    [
+      'add a loop',
+      (d) => ({
+        ...d,
+        runs: [
+          ...d.runs,
+          { ...d.runs[0]!, id: 'loop', from: d.runs[d.runs.length - 1]!.to, to: d.runs[0]!.to },
+        ],
+      }),
+    ],
+    [
+      'put socket-weld caps on a 14" line (no B16.11 data above NPS 2)',
+      (d) => ({
+        ...d,
+        spec: { ...d.spec, nps: '14' as const },
+        nodes: d.nodes.map((n) =>
+          n.id === 'n0' || n.id === 'nEnd'
+            ? { id: n.id, kind: 'end' as const, end: { type: 'socket-cap' as const } }
+            : n,
+        ),
+      }),
+    ],
   ];
 
   it.each(mutations)('reports an error, never a throw or NaN, when we %s', (_name, mutate) => {

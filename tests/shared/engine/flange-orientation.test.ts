@@ -4,8 +4,18 @@ import type { Nps } from '../../../shared/standards/nps';
 import { design, EAST, run, UP, wn } from './helpers/design-builder';
 
 /** A straight spool: flange f1 facing west at the origin, flange f2 facing east. */
-function straight(nps: Nps, flangeClass: 150 | 300, f1: Record<string, unknown> = {}, f2: Record<string, unknown> = {}) {
-  return computeSpool(design([wn('f1', f1), wn('f2', f2)], [run('r1', 'f1', 'f2', EAST, 1500, 'face-to-face')], { nps, flangeClass }));
+function straight(
+  nps: Nps,
+  flangeClass: 150 | 300,
+  f1: Record<string, unknown> = {},
+  f2: Record<string, unknown> = {},
+) {
+  return computeSpool(
+    design([wn('f1', f1), wn('f2', f2)], [run('r1', 'f1', 'f2', EAST, 1500, 'face-to-face')], {
+      nps,
+      flangeClass,
+    }),
+  );
 }
 
 describe('bolt holes straddle the centrelines', () => {
@@ -33,7 +43,9 @@ describe('bolt holes straddle the centrelines', () => {
   });
 
   it('measures a flange facing up from plant north', () => {
-    const r = computeSpool(design([wn('f1'), wn('f2')], [run('r1', 'f1', 'f2', UP, 1000, 'face-to-face')], { nps: '6' }));
+    const r = computeSpool(
+      design([wn('f1'), wn('f2')], [run('r1', 'f1', 'f2', UP, 1000, 'face-to-face')], { nps: '6' }),
+    );
     const top = r.flanges.find((q) => q.nodeId === 'f2')!;
     expect(top.outward).toEqual(UP);
     expect(top.reference).toBe('plant-north');
@@ -84,7 +96,11 @@ describe('flange pairs', () => {
   });
 
   it('reads the rolling-offset sample: both flanges two-holed, bench angles from the offset plane', async () => {
-    const sample = JSON.parse(await import('node:fs/promises').then((fs) => fs.readFile('samples/cw-305-s01-rolling-offset-10in.json', 'utf8')));
+    const sample = JSON.parse(
+      await import('node:fs/promises').then((fs) =>
+        fs.readFile('samples/cw-305-s01-rolling-offset-10in.json', 'utf8'),
+      ),
+    );
     const r = computeSpool(sample);
     const [f1, f2] = [r.flanges[0]!, r.flanges[1]!];
     expect(f1.straddles && f2.straddles).toBe(true);

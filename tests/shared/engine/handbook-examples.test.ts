@@ -1,9 +1,22 @@
 import { describe, expect, it } from 'vitest';
 import { computeSpool } from '../../../shared/engine/compute-spool';
-import { between, bevel, design, EAST, elbow, NORTH, plain, run, socket, UP, wn } from './helpers/design-builder';
+import {
+  between,
+  bevel,
+  design,
+  EAST,
+  elbow,
+  NORTH,
+  plain,
+  run,
+  socket,
+  UP,
+  wn,
+} from './helpers/design-builder';
 
 const runOf = (r: ReturnType<typeof computeSpool>, id: string) => r.runs.find((x) => x.runId === id)!;
-const pos = (r: ReturnType<typeof computeSpool>, id: string) => r.workPoints.find((w) => w.nodeId === id)!.position;
+const pos = (r: ReturnType<typeof computeSpool>, id: string) =>
+  r.workPoints.find((w) => w.nodeId === id)!.position;
 
 describe('cut length between fittings', () => {
   // Rule: "Cut length = C–C − Takeout A − Takeout B … subtract root gaps too" (tnbpositioners
@@ -49,7 +62,11 @@ describe('two 90° LR elbows welded into a return', () => {
     const r = computeSpool(
       design(
         [wn('f1'), elbow('e1'), elbow('e2'), wn('f2')],
-        [run('r1', 'f1', 'e1', EAST, 1500), run('r2', 'e1', 'e2', NORTH, 0, 'cut'), run('r3', 'e2', 'f2', { x: -1, y: 0, z: 0 }, 1500)],
+        [
+          run('r1', 'f1', 'e1', EAST, 1500),
+          run('r2', 'e1', 'e2', NORTH, 0, 'cut'),
+          run('r3', 'e2', 'f2', { x: -1, y: 0, z: 0 }, 1500),
+        ],
         { nps: '14', rootGapMm: 3 },
       ),
     );
@@ -66,7 +83,11 @@ describe('two 90° LR elbows welded into a return', () => {
     const r = computeSpool(
       design(
         [wn('f1'), elbow('e1'), elbow('e2'), wn('f2')],
-        [run('r1', 'f1', 'e1', EAST, 900), run('r2', 'e1', 'e2', NORTH, 461), run('r3', 'e2', 'f2', { x: -1, y: 0, z: 0 }, 900)],
+        [
+          run('r1', 'f1', 'e1', EAST, 900),
+          run('r2', 'e1', 'e2', NORTH, 461),
+          run('r3', 'e2', 'f2', { x: -1, y: 0, z: 0 }, 900),
+        ],
         { nps: '6', rootGapMm: 3 },
       ),
     );
@@ -79,7 +100,11 @@ describe('two 90° LR elbows welded into a return', () => {
     const r = computeSpool(
       design(
         [wn('f1'), elbow('e1'), elbow('e2'), wn('f2')],
-        [run('r1', 'f1', 'e1', EAST, 900), run('r2', 'e1', 'e2', NORTH, 400), run('r3', 'e2', 'f2', { x: -1, y: 0, z: 0 }, 900)],
+        [
+          run('r1', 'f1', 'e1', EAST, 900),
+          run('r2', 'e1', 'e2', NORTH, 400),
+          run('r3', 'e2', 'f2', { x: -1, y: 0, z: 0 }, 900),
+        ],
         { nps: '6' },
       ),
     );
@@ -93,7 +118,11 @@ describe('elbows cut to an angle', () => {
   // Worked example (fitting maker's page, jsfittings): NPS 4 LR at 60° → 152 × tan 30° = 87.8 mm.
   it('uses R·tan(θ/2): NPS 4 LR cut to 60° → 87.8 mm', () => {
     const r = computeSpool(
-      design([bevel('a'), elbow('e1'), bevel('b')], [run('r1', 'a', 'e1', EAST, 600), run('r2', 'e1', 'b', between(EAST, UP, 60), 600)], { nps: '4' }),
+      design(
+        [bevel('a'), elbow('e1'), bevel('b')],
+        [run('r1', 'a', 'e1', EAST, 600), run('r2', 'e1', 'b', between(EAST, UP, 60), 600)],
+        { nps: '4' },
+      ),
     );
     expect(runOf(r, 'r1').takeOffToMm).toBeCloseTo(87.8, 1);
     expect(r.issues.map((i) => i.code)).toContain('cut-elbow');
@@ -102,14 +131,22 @@ describe('elbows cut to an angle', () => {
 
   it('uses the B16.9 45° table value B, not R·tan 22.5° (NPS 2: 35 mm, not 31.6)', () => {
     const r = computeSpool(
-      design([bevel('a'), elbow('e1'), bevel('b')], [run('r1', 'a', 'e1', EAST, 600), run('r2', 'e1', 'b', between(EAST, UP, 45), 600)], { nps: '2' }),
+      design(
+        [bevel('a'), elbow('e1'), bevel('b')],
+        [run('r1', 'a', 'e1', EAST, 600), run('r2', 'e1', 'b', between(EAST, UP, 45), 600)],
+        { nps: '2' },
+      ),
     );
     expect(runOf(r, 'r1').takeOffToMm).toBe(35);
   });
 
   it('refuses a bend no single elbow makes (120°) with an error on the elbow', () => {
     const r = computeSpool(
-      design([bevel('a'), elbow('e1'), bevel('b')], [run('r1', 'a', 'e1', EAST, 600), run('r2', 'e1', 'b', between(EAST, UP, 120), 600)], { nps: '4' }),
+      design(
+        [bevel('a'), elbow('e1'), bevel('b')],
+        [run('r1', 'a', 'e1', EAST, 600), run('r2', 'e1', 'b', between(EAST, UP, 120), 600)],
+        { nps: '4' },
+      ),
     );
     expect(r.ok).toBe(false);
     expect(r.issues.find((i) => i.code === 'angle-not-made')?.componentId).toBe('e1');
@@ -122,11 +159,15 @@ describe('offsets', () => {
   it('a 45° offset of travel 16.97 in (431.04 mm) has a set of 12 in (304.8 mm)', () => {
     const travel = 16.97 * 25.4;
     const r = computeSpool(
-      design([bevel('a'), elbow('e1'), elbow('e2'), bevel('b')], [
-        run('r1', 'a', 'e1', EAST, 600),
-        run('r2', 'e1', 'e2', between(EAST, UP, 45), travel),
-        run('r3', 'e2', 'b', EAST, 600),
-      ], { nps: '2' }),
+      design(
+        [bevel('a'), elbow('e1'), elbow('e2'), bevel('b')],
+        [
+          run('r1', 'a', 'e1', EAST, 600),
+          run('r2', 'e1', 'e2', between(EAST, UP, 45), travel),
+          run('r3', 'e2', 'b', EAST, 600),
+        ],
+        { nps: '2' },
+      ),
     );
     expect(pos(r, 'e2').z - pos(r, 'e1').z).toBeCloseTo(304.8, 0);
     expect(r.components.find((c) => c.nodeId === 'e1')!.description).toContain('45°');
@@ -142,15 +183,23 @@ describe('offsets', () => {
     const dir = { x: trueOffset, y: roll, z: rise };
     const travel = Math.hypot(trueOffset, roll, rise);
     const r = computeSpool(
-      design([wn('f1'), elbow('e1'), elbow('e2'), wn('f2')], [
-        run('r1', 'f1', 'e1', EAST, 800),
-        run('r2', 'e1', 'e2', dir, travel),
-        run('r3', 'e2', 'f2', EAST, 800),
-      ], { nps: '4' }),
+      design(
+        [wn('f1'), elbow('e1'), elbow('e2'), wn('f2')],
+        [
+          run('r1', 'f1', 'e1', EAST, 800),
+          run('r2', 'e1', 'e2', dir, travel),
+          run('r3', 'e2', 'f2', EAST, 800),
+        ],
+        { nps: '4' },
+      ),
     );
     expect(r.ok).toBe(true);
     expect(r.components.filter((c) => c.description.startsWith('Elbow 45°'))).toHaveLength(2);
-    const d = { x: pos(r, 'e2').x - pos(r, 'e1').x, y: pos(r, 'e2').y - pos(r, 'e1').y, z: pos(r, 'e2').z - pos(r, 'e1').z };
+    const d = {
+      x: pos(r, 'e2').x - pos(r, 'e1').x,
+      y: pos(r, 'e2').y - pos(r, 'e1').y,
+      z: pos(r, 'e2').z - pos(r, 'e1').z,
+    };
     expect(d.y).toBeCloseTo(roll, 3);
     expect(d.z).toBeCloseTo(rise, 3);
     expect(travel).toBeCloseTo(trueOffset * Math.SQRT2, 6);

@@ -1,6 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { computeSpool } from '../../../shared/engine/compute-spool';
-import { cutFromRunLength, runLengthAs, runLengthFromCut } from '../../../shared/engine/run-length-conversion';
+import {
+  cutFromRunLength,
+  runLengthAs,
+  runLengthFromCut,
+} from '../../../shared/engine/run-length-conversion';
 import { bevel, design, EAST, elbow, NORTH, run, UP } from './helpers/design-builder';
 
 describe('run length conversion', () => {
@@ -12,10 +16,20 @@ describe('run length conversion', () => {
 
   it('restating a run as a cut length keeps every position', () => {
     const nodes = [bevel('a'), elbow('e1'), elbow('e2'), bevel('b')];
-    const cc = design(nodes, [run('r1', 'a', 'e1', EAST, 700), run('r2', 'e1', 'e2', NORTH, 1234.5), run('r3', 'e2', 'b', UP, 700)], { nps: '10' });
+    const cc = design(
+      nodes,
+      [run('r1', 'a', 'e1', EAST, 700), run('r2', 'e1', 'e2', NORTH, 1234.5), run('r3', 'e2', 'b', UP, 700)],
+      { nps: '10' },
+    );
     const first = computeSpool(cc);
-    const cut = runLengthAs(first.runs.find((r) => r.runId === 'r2')!, 'cut')!;
-    const restated = computeSpool({ ...cc, runs: cc.runs.map((r) => (r.id === 'r2' ? { ...r, length: { mm: cut, kind: 'cut' as const } } : r)) });
+    const cut = runLengthAs(
+      first.runs.find((r) => r.runId === 'r2')!,
+      'cut',
+    )!;
+    const restated = computeSpool({
+      ...cc,
+      runs: cc.runs.map((r) => (r.id === 'r2' ? { ...r, length: { mm: cut, kind: 'cut' as const } } : r)),
+    });
     expect(restated.workPoints).toEqual(first.workPoints);
   });
 });

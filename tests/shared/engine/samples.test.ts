@@ -17,7 +17,15 @@ describe('samples', () => {
     const r = computeSpool(load('cw-201-s03-return-14in.json'));
     expect(r.runs.find((x) => x.runId === 'R3')!.workPointDistanceMm).toBe(1069);
     expect(r.pieces.find((p) => p.runIds.includes('R1'))!.runIds).toEqual(['R1', 'R2']);
-    expect(r.welds.map((w) => w.type)).toEqual(['flange', 'butt', 'butt', 'butt', 'flange', 'branch', 'flange']);
+    expect(r.welds.map((w) => w.type)).toEqual([
+      'flange',
+      'butt',
+      'butt',
+      'butt',
+      'flange',
+      'branch',
+      'flange',
+    ]);
     // Diameter-inches: five 14" welds and two 6" welds.
     expect(r.diameterInches).toBe(5 * 14 + 2 * 6);
     expect(r.flanges.every((f) => f.straddles)).toBe(true);
@@ -25,7 +33,9 @@ describe('samples', () => {
 
   it('CW-410-S02: three half couplings at 0°, 90° and 180°, header as one piece', () => {
     const r = computeSpool(load('cw-410-s02-header-6in.json'));
-    const orientations = r.components.flatMap((c) => (c.shape.type === 'branch-connection' ? [c.shape.orientationDeg] : []));
+    const orientations = r.components.flatMap((c) =>
+      c.shape.type === 'branch-connection' ? [c.shape.orientationDeg] : [],
+    );
     expect(orientations).toEqual([0, 90, 180]);
     expect(r.pieces).toHaveLength(1);
     expect(r.pieces[0]!.cutLengthMm).toBe(2100 - 2 * (87 + 2) - 2 * 3);

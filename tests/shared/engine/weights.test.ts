@@ -8,14 +8,23 @@ describe('pipe weights', () => {
   // NPS 6 STD: 28.26 kg/m plain end; water 18.65 kg/m; total 46.91 kg/m
   // (B36.10M mass formula; projectmaterials pipe weight chart; water from brassmein 0.3405·dᵢ²).
   it('weighs 1 m of NPS 6 STD at 28.26 kg empty and 46.91 kg water-filled', () => {
-    const r = computeSpool(design([plain('a'), plain('b')], [run('r1', 'a', 'b', EAST, 1000, 'cut')], { nps: '6' }));
+    const r = computeSpool(
+      design([plain('a'), plain('b')], [run('r1', 'a', 'b', EAST, 1000, 'cut')], { nps: '6' }),
+    );
     expect(r.weights.emptyKg).toBeCloseTo(28.26, 1);
     expect(r.weights.waterKg).toBeCloseTo(18.65, 1);
     expect(r.weights.waterFilledKg).toBeCloseTo(46.91, 1);
   });
 
   it('puts the centre of gravity of a straight flanged spool at its middle', () => {
-    const r = computeSpool(design([wn('f1'), wn('f2')], [run('r1', 'f1', 'f2', EAST, 3000, 'face-to-face')], { nps: '10' }, { x: 100, y: 200, z: 300 }));
+    const r = computeSpool(
+      design(
+        [wn('f1'), wn('f2')],
+        [run('r1', 'f1', 'f2', EAST, 3000, 'face-to-face')],
+        { nps: '10' },
+        { x: 100, y: 200, z: 300 },
+      ),
+    );
     expect(r.weights.centreOfGravity!.x).toBeCloseTo(1600, 3);
     expect(r.weights.centreOfGravity!.y).toBeCloseTo(200, 6);
     expect(r.weights.centreOfGravity!.z).toBeCloseTo(300, 6);
@@ -30,7 +39,11 @@ describe('fitting weights', () => {
   // torus value in shared/reference §8); catalogues give 208.65 kg (cnkpipefitting) and 212 kg.
   it('weighs a 24" STD LR 90° near 202.6 kg, within the catalogue margin', () => {
     const r = computeSpool(
-      design([bevel('a', false), elbow('e1'), bevel('b', false)], [run('r1', 'a', 'e1', EAST, 0, 'cut'), run('r2', 'e1', 'b', NORTH, 0, 'cut')], { nps: '24' }),
+      design(
+        [bevel('a', false), elbow('e1'), bevel('b', false)],
+        [run('r1', 'a', 'e1', EAST, 0, 'cut'), run('r2', 'e1', 'b', NORTH, 0, 'cut')],
+        { nps: '24' },
+      ),
     );
     const e = r.weights.items.find((i) => i.ref === 'e1')!;
     expect(e.massKg).toBeGreaterThan(202.6 * 0.99);
