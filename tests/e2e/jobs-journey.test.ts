@@ -177,7 +177,13 @@ describe('jobs and spools in the browser', () => {
       await expect(page.getByRole('button', { name }).count()).resolves.toBe(0);
     }
     await page.getByText('Loading the editor…').waitFor({ state: 'detached' });
+    await page.getByRole('button', { name: 'Open sheet (PDF)' }).waitFor();
     await saveScreenshot(page, '12-spool-viewer');
+    // The sheet is for every role; the link the page builds answers with a PDF.
+    const spoolId = page.url().split('/').pop()!;
+    const sheet = await page.request.get(`${app.baseUrl}/api/spools/${spoolId}/sheet.pdf?paper=A4`);
+    expect(sheet.status()).toBe(200);
+    expect(sheet.headers()['content-type']).toBe('application/pdf');
     await page.close();
   });
 

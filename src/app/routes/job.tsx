@@ -9,6 +9,7 @@ import { ArchiveJobButton } from '../../features/jobs/components/ArchiveJobButto
 import { EditJobDialog } from '../../features/jobs/components/EditJobDialog';
 import { JobSpecPanel } from '../../features/jobs/components/JobSpecPanel';
 import { JobStatusBadge } from '../../features/jobs/components/JobStatusBadge';
+import { SawListActions } from '../../features/sheets/components/SawListActions';
 import { JobSpoolsSection } from '../../features/spools/components/JobSpoolsSection';
 import { queryClient } from '../../lib/query-client';
 import { isMissing } from '../../lib/api-error';
@@ -76,6 +77,13 @@ export function Component() {
         </div>
       </PageHeader>
       <JobSpecPanel job={j} />
+      <section aria-labelledby="job-paperwork" className="flex flex-col gap-2 rounded-lg border border-steel-200 bg-white p-4">
+        <h2 id="job-paperwork" className="text-xl font-semibold text-ink-800">
+          Saw list
+        </h2>
+        <p className="text-sm text-steel-600">Every open spool's cut lengths, nested into stock lengths with the saw kerf.</p>
+        <SawListActions jobId={j.id} />
+      </section>
       <JobSpoolsSection job={j} mayCreate={can.manageSpools(user.role)} />
     </div>
   );

@@ -9,10 +9,12 @@ import { useJob } from '../../features/jobs/api/get-job';
 import { spoolQueryOptions, useSpool } from '../../features/spools/api/get-spool';
 import { ArchiveSpoolButton } from '../../features/spools/components/ArchiveSpoolButton';
 import { EditSpoolDialog } from '../../features/spools/components/EditSpoolDialog';
+import { SpoolSheetActions } from '../../features/sheets/components/SpoolSheetActions';
 import { SpoolEditorSlot } from '../../features/spools/components/SpoolEditorSlot';
 import { SpoolRevisionsSection } from '../../features/spools/components/SpoolRevisionsSection';
 import { SpoolStatusActions } from '../../features/spools/components/SpoolStatusActions';
 import { SpoolStatusBadge } from '../../features/spools/components/SpoolStatusBadge';
+import { allowedSpoolStatusTargets } from '../../../shared/schemas/spool-status.schema';
 import { isMissing } from '../../lib/api-error';
 import { formatDateTime } from '../../lib/format-date';
 import { unitsLabel } from '../../lib/units-label';
@@ -87,7 +89,20 @@ export function Component() {
         </div>
       </PageHeader>
 
-      <SpoolStatusActions spool={s} role={user.role} />
+      <div className={allowedSpoolStatusTargets(user.role, s.status).length > 0 ? 'grid gap-4 lg:grid-cols-2' : 'grid gap-4'}>
+        <section aria-labelledby="spool-sheet" className="flex flex-col gap-2 rounded-lg border border-steel-200 bg-white p-4">
+          <h2 id="spool-sheet" className="text-xl font-semibold text-ink-800">
+            Fabrication sheet
+          </h2>
+          <p className="text-sm text-steel-600">
+            {s.currentRevision
+              ? `Revision ${s.currentRevision.letter}, as issued to the bay.`
+              : 'Not issued yet: the sheet shows the working draft, marked as such.'}
+          </p>
+          <SpoolSheetActions spoolId={s.id} />
+        </section>
+        <SpoolStatusActions spool={s} role={user.role} />
+      </div>
 
       <SpoolEditorSlot spoolId={s.id} readOnly={!mayEditDesign} />
 
