@@ -77,6 +77,7 @@ export function Component() {
         </div>
       </PageHeader>
       <JobSpecPanel job={j} />
+      <JobSpoolsSection job={j} mayCreate={can.manageSpools(user.role)} />
       <section aria-labelledby="job-paperwork" className="flex flex-col gap-2 rounded-lg border border-steel-200 bg-white p-4">
         <h2 id="job-paperwork" className="text-xl font-semibold text-ink-800">
           Saw list
@@ -84,7 +85,6 @@ export function Component() {
         <p className="text-sm text-steel-600">Every open spool's cut lengths, nested into stock lengths with the saw kerf.</p>
         <SawListActions jobId={j.id} />
       </section>
-      <JobSpoolsSection job={j} mayCreate={can.manageSpools(user.role)} />
     </div>
   );
 }
