@@ -184,6 +184,17 @@ describe('jobs and spools in the browser', () => {
     const sheet = await page.request.get(`${app.baseUrl}/api/spools/${spoolId}/sheet.pdf?paper=A4`);
     expect(sheet.status()).toBe(200);
     expect(sheet.headers()['content-type']).toBe('application/pdf');
+
+    // The session ends mid-work (expired, or signed out elsewhere): the next request sends
+    // the user to sign-in, and signing in brings them back to where they were going.
+    await page.getByRole('navigation', { name: 'Breadcrumb' }).getByRole('link', { name: DEMO_JOB }).click();
+    await page.getByRole('row').filter({ hasText: READ_MARK }).waitFor();
+    await browser.context.clearCookies();
+    await page.getByRole('button', { name: 'Line' }).click();
+    await page.waitForURL(/\/sign-in\?next=%2Fjobs%2F.*sort%3DlineNumber/);
+    await signInAs(page, DEMO_USERS.viewer);
+    await page.waitForURL(/\/jobs\/[0-9a-f-]{36}\?sort=lineNumber&order=asc$/);
+    await page.getByRole('row').filter({ hasText: READ_MARK }).waitFor();
     await page.close();
   });
 
