@@ -83,6 +83,8 @@ async function main(): Promise<void> {
   const browser = await launchBrowser({ width: 1440, height: 1000 });
   try {
     const page = await browser.context.newPage();
+    // tsx keeps function names with a `__name` helper that the page does not have.
+    await page.addInitScript({ content: 'window.__name = (f) => f;' });
     await page.goto(`${app.baseUrl}/`);
     await signInAs(page, DEMO_USERS.detailer);
     const jobs = (await (await page.request.get(`${app.baseUrl}/api/jobs`)).json()) as { items: Job[] };

@@ -1,4 +1,4 @@
-import { useMemo, type RefObject } from 'react';
+import { useDeferredValue, useMemo, useState, type RefObject } from 'react';
 import { Canvas } from '@react-three/fiber';
 import { OrbitControls } from '@react-three/drei';
 import type { Group } from 'three';
@@ -23,8 +23,8 @@ import { SpoolModel } from './SpoolModel';
  * group is handed out through `modelRef` for the glTF export.
  */
 export default function SpoolCanvas({
-  result,
-  design,
+  result: liveResult,
+  design: liveDesign,
   selection,
   view,
   units,
@@ -39,6 +39,12 @@ export default function SpoolCanvas({
   onSelect: (selection: Selection) => void;
   modelRef?: RefObject<Group | null>;
 }) {
+  // The panels (cut list) update in the same moment as the keystroke; the scene follows in
+  // a deferred render so a large model never holds the numbers back.
+  const result = useDeferredValue(liveResult);
+  const design = useDeferredValue(liveDesign);
+  // Html labels follow the camera every frame: hide them while the user orbits.
+  const [orbiting, setOrbiting] = useState(false);
   const bounds = useMemo(() => sceneBounds(result), [result]);
   const cogMm = useMemo(() => (result ? Math.max(30, largestOd(result) * 0.35) : 30), [result]);
   const cog = result?.weights.centreOfGravity ?? null;
@@ -55,7 +61,7 @@ export default function SpoolCanvas({
       <hemisphereLight args={['#ffffff', '#8d9aa7', 1.1]} />
       <directionalLight position={[5, -8, 10]} intensity={1.6} />
       <directionalLight position={[-6, 4, 3]} intensity={0.5} />
-      <OrbitControls makeDefault enableDamping={false} />
+      <OrbitControls makeDefault enableDamping={false} onStart={() => setOrbiting(true)} onEnd={() => setOrbiting(false)} />
       <CameraRig preset={view.preset} nonce={view.presetNonce} bounds={bounds} hasModel={!!result && result.components.length > 0} />
       <PlantGround bounds={bounds} />
       {result ? (
@@ -63,8 +69,8 @@ export default function SpoolCanvas({
           <SpoolModel result={result} selection={selection} onSelect={onSelect} />
         </group>
       ) : null}
-      {result && design ? <DimensionLabels result={result} design={design} labels={view.labels} units={units} /> : null}
-      {result && cog && view.showCentreOfGravity ? (
+      {result && design && !orbiting ? <DimensionLabels result={result} design={design} labels={view.labels} units={units} /> : null}
+      {result && cog && view.showCentreOfGravity && !orbiting ? (
         <CentreOfGravityMarker position={cog} emptyKg={result.weights.emptyKg} sizeMm={cogMm} />
       ) : null}
       {SCENE_STATS_ENABLED ? <SceneStats /> : null}

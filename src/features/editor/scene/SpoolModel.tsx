@@ -1,17 +1,19 @@
 import { memo, useMemo } from 'react';
 import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import type { Selection } from '../model/editor-selection';
-import { ComponentMesh, WorkPointMarker } from './ComponentMesh';
+import { ComponentMesh } from './ComponentMesh';
 import { colourFor } from './component-colour';
+import { InstancedSpheres, type SphereInstance } from './InstancedSpheres';
+import { InstancedWeldRings, type WeldRingInstance } from './InstancedWeldRings';
 import { PipeSegment, pickHandler } from './PipeSegment';
 import { SCENE_COLOURS } from './scene-palette';
 import { flangesById, largestOd, nearestRun, severityById } from './scene-lookups';
 import { SCENE_UNITS_PER_MM } from './scene-units';
-import { WeldRing } from './WeldRing';
 
 /**
  * The spool, true size, from the engine result: pipe pieces, fittings, flanges with bolt
- * holes, work-point markers and weld markers. Pure view: clicks go out through `onSelect`.
+ * holes, work-point markers and weld beads (the last two instanced: one draw call each).
+ * Pure view: clicks go out through `onSelect`.
  */
 export const SpoolModel = memo(function SpoolModel({
   result,
@@ -26,13 +28,31 @@ export const SpoolModel = memo(function SpoolModel({
   const flanges = useMemo(() => flangesById(result), [result]);
   const markerMm = useMemo(() => Math.max(12, largestOd(result) * 0.12), [result]);
   const selectedId = selection?.id ?? null;
-  const runs = useMemo(() => new Map(result.runs.map((r) => [r.runId, r])), [result]);
-  const odByRun = useMemo(() => {
-    const m = new Map<string, number>();
-    for (const p of result.pieces) if (p.odMm) for (const id of p.runIds) m.set(id, p.odMm);
+
+  const markers = useMemo<SphereInstance[]>(
+    () =>
+      result.components.map((c) => {
+        const state = { selected: selectedId === c.nodeId, severity: severity.get(c.nodeId) ?? null };
+        // Bends' work points lie off the pipe (where the centrelines cross): keep them small.
+        const size = (state.selected ? 1.5 : 1) * (c.kind === 'elbow' || c.kind === 'return' ? markerMm * 0.6 : markerMm);
+        return { position: c.position, radiusMm: size, colour: colourFor(state, SCENE_COLOURS.workPoint) };
+      }),
+    [result, selectedId, severity, markerMm],
+  );
+
+  const welds = useMemo<WeldRingInstance[]>(() => {
+    const runs = new Map(result.runs.map((r) => [r.runId, r]));
+    const od = new Map<string, number>();
+    for (const p of result.pieces) if (p.odMm) for (const id of p.runIds) od.set(id, p.odMm);
     // Close-coupled runs have no piece: take the OD from the fitting ends.
-    for (const c of result.components) for (const e of c.ends) if (e.runId && e.odMm && !m.has(e.runId)) m.set(e.runId, e.odMm);
-    return m;
+    for (const c of result.components) for (const e of c.ends) if (e.runId && e.odMm && !od.has(e.runId)) od.set(e.runId, e.odMm);
+    const out: WeldRingInstance[] = [];
+    for (const w of result.welds) {
+      const run = w.runId ? runs.get(w.runId) : undefined;
+      const d = w.runId ? od.get(w.runId) : undefined;
+      if (run && d) out.push({ position: w.position, axis: run.direction, odMm: d, colour: w.location === 'field' ? SCENE_COLOURS.warning : SCENE_COLOURS.weld });
+    }
+    return out;
   }, [result]);
 
   return (
@@ -61,34 +81,25 @@ export const SpoolModel = memo(function SpoolModel({
       {result.components.map((c) => {
         const state = { selected: selectedId === c.nodeId, severity: severity.get(c.nodeId) ?? null };
         const base = c.shape.type === 'flange' ? SCENE_COLOURS.flange : SCENE_COLOURS.fitting;
-        const pick = pickHandler(() => onSelect({ type: 'node', id: c.nodeId }));
         return (
           <group key={c.nodeId} name={`node-${c.nodeId}`}>
-            <ComponentMesh component={c} flange={flanges.get(c.nodeId)} colour={colourFor(state, base)} onClick={pick} />
-            <WorkPointMarker
-              position={c.position}
-              // Bends' work points lie off the pipe (where the centrelines cross): keep them small.
-              sizeMm={(state.selected ? 1.5 : 1) * (c.kind === 'elbow' || c.kind === 'return' ? markerMm * 0.6 : markerMm)}
-              colour={colourFor(state, SCENE_COLOURS.workPoint)}
-              onClick={pick}
+            <ComponentMesh
+              component={c}
+              flange={flanges.get(c.nodeId)}
+              colour={colourFor(state, base)}
+              onClick={pickHandler(() => onSelect({ type: 'node', id: c.nodeId }))}
             />
           </group>
         );
       })}
-      {result.welds.map((w) => {
-        const run = w.runId ? runs.get(w.runId) : undefined;
-        const od = w.runId ? odByRun.get(w.runId) : undefined;
-        if (!run || !od) return null;
-        return (
-          <WeldRing
-            key={w.mark}
-            position={w.position}
-            axis={run.direction}
-            odMm={od}
-            colour={w.location === 'field' ? SCENE_COLOURS.warning : SCENE_COLOURS.weld}
-          />
-        );
-      })}
+      <InstancedSpheres
+        items={markers}
+        onPick={(i) => {
+          const c = result.components[i];
+          if (c) onSelect({ type: 'node', id: c.nodeId });
+        }}
+      />
+      <InstancedWeldRings items={welds} />
     </group>
   );
 });

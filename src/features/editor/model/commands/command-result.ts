@@ -38,5 +38,7 @@ export function done(
     const first = parsed.error.issues[0];
     return fail(`That change would make an invalid design (${first?.path.join('.') ?? ''}: ${first?.message ?? 'invalid'})`);
   }
-  return { ok: true, design: parsed.data, label, ...extra };
+  // Keep the command's own objects (zod's output is a deep copy): unchanged nodes and runs
+  // stay the same objects, so views memoised on them skip work.
+  return { ok: true, design, label, ...extra };
 }
