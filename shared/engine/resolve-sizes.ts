@@ -97,7 +97,8 @@ function expectedSizes(
             node.id,
           );
         }
-        return () => (branchNps && branchNps !== parentNps ? null : parentNps);
+        // Equal tee: the run is the branch's size; reducing: a stated run size, else the main size.
+        return () => (branchNps ? kidsMain : parentNps);
       }
       return (id) => (isBranch(role.branch, id) ? (branchNps ?? base) : base);
     }

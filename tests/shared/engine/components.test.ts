@@ -1,7 +1,19 @@
 import { describe, expect, it } from 'vitest';
 import { computeSpool } from '../../../shared/engine/compute-spool';
 import { setOnBranchReach } from '../../../shared/engine/set-on-branch-geometry';
-import { bevel, design, DOWN, EAST, NORTH, run, SOUTH, UP, wn, WEST } from './helpers/design-builder';
+import {
+  bevel,
+  design,
+  DOWN,
+  EAST,
+  elbow as elbowNode,
+  NORTH,
+  run,
+  SOUTH,
+  UP,
+  wn,
+  WEST,
+} from './helpers/design-builder';
 
 const runOf = (r: ReturnType<typeof computeSpool>, id: string) => r.runs.find((x) => x.runId === id)!;
 const pos = (r: ReturnType<typeof computeSpool>, id: string) =>
@@ -158,6 +170,54 @@ describe('tees, reducers and returns', () => {
       ),
     );
     expect(r.issues.find((i) => i.code === 'angle-not-made')?.componentId).toBe('u1');
+  });
+});
+
+describe('slip-on flanges and tree shapes', () => {
+  it('sets the pipe back from a slip-on face by wall + 3 mm, square cut, with two fillet welds', () => {
+    const r = computeSpool(
+      design(
+        [{ id: 'f1', kind: 'end', end: { type: 'slip-on-flange' } }, bevel('b')],
+        [run('r1', 'f1', 'b', EAST, 1000, 'centre-to-face')],
+        { nps: '6' },
+      ),
+    );
+    // NPS 6 STD wall 7.11 mm (B36.10M); setback = wall + 3 mm (common practice, no source).
+    expect(runOf(r, 'r1').takeOffFromMm).toBeCloseTo(10.11, 6);
+    expect(r.pieces[0]!.cutLengthMm).toBeCloseTo(1000 - 10.11, 6);
+    expect(r.pieces[0]!.ends[0]!.type).toBe('square');
+    expect(r.welds.filter((w) => w.type === 'slip-on-fillet')).toHaveLength(2);
+  });
+
+  it('computes a tree whose root is the branch flange of a tee', () => {
+    const r = computeSpool(
+      design(
+        [wn('f3'), { id: 't1', kind: 'tee', branchNps: '4' }, wn('f1'), wn('f2')],
+        [
+          run('r3', 'f3', 't1', DOWN, 500, 'centre-to-face', { nps: '4' }),
+          run('r1', 't1', 'f1', WEST, 800, 'centre-to-face', { nps: '6' }),
+          run('r2', 't1', 'f2', EAST, 800, 'centre-to-face'),
+        ],
+      ),
+    );
+    expect(r.issues.filter((i) => i.severity === 'error')).toEqual([]);
+    expect(runOf(r, 'r2').nps).toBe('6');
+    expect(pos(r, 'f2').x - pos(r, 'f1').x).toBe(1600);
+    // Reducing tee 6 × 4: run C 143 mm (ASME B16.9 Table 8, as carried in shared/standards).
+    expect(runOf(r, 'r1').takeOffFromMm).toBe(143);
+  });
+
+  it('computes a tree whose root is an elbow', () => {
+    const r = computeSpool(
+      design(
+        [elbowNode('e1'), wn('f1'), wn('f2')],
+        [run('r1', 'e1', 'f1', WEST, 800), run('r2', 'e1', 'f2', NORTH, 800)],
+        { nps: '6' },
+      ),
+    );
+    expect(r.ok).toBe(true);
+    expect(runOf(r, 'r1').takeOffFromMm).toBe(229);
+    expect(r.welds).toHaveLength(4);
   });
 });
 

@@ -121,7 +121,7 @@ describe('computeSpool on bad input', () => {
       (d, k) => ({
         ...d,
         runs: d.runs.map((r, i) =>
-          i === k % d.runs.length ? { ...r, length: { mm: 20, kind: 'centre-to-centre' as const } } : r,
+          i === k % d.runs.length ? { ...r, length: { mm: 1, kind: 'centre-to-centre' as const } } : r,
         ),
       }),
     ],

@@ -34,6 +34,22 @@ describe('pipe weights', () => {
   });
 });
 
+describe('flange weights', () => {
+  // Catalogue weights of Class 150 weld necks, from memory (not a checked source): NPS 6 about
+  // 26 lb (11.8 kg), NPS 10 about 54 lb (24.5 kg). The volume estimate should land within 15 %.
+  it.each([
+    ['6', 11.8],
+    ['10', 24.5],
+  ] as const)('weighs an NPS %s Class 150 weld neck near %f kg (from memory, ±15 %%)', (nps, kg) => {
+    const r = computeSpool(
+      design([wn('f1'), bevel('b', false)], [run('r1', 'f1', 'b', EAST, 500, 'centre-to-face')], { nps }),
+    );
+    const f = r.weights.items.find((i) => i.ref === 'f1')!;
+    expect(f.massKg).toBeGreaterThan(kg * 0.85);
+    expect(f.massKg).toBeLessThan(kg * 1.15);
+  });
+});
+
 describe('fitting weights', () => {
   // 24" STD LR 90°: torus shell 202.6 kg by formula (hiteshsteel weight calculator, exact
   // torus value in shared/reference §8); catalogues give 208.65 kg (cnkpipefitting) and 212 kg.
