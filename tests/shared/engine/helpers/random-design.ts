@@ -14,6 +14,8 @@ type Segment = { angle: number; roll: number; mm: number; kind: 'centre-to-centr
 export type ChainParams = {
   nps: Nps;
   branchNps: Nps | null;
+  /** A reducer in the middle of the last run, to this size. */
+  reducer: { toNps: Nps; eccentric: boolean } | null;
   azimuth: number;
   elevation: number;
   segments: Segment[];
@@ -115,6 +117,29 @@ export function chainDesign(p: ChainParams): SpoolDesign {
         direction: bdir,
         length: { mm: 900, kind: 'centre-to-face' },
         nps: p.branchNps,
+      });
+    } else if (last && p.reducer && s.kind === 'centre-to-centre' && p.segments.length > 1) {
+      // A reducer halfway along the last run (eccentric ones offset the small end's axis).
+      const { toNps, eccentric } = p.reducer;
+      nodes.push({
+        id: 'x1',
+        kind: 'reducer',
+        toNps,
+        ...(eccentric ? { type: 'eccentric' as const, flatSide: 'top' as const } : {}),
+      });
+      runs.push({
+        id: `r${i}a`,
+        from: prev,
+        to: 'x1',
+        direction: dir,
+        length: { mm: s.mm / 2, kind: 'centre-to-centre' },
+      });
+      runs.push({
+        id: `r${i}b`,
+        from: 'x1',
+        to,
+        direction: dir,
+        length: { mm: s.mm / 2, kind: 'centre-to-centre' },
       });
     } else {
       runs.push({ id: `r${i}`, from: prev, to, direction: dir, length });
