@@ -37,6 +37,11 @@ export type ComputeOptions = {
   tolerances?: EngineTolerances;
   /** Skip schema validation: only for designs that already passed `spoolDesignSchema`. */
   trusted?: boolean;
+  /**
+   * Round every number to 4 decimals and check none is non-finite (default true). An editor
+   * that formats numbers itself may pass false on its per-keystroke path.
+   */
+  round?: boolean;
 };
 
 /** Default angle tolerance, degrees. */
@@ -67,7 +72,8 @@ export function computeSpool(design: unknown, options: ComputeOptions = {}): Spo
       }
       parsed = r.data;
     }
-    return roundResult(computeValid(parsed, options));
+    const result = computeValid(parsed, options);
+    return options.round === false ? result : roundResult(result);
   } catch (e) {
     // A bug, not a design problem: keep the caller alive and say so.
     const msg = e instanceof Error ? e.message : String(e);

@@ -13,6 +13,14 @@ describe('samples', () => {
     expect(r.weights.emptyKg).toBeGreaterThan(0);
   });
 
+  it('gives the same numbers unrounded, to within the rounding', () => {
+    const d = load('cw-305-s01-rolling-offset-10in.json');
+    const a = computeSpool(d);
+    const b = computeSpool(d, { round: false });
+    a.pieces.forEach((p, i) => expect(b.pieces[i]!.cutLengthMm!).toBeCloseTo(p.cutLengthMm!, 3));
+    expect(b.weights.emptyKg).toBeCloseTo(a.weights.emptyKg, 3);
+  });
+
   it('CW-201-S03: the close-coupled return is 2 × 533 + 3 mm and the header is one piece past the branch', () => {
     const r = computeSpool(load('cw-201-s03-return-14in.json'));
     expect(r.runs.find((x) => x.runId === 'R3')!.workPointDistanceMm).toBe(1069);
