@@ -139,6 +139,55 @@ describe('spool editor in the browser', () => {
     await page.close();
   });
 
+  it('a detailer loses nothing: a save that fails is kept in the browser, and a conflicting save shows both versions', { timeout: 120_000 }, async () => {
+    await browser.context.clearCookies();
+    const page = await browser.context.newPage();
+    page.on('dialog', (d) => void d.accept());
+    await page.goto(`${app.baseUrl}/`);
+    await signInAs(page, DEMO_USERS.detailer);
+    await page.goto(`${app.baseUrl}/spools/${spoolId}`);
+    await page.locator('[data-testid="cut-list"] tbody tr').nth(2).waitFor();
+
+    // The server cannot be reached for the save: the change stays in this browser across a reload.
+    await page.route('**/api/spools/*/draft', (route) => (route.request().method() === 'PUT' ? route.abort() : route.continue()));
+    await page.locator('[data-testid="cut-list"] tbody tr[data-piece="P2"]').click();
+    const heat = page.getByTestId('run-properties').getByLabel('Heat number');
+    await heat.fill('H-7731');
+    await heat.press('Tab');
+    await page.locator('[data-testid="save-status"][data-status="error"]').waitFor({ timeout: 15_000 });
+    await page.unroute('**/api/spools/*/draft');
+    await page.reload();
+    await page.getByText('Restored unsaved changes from this browser').waitFor();
+    await waitSaved(page);
+    const heatOnScreen = await page.locator('[data-testid="cut-list"] tbody tr[data-piece="P2"] td').last().textContent();
+    expect(heatOnScreen).toBe('H-7731');
+
+    // Someone else saves the draft meanwhile (another tab, another detailer).
+    const spool = (await (await page.request.get(`${app.baseUrl}/api/spools/${spoolId}`)).json()) as Spool;
+    const stored = (await (await page.request.get(`${app.baseUrl}/api/spools/${spoolId}/revisions/${spool.draft!.id}`)).json()) as Revision;
+    const theirs = structuredClone(stored.design) as { runs: { length: { mm: number } }[] };
+    theirs.runs[0]!.length.mm = 700;
+    const other = await page.request.put(`${app.baseUrl}/api/spools/${spoolId}/draft`, { data: { design: theirs, version: stored.version } });
+    expect(other.status()).toBe(200);
+
+    // This browser's next change meets the conflict: both versions shown, nothing lost.
+    await page.locator('[data-testid="cut-list"] tbody tr[data-piece="P3"]').click();
+    const heat3 = page.getByTestId('run-properties').getByLabel('Heat number');
+    await heat3.fill('H-5120');
+    await heat3.press('Tab');
+    const dialog = page.getByRole('dialog', { name: 'Someone else saved this draft' });
+    await dialog.waitFor({ timeout: 15_000 });
+    await saveScreenshot(page, 'editor-06-conflict');
+    await dialog.getByRole('button', { name: 'Keep mine (save over it)' }).click();
+    await waitSaved(page);
+    const after = (await (await page.request.get(`${app.baseUrl}/api/spools/${spoolId}/revisions/${spool.draft!.id}`)).json()) as Revision;
+    const design = after.design as { runs: { length: { mm: number }; heat?: string }[] };
+    expect(design.runs[0]!.length.mm).toBe(800);
+    expect(design.runs.map((r) => r.heat).filter(Boolean).sort()).toEqual(['H-5120', 'H-7731']);
+    await signOut(page);
+    await page.close();
+  });
+
   it('a fabricator and a viewer get a read-only editor, and the API refuses their saves', { timeout: 90_000 }, async () => {
     for (const who of ['fabricator', 'viewer'] as const) {
       await browser.context.clearCookies();

@@ -54,6 +54,7 @@ export default function SpoolEditor({ spoolId, readOnly }: { spoolId: string; re
   const createDraft = useCreateDraft(spoolId);
   const issue = useIssueDraft(spoolId);
   const [issueOpen, setIssueOpen] = useState(false);
+  const [conflictLater, setConflictLater] = useState(false);
 
   useEffect(() => model.setCompute(compute), [model, compute]);
   useEffect(() => model.setReadOnly(!editing), [model, editing]);
@@ -131,9 +132,15 @@ export default function SpoolEditor({ spoolId, readOnly }: { spoolId: string; re
       <span className={autosave.status === 'conflict' || autosave.status === 'error' ? 'text-sm font-semibold text-danger-700' : 'text-sm text-steel-600'} data-testid="save-status" data-status={autosave.status}>
         {SAVE_WORDS[autosave.status]}
       </span>
-      <PanelButton onClick={() => void autosave.saveNow()} disabled={autosave.status === 'saved' || autosave.status === 'saving' || autosave.status === 'conflict'}>
-        Save now
-      </PanelButton>
+      {autosave.status === 'conflict' ? (
+        <PanelButton tone="primary" onClick={() => setConflictLater(false)}>
+          Choose a version
+        </PanelButton>
+      ) : (
+        <PanelButton onClick={() => void autosave.saveNow()} disabled={autosave.status === 'saved' || autosave.status === 'saving'}>
+          Save now
+        </PanelButton>
+      )}
       <PanelButton tone="primary" onClick={() => setIssueOpen(true)}>
         Issue revision {draftRef?.letter ?? ''}
       </PanelButton>
@@ -144,8 +151,15 @@ export default function SpoolEditor({ spoolId, readOnly }: { spoolId: string; re
     <>
       {loadProblem ? <p className="mb-2 rounded-md bg-danger-50 p-2 text-sm text-danger-700">{loadProblem}</p> : null}
       <EditorWorkspace model={model} units={units} banner={banner} actions={actions} defaultNps={null} />
-      {autosave.conflict ? (
-        <ConflictDialog conflict={autosave.conflict} compute={compute} units={units} onKeepMine={() => void autosave.keepMine()} onTakeTheirs={autosave.takeTheirs} />
+      {autosave.conflict && !conflictLater ? (
+        <ConflictDialog
+          conflict={autosave.conflict}
+          compute={compute}
+          units={units}
+          onKeepMine={() => void autosave.keepMine()}
+          onTakeTheirs={autosave.takeTheirs}
+          onLater={() => setConflictLater(true)}
+        />
       ) : null}
       <IssueRevisionDialog
         open={issueOpen}

@@ -8,7 +8,21 @@ import type { DraftConflict } from '../hooks/use-draft-autosave';
 import { designToJson, downloadBlob, fileNameFor } from '../io/design-file';
 import { PanelButton } from './panel-bits';
 
-function Summary({ title, design, result, units, note }: { title: string; design: SpoolDesign | null; result: SpoolResult | null; units: LengthUnits; note: string }) {
+function Summary({
+  title,
+  design,
+  result,
+  other,
+  units,
+  note,
+}: {
+  title: string;
+  design: SpoolDesign | null;
+  result: SpoolResult | null;
+  other: SpoolResult | null;
+  units: LengthUnits;
+  note: string;
+}) {
   return (
     <section className="flex flex-col gap-1 rounded-md border border-steel-200 p-3">
       <h3 className="text-lg font-semibold">{title}</h3>
@@ -19,11 +33,18 @@ function Summary({ title, design, result, units, note }: { title: string; design
             {design.nodes.length} components, {design.runs.length} runs, {result.pieces.length} pieces, {result.welds.length} welds
           </p>
           <ul className="font-mono text-xs">
-            {result.pieces.map((p) => (
-              <li key={p.mark}>
-                {p.mark} NPS {p.nps}: {p.cutLengthMm === null ? 'impossible' : formatLength(p.cutLengthMm, units)}
-              </li>
-            ))}
+            {result.pieces.map((p) => {
+              // Pieces whose cut differs between the versions stand out.
+              const twin = other?.pieces.find((o) => o.mark === p.mark);
+              const differs = !twin || twin.cutLengthMm !== p.cutLengthMm || twin.nps !== p.nps || twin.heat !== p.heat;
+              return (
+                <li key={p.mark} className={differs ? 'font-bold text-spark-700' : ''}>
+                  {p.mark} NPS {p.nps}: {p.cutLengthMm === null ? 'impossible' : formatLength(p.cutLengthMm, units)}
+                  {p.heat ? ` · heat ${p.heat}` : ''}
+                  {differs ? ' (differs)' : ''}
+                </li>
+              );
+            })}
           </ul>
         </>
       ) : (
@@ -43,25 +64,28 @@ export function ConflictDialog({
   units,
   onKeepMine,
   onTakeTheirs,
+  onLater,
 }: {
   conflict: DraftConflict;
   compute: (d: SpoolDesign) => SpoolResult;
   units: LengthUnits;
   onKeepMine: () => void;
   onTakeTheirs: () => void;
+  /** Closes the dialog without choosing; the editor keeps both and autosave waits. */
+  onLater: () => void;
 }) {
   const mine = useMemo(() => compute(conflict.mine), [compute, conflict.mine]);
   const theirs = useMemo(() => (conflict.theirsDesign ? compute(conflict.theirsDesign) : null), [compute, conflict.theirsDesign]);
   return (
-    <Dialog open onClose={() => undefined} title="Someone else saved this draft" size="lg">
+    <Dialog open onClose={onLater} title="Someone else saved this draft" size="lg">
       <div className="flex flex-col gap-3">
         <p className="text-sm text-ink-800">
           {conflict.theirs.author.displayName} saved the draft at {formatDateTime(conflict.theirs.updatedAt)} while you were editing. Nothing of yours has been
           lost: choose which version carries on.
         </p>
         <div className="grid gap-3 sm:grid-cols-2">
-          <Summary title="Yours (this browser)" design={conflict.mine} result={mine} units={units} note="Not saved yet; kept in this browser." />
-          <Summary title="Stored" design={conflict.theirsDesign} result={theirs} units={units} note={`Version ${conflict.theirs.version}, saved by ${conflict.theirs.author.displayName}`} />
+          <Summary title="Yours (this browser)" design={conflict.mine} result={mine} other={theirs} units={units} note="Not saved yet; kept in this browser." />
+          <Summary title="Stored" design={conflict.theirsDesign} result={theirs} other={mine} units={units} note={`Version ${conflict.theirs.version}, saved by ${conflict.theirs.author.displayName}`} />
         </div>
         <div className="flex flex-wrap justify-end gap-2">
           <PanelButton onClick={() => downloadBlob(designToJson(conflict.mine), 'application/json', fileNameFor(conflict.mine.mark, 'mine.json'))}>Download mine</PanelButton>
