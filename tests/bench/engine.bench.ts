@@ -111,6 +111,13 @@ describe('computeSpool', () => {
     OPTIONS,
   );
   bench(
+    '200-component spool (trusted, unrounded: the editor path)',
+    () => {
+      computeSpool(bigParsed, { trusted: true, round: false });
+    },
+    OPTIONS,
+  );
+  bench(
     '500-spool job (the samples, cycled)',
     () => {
       for (const d of job) computeSpool(d);
