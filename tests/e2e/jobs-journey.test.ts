@@ -231,6 +231,13 @@ describe('jobs and spools in the browser', () => {
     await page.getByRole('button', { name: 'Mark fitted up' }).waitFor();
     await page.getByText('Cut', { exact: true }).first().waitFor();
     await saveScreenshot(page, '19-spool-cut');
+
+    // The foreman's question, "what is cut?": the job's table filtered by status.
+    await page.getByRole('navigation', { name: 'Breadcrumb' }).getByRole('link', { name: DEMO_JOB }).click();
+    await page.getByLabel('Status', { exact: true }).selectOption('cut');
+    await page.waitForURL(/status=cut/);
+    await page.locator('tbody tr').first().filter({ hasText: ISSUE_MARK }).waitFor();
+    await expect(page.locator('tbody tr').count()).resolves.toBe(1);
     await page.close();
   });
 
@@ -241,6 +248,19 @@ describe('jobs and spools in the browser', () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Users' }).click();
     await page.getByRole('row').filter({ hasText: 'Anselm Tarrow' }).waitFor();
     await saveScreenshot(page, '13-users-admin');
+
+    // A new fabricator joins: added with a first password, listed at once.
+    await page.getByRole('button', { name: 'Add user' }).click();
+    const addUser = page.getByRole('dialog', { name: 'Add a user' });
+    await addUser.getByLabel('Name').fill('Tamsin Oakridge');
+    await addUser.getByLabel('E-mail').fill('tamsin@kestrel.example');
+    await addUser.getByLabel('First password').fill('short');
+    await addUser.getByRole('button', { name: 'Add user' }).click();
+    await addUser.getByText('Use at least 10 characters').waitFor();
+    await addUser.getByLabel('First password').fill('bevel-and-land-2026');
+    await addUser.getByRole('button', { name: 'Add user' }).click();
+    await addUser.waitFor({ state: 'hidden' });
+    await page.getByRole('row').filter({ hasText: 'Tamsin Oakridge' }).filter({ hasText: 'tamsin@kestrel.example' }).waitFor();
 
     // Archiving takes a job out of the default list; the "Archived" filter still finds it.
     const created = await page.request.post(`${app.baseUrl}/api/jobs`, {

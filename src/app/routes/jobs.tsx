@@ -1,4 +1,4 @@
-import { useNavigate, useSearchParams } from 'react-router';
+import { useNavigate } from 'react-router';
 import { EmptyState } from '../../components/ui/EmptyState';
 import { ErrorState } from '../../components/ui/ErrorState';
 import { PageHeader } from '../../components/ui/PageHeader';
@@ -10,7 +10,9 @@ import { can } from '../../features/auth/permissions';
 import { useJobs } from '../../features/jobs/api/get-jobs';
 import { CreateJobDialog } from '../../features/jobs/components/CreateJobDialog';
 import { JobsTable } from '../../features/jobs/components/JobsTable';
-import { JOB_SORT_FIELDS, jobStatusSchema, type JobStatus } from '../../../shared/schemas/job.schema';
+import { JOB_SORT_FIELDS, jobStatusSchema } from '../../../shared/schemas/job.schema';
+import { FilterSelect } from '../../components/ui/FilterSelect';
+import { useSearchParam } from '../../lib/use-search-param';
 import { jobStatusDisplay } from '../../features/jobs/components/JobStatusBadge';
 import { useListSearchParams } from '../../lib/use-list-search-params';
 
@@ -26,9 +28,7 @@ export function Component() {
   const user = useCurrentUser();
   const navigate = useNavigate();
   const { state, update, toggleSort } = useListSearchParams(JOB_SORT_FIELDS, DEFAULT_SORT);
-  const [params, setParams] = useSearchParams();
-  const statusParam = params.get('status');
-  const status = jobStatusSchema.safeParse(statusParam).success ? (statusParam as JobStatus) : undefined;
+  const [status, setStatus] = useSearchParam('status', jobStatusSchema.options);
   const jobs = useJobs({
     page: state.page,
     pageSize: PAGE_SIZE,
@@ -37,17 +37,6 @@ export function Component() {
     q: state.q || undefined,
     status,
   });
-  const setStatus = (value: string) =>
-    setParams(
-      (prev) => {
-        const next = new URLSearchParams(prev);
-        if (value) next.set('status', value);
-        else next.delete('status');
-        next.delete('page');
-        return next;
-      },
-      { replace: true },
-    );
   const mayCreate = can.manageJobs(user.role);
 
   return (
@@ -55,20 +44,7 @@ export function Component() {
       <PageHeader eyebrow={user.organisation.name} title="Jobs" actions={mayCreate ? <CreateJobDialog /> : null} />
       <div className="flex flex-wrap items-center gap-3">
         <SearchBox label="Search jobs" placeholder="Search number, title, client" value={state.q} onChange={(q) => update({ q, page: 1 })} />
-        <label className="flex items-center gap-2 text-sm font-semibold text-ink-800">
-          Show
-          <select
-            value={status ?? ''}
-            onChange={(e) => setStatus(e.target.value)}
-            className="min-h-11 rounded-md border border-steel-300 bg-white px-3 text-sm font-normal"
-          >
-            {STATUS_FILTERS.map((o) => (
-              <option key={o.value} value={o.value}>
-                {o.label}
-              </option>
-            ))}
-          </select>
-        </label>
+        <FilterSelect label="Show" value={status ?? ''} onChange={setStatus} options={STATUS_FILTERS} />
       </div>
       {jobs.isPending ? (
         <LoadingBlock label="Loading jobs…" />

@@ -1,6 +1,10 @@
 import { useNavigate } from 'react-router';
 import type { Job } from '../../../../shared/schemas/job.schema';
 import { SPOOL_SORT_FIELDS } from '../../../../shared/schemas/spool.schema';
+import { spoolStatusSchema } from '../../../../shared/schemas/spool-status.schema';
+import { FilterSelect } from '../../../components/ui/FilterSelect';
+import { useSearchParam } from '../../../lib/use-search-param';
+import { spoolStatusDisplay } from './spool-status-labels';
 import { EmptyState } from '../../../components/ui/EmptyState';
 import { ErrorState } from '../../../components/ui/ErrorState';
 import { Pagination } from '../../../components/ui/Pagination';
@@ -13,12 +17,18 @@ import { SpoolsTable } from './SpoolsTable';
 
 const PAGE_SIZE = 20;
 const DEFAULT_SORT = { sort: 'mark', order: 'asc' } as const;
+const STATUS_FILTERS = [
+  { value: '', label: 'Every status' },
+  ...spoolStatusSchema.options.map((s) => ({ value: s, label: spoolStatusDisplay[s].label })),
+];
 
 /** A job's spools: search, sortable table, pages, and "new spool" for those allowed. */
 export function JobSpoolsSection({ job, mayCreate }: { job: Job; mayCreate: boolean }) {
   const navigate = useNavigate();
   const { state, update, toggleSort } = useListSearchParams(SPOOL_SORT_FIELDS, DEFAULT_SORT);
+  const [status, setStatus] = useSearchParam('status', spoolStatusSchema.options);
   const spools = useJobSpools(job.id, {
+    status,
     page: state.page,
     pageSize: PAGE_SIZE,
     sort: state.sort,
@@ -35,14 +45,19 @@ export function JobSpoolsSection({ job, mayCreate }: { job: Job; mayCreate: bool
         </h2>
         {createButton}
       </div>
-      <SearchBox label="Search spools" placeholder="Search mark or line" value={state.q} onChange={(q) => update({ q, page: 1 })} />
+      <div className="flex flex-wrap items-center gap-3">
+        <SearchBox label="Search spools" placeholder="Search mark or line" value={state.q} onChange={(q) => update({ q, page: 1 })} />
+        <FilterSelect label="Status" value={status ?? ''} onChange={setStatus} options={STATUS_FILTERS} />
+      </div>
       {spools.isPending ? (
         <LoadingBlock label="Loading spools…" />
       ) : spools.isError ? (
         <ErrorState error={spools.error} onRetry={() => void spools.refetch()} />
       ) : spools.data.items.length === 0 ? (
-        state.q ? (
-          <EmptyState title="No spool matches">Nothing matches “{state.q}”.</EmptyState>
+        state.q || status ? (
+          <EmptyState title="No spool matches">
+            {state.q ? `Nothing matches “${state.q}”.` : `No spool is ${spoolStatusDisplay[status!].label.toLowerCase()}.`}
+          </EmptyState>
         ) : (
           <EmptyState title="No spools in this job yet" action={createButton}>
             {mayCreate
