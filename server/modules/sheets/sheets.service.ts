@@ -13,6 +13,7 @@ import type { JobService } from '../jobs/job.service';
 import type { RevisionService } from '../revisions/revision.service';
 import { SpoolEntity } from '../spools/spool.entity';
 import type { SpoolService } from '../spools/spool.service';
+import { revisionChanges, type RevisionChanges } from './pdf/revision-changes';
 import { renderSawList, type SawListSpool } from './pdf/saw-list';
 import type { RevisionHistoryEntry, SheetHeader } from './pdf/sheet-header';
 import { renderSpoolSheet } from './pdf/spool-sheet';
@@ -93,7 +94,15 @@ export class SheetsService {
       spoolUrl: `${this.publicUrl.replace(/\/+$/, '')}/spools/${spool.id}`,
       printedAt: this.now(),
     };
-    const out = await renderSpoolSheet({ header, design, result, units: job.units, paper: query.paper });
+    const changes = await this.changesSincePrevious(actor, spool.id, history, revision, result, job);
+    const out = await renderSpoolSheet({
+      header,
+      design,
+      result,
+      units: job.units,
+      paper: query.paper,
+      changes,
+    });
     return {
       pdf: out.pdf,
       filename: `${spool.mark}-rev-${revision.letter}${revision.state === 'issued' ? '' : `-${revision.state}`}.pdf`,
@@ -138,6 +147,28 @@ export class SheetsService {
       printedAt: this.now(),
     });
     return { pdf: out.pdf, filename: `${job.number}-saw-list.pdf` };
+  }
+
+  /**
+   * What changed since the issued revision before the printed one (for a draft: the latest
+   * issued). Null for a first revision, or when the older design no longer reads.
+   */
+  private async changesSincePrevious(
+    actor: SessionActor,
+    spoolId: string,
+    history: RevisionSummary[],
+    printed: Revision,
+    result: SpoolResult,
+    job: Job,
+  ): Promise<RevisionChanges | null> {
+    const at = history.findIndex((r) => r.id === printed.id);
+    const previous = history.slice(at + 1).find((r) => r.state !== 'draft');
+    if (!previous) return null;
+    const older = await this.revisions.get(actor, spoolId, previous.id);
+    const parsed = spoolDesignSchema.safeParse(older.design);
+    if (!parsed.success) return null;
+    const before = computeSpool(parsed.data, { jobSpec: jobSpecOverrides(job), trusted: true });
+    return revisionChanges(before, result, job.units, previous.letter, printed.letter);
   }
 
   private compute(revision: Revision, job: Job): { design: SpoolDesign; result: SpoolResult } {

@@ -26,6 +26,8 @@ export interface IsoDrawingInput {
   sizes: TypeSizes;
   /** Sheet tag per flange node ("F1"), matching the flange orientation details. */
   flangeTags: Map<string, string>;
+  /** Runs changed since the previous issued revision, marked with a revision triangle. */
+  revisionMark?: { letter: string; runs: Set<string> } | null;
 }
 
 const SMALL = new Set(['1/2', '3/4', '1', '1-1/4', '1-1/2']);
@@ -108,7 +110,9 @@ export function drawIsometric(
     const length = run.workPointDistanceMm;
     if (!(length > 0.05)) continue;
     const text = formatLength(length, units);
-    placeDimension(doc, view, placer, run.start, run.end, text, dimSize, centroid, [20, 35, 50]);
+    const box = placeDimension(doc, view, placer, run.start, run.end, text, dimSize, centroid, [20, 35, 50]);
+    if (input.revisionMark?.runs.has(run.runId))
+      revisionTriangle(doc, placer, box, input.revisionMark.letter, sizes.small);
     printed.push({ kind: 'run', ref: run.runId, mm: length, text });
     printed.push(
       ...drawOffsetLegs(doc, view, placer, run.runId, run.start, run.end, units, sizes.small, centroid),
@@ -358,7 +362,7 @@ function placeDimension(
   centroid: PagePoint,
   distances: number[],
   color?: string,
-): void {
+): { centre: PagePoint; width: number; height: number } {
   const a = view.project(from);
   const b = view.project(to);
   const dir = normalise(sub(to, from));
@@ -400,7 +404,42 @@ function placeDimension(
         p.i - q.i,
     );
   const chosen = stable[placer.place(stable.map((c) => c.box))]!;
-  drawDimension(doc, a, b, chosen.offset, text, { size, color });
+  return drawDimension(doc, a, b, chosen.offset, text, { size, color });
+}
+
+/** A revision triangle with the revision letter, beside a changed dimension. */
+function revisionTriangle(
+  doc: PDFKit.PDFDocument,
+  placer: LabelPlacer,
+  box: { centre: PagePoint; width: number; height: number },
+  letter: string,
+  size: number,
+): void {
+  const side = size * 1.9;
+  const h = (side * Math.sqrt(3)) / 2;
+  const spots = [
+    { x: box.centre.x + box.width / 2 + side * 0.7, y: box.centre.y },
+    { x: box.centre.x - box.width / 2 - side * 0.7, y: box.centre.y },
+    { x: box.centre.x, y: box.centre.y - box.height / 2 - h * 0.7 },
+    { x: box.centre.x, y: box.centre.y + box.height / 2 + h * 0.7 },
+  ];
+  const c = spots[placer.place(spots.map((p) => ({ x: p.x - side / 2, y: p.y - h / 2, w: side, h })))]!;
+  doc.save();
+  doc
+    .lineWidth(1)
+    .moveTo(c.x, c.y - h / 2)
+    .lineTo(c.x + side / 2, c.y + h / 2)
+    .lineTo(c.x - side / 2, c.y + h / 2)
+    .closePath()
+    .fillAndStroke('#ffffff', INK.warn);
+  doc.restore();
+  drawText(doc, letter, c.x - side / 2, c.y - size * 0.2, {
+    font: 'cond-bold',
+    size: size * 0.85,
+    width: side,
+    align: 'center',
+    color: INK.warn,
+  });
 }
 
 function closest(distances: number[], off: PagePoint): number {

@@ -3,6 +3,7 @@ import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
 import { flangeDetailsBlock, flangePairsBlock } from './flange-details';
 import { flowBlocks, type FlowBlock } from './flow-layout';
+import { paragraphBlock } from './paragraph-block';
 import { drawIsometric, type PrintedDimension } from './iso-drawing';
 import type { PaperSize, Rect } from './page-setup';
 import type { SheetHeader } from './sheet-header';
@@ -10,6 +11,7 @@ import { SheetDocument, type DocumentMarks } from './sheet-document';
 import { INK, typeSizes } from './sheet-style';
 import { bomBlock, cutListBlock, overallBlock, weldListBlock } from './tables';
 import { templateFigures } from './template-figures';
+import type { RevisionChanges } from './revision-changes';
 import { drawTemplatePages, type TemplatePagesReport } from './templates-pages';
 import { formatSheetDate, type TitleBlockFields } from './title-block';
 import { cautionsBlock, issuesBlock, notesBlock, weightsBlock } from './weights-notes';
@@ -21,6 +23,8 @@ export interface SpoolSheetInput {
   result: SpoolResult;
   units: LengthUnits;
   paper: PaperSize;
+  /** Differences from the previous issued revision, when there is one. */
+  changes?: RevisionChanges | null;
 }
 
 /** The PDF and what it printed, so tests and callers can check it against the engine. */
@@ -111,7 +115,14 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
   const crowded = result.runs.length + result.welds.length > (large ? 36 : 24);
   const drawingW = crowded ? area.w : area.w * (large ? 0.6 : 0.56);
   const drawing: Rect = { x: area.x, y: top, w: drawingW, h: area.y + area.h - top };
-  const dimensions = drawIsometric(doc, drawing, { result, units, sizes, flangeTags });
+  const changes = input.changes ?? null;
+  const dimensions = drawIsometric(doc, drawing, {
+    result,
+    units,
+    sizes,
+    flangeTags,
+    revisionMark: changes ? { letter: changes.markLetter, runs: changes.changedRuns } : null,
+  });
   if (!crowded)
     doc
       .save()
@@ -128,8 +139,28 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
   const blocks: FlowBlock[] = [];
   const issues = issuesBlock(result, sizes.body);
   if (issues) blocks.push(issues);
+  if (changes) {
+    blocks.push(
+      paragraphBlock({
+        title: `Changed since revision ${changes.sinceLetter}`,
+        paragraphs:
+          changes.lines.length > 0
+            ? changes.lines
+            : ['No change to any cut length, run, flange or weld count.'],
+        size: sizes.body,
+        list: 'bullet',
+      }),
+    );
+  }
   blocks.push(weightsBlock(result, units, rootDatum(design, result), tableSize));
-  blocks.push(cutListBlock(result, units, tableSize));
+  blocks.push(
+    cutListBlock(
+      result,
+      units,
+      tableSize,
+      changes ? { letter: changes.markLetter, pieces: changes.changedPieces } : null,
+    ),
+  );
   blocks.push(weldListBlock(result, tableSize));
   if (result.flanges.length > 0)
     blocks.push(flangeDetailsBlock(result.flanges, flangeTags, units, tableSize));

@@ -1,5 +1,6 @@
 import type { Rect } from './page-setup';
 import { INK } from './sheet-style';
+import { printable } from './text';
 
 /** A mark that tells the bay a sheet must not be built from as it stands. */
 export type SheetStamp = 'DRAFT' | 'SUPERSEDED' | 'NOT FOR FABRICATION';
@@ -15,6 +16,7 @@ export function drawDiagonalStamp(doc: PDFKit.PDFDocument, area: Rect, text: str
   const diagonal = Math.hypot(area.w, area.h);
   doc.save();
   doc.font('cond-bold');
+  text = printable(doc, text);
   // Size the letters to ~75% of the diagonal.
   let size = 200;
   doc.fontSize(size);
@@ -38,7 +40,11 @@ export function drawWarningBand(doc: PDFKit.PDFDocument, area: Rect, text: strin
   doc.save();
   doc.rect(area.x, area.y, area.w, h).fill(INK.warn);
   doc.font('cond-bold').fontSize(size).fillColor('#ffffff');
-  doc.text(text, area.x + 6, area.y + 4.5, { width: area.w - 12, align: 'center', lineBreak: false });
+  doc.text(printable(doc, text), area.x + 6, area.y + 4.5, {
+    width: area.w - 12,
+    align: 'center',
+    lineBreak: false,
+  });
   doc.restore();
   return h;
 }

@@ -23,7 +23,12 @@ const len = (mm: number | null, units: LengthUnits): string =>
   mm === null ? 'NOT COMPUTED' : formatLength(mm, units);
 
 /** Cut list: one row per pipe piece with size, schedule, material, cut length and end preparations. */
-export function cutListBlock(result: SpoolResult, units: LengthUnits, size: number): FlowBlock {
+export function cutListBlock(
+  result: SpoolResult,
+  units: LengthUnits,
+  size: number,
+  revisionMark: { letter: string; pieces: Set<string> } | null = null,
+): FlowBlock {
   const rows: TableRow[] = result.pieces.map((p) => {
     const notes: string[] = [];
     if (p.shortPointLengthMm !== null) notes.push(`short point ${formatLength(p.shortPointLengthMm, units)}`);
@@ -39,14 +44,24 @@ export function cutListBlock(result: SpoolResult, units: LengthUnits, size: numb
         len(p.cutLengthMm, units),
         `${p.ends[0].label} / ${p.ends[1].label}`,
         notes.join('; '),
+        ...(revisionMark ? [revisionMark.pieces.has(p.mark) ? revisionMark.letter : ''] : []),
       ],
-      emphasis: p.cutLengthMm === null ? 'warn' : undefined,
+      emphasis: p.cutLengthMm === null ? 'warn' : revisionMark?.pieces.has(p.mark) ? 'group' : undefined,
     };
   });
   const total = result.pieces.reduce((s, p) => s + (p.cutLengthMm ?? 0), 0);
   if (rows.length > 1)
     rows.push({
-      cells: ['Total', '', '', '', formatLength(total, units), `${rows.length} pieces`, ''],
+      cells: [
+        'Total',
+        '',
+        '',
+        '',
+        formatLength(total, units),
+        `${rows.length} pieces`,
+        '',
+        ...(revisionMark ? [''] : []),
+      ],
       emphasis: 'total',
     });
   return tableBlock({
@@ -60,9 +75,12 @@ export function cutListBlock(result: SpoolResult, units: LengthUnits, size: numb
       { header: 'Cut length', weight: 1.5, align: 'right', font: 'body-bold' },
       { header: 'End preps (start / end)', weight: 2.6, wrap: true },
       { header: 'Notes', weight: 1.9, wrap: true },
+      ...(revisionMark
+        ? [{ header: 'Rev', weight: 0.45, align: 'center' as const, font: 'body-bold' as const }]
+        : []),
     ],
     rows,
-    footnote: `Cut length = work point distance − fitting take-offs − ${formatLength(result.spec.rootGapMm, units)} root gap per butt weld. Saw kerf (${formatLength(result.spec.sawKerfMm, units)}) is not included: see the job saw list.`,
+    footnote: `${revisionMark ? `Rev ${revisionMark.letter}: changed in this revision. ` : ''}Cut length = work point distance − fitting take-offs − ${formatLength(result.spec.rootGapMm, units)} root gap per butt weld. Saw kerf (${formatLength(result.spec.sawKerfMm, units)}) is not included: see the job saw list.`,
   });
 }
 

@@ -12,6 +12,40 @@ export interface TextStyle {
   lineGap?: number;
 }
 
+// Stand-ins for characters the sheet fonts lack (engine messages and user text may hold them):
+// a missing glyph prints as an empty box, which on a cut sheet reads as a smudge.
+const FALLBACKS: Record<string, string> = {
+  '→': '->',
+  '←': '<-',
+  '↔': '<->',
+  '≥': '>=',
+  '≤': '<=',
+  '≠': '!=',
+  '±': '+/-',
+  '✓': 'OK',
+  '✔': 'OK',
+  '✗': 'x',
+  '⌀': 'dia. ',
+  Ø: 'dia. ',
+  '∠': 'angle ',
+  Δ: 'delta ',
+};
+
+type GlyphFont = { font?: { hasGlyphForCodePoint?: (cp: number) => boolean } };
+
+/** Replaces characters the current font cannot draw with plain stand-ins (or "?"). */
+export function printable(doc: PDFKit.PDFDocument, value: string): string {
+  const font = (doc as unknown as { _font?: GlyphFont })._font?.font;
+  if (!font?.hasGlyphForCodePoint) return value;
+  let out = '';
+  for (const ch of value) {
+    const cp = ch.codePointAt(0)!;
+    if (cp < 0x80 || font.hasGlyphForCodePoint(cp)) out += ch;
+    else out += FALLBACKS[ch] ?? '?';
+  }
+  return out;
+}
+
 /** Writes text with its top at (x, y); returns the height used. One line unless `wrap`. */
 export function drawText(
   doc: PDFKit.PDFDocument,
@@ -24,6 +58,7 @@ export function drawText(
     .font(style.font ?? 'body')
     .fontSize(style.size)
     .fillColor(style.color ?? INK.text);
+  value = printable(doc, value);
   const options: PDFKit.Mixins.TextOptions = {
     width: style.width,
     align: style.align ?? 'left',
@@ -48,7 +83,7 @@ export function measureWrapped(
   style: TextStyle,
 ): number {
   doc.font(style.font ?? 'body').fontSize(style.size);
-  return doc.heightOfString(value, { width, lineGap: style.lineGap ?? 0 });
+  return doc.heightOfString(printable(doc, value), { width, lineGap: style.lineGap ?? 0 });
 }
 
 /** Width of a one-line string in a style. */
