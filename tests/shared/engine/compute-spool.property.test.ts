@@ -106,6 +106,86 @@ describe('computeSpool on bad input', () => {
     );
   });
 
+  // Random graphs of random components: mostly nonsense, always answered with issues.
+  const nodeArb = (id: string) =>
+    fc.oneof(
+      fc.constant({ id, kind: 'end', end: { type: 'weld-neck-flange' } }),
+      fc.constant({ id, kind: 'end', end: { type: 'bevel' } }),
+      fc.constant({ id, kind: 'end', end: { type: 'cap' } }),
+      fc.constant({ id, kind: 'elbow', construction: 'mitre', mitreWelds: 3 }),
+      fc.constant({ id, kind: 'elbow', radius: 'short' }),
+      fc.record({
+        id: fc.constant(id),
+        kind: fc.constant('return'),
+        offsetDirection: fc.constant({ x: 0, y: 0, z: 1 }),
+      }),
+      fc.constant({ id, kind: 'tee', branchNps: '4' }),
+      fc.constant({ id, kind: 'set-on-branch' }),
+      fc.constant({ id, kind: 'half-coupling', branchNps: '1', orientationDeg: 45 }),
+      fc.constant({ id, kind: 'branch-outlet', branchNps: '2', outletEnd: 'socket', heightMm: 40 }),
+      fc.constant({ id, kind: 'reducer', toNps: '4', type: 'eccentric' }),
+      fc.constant({ id, kind: 'socket-fitting' }),
+    );
+  const dirArb = fc.oneof(
+    fc.constantFrom(
+      { x: 1, y: 0, z: 0 },
+      { x: 0, y: 1, z: 0 },
+      { x: 0, y: 0, z: -1 },
+      { x: -1, y: 0, z: 0 },
+      { x: 1, y: 1, z: 0 },
+    ),
+    fc.record({
+      x: fc.double({ min: -1, max: 1, noNaN: true }),
+      y: fc.double({ min: -1, max: 1, noNaN: true }),
+      z: fc.constant(0.5),
+    }),
+  );
+  const graphArb = fc.integer({ min: 1, max: 9 }).chain((n) =>
+    fc.record({
+      nodes: fc.tuple(...Array.from({ length: n }, (_, i) => nodeArb(`n${i}`))),
+      runs: fc.array(
+        fc.record({
+          from: fc.integer({ min: 0, max: n - 1 }),
+          to: fc.integer({ min: 0, max: n - 1 }),
+          direction: dirArb,
+          mm: fc.double({ min: 0, max: 5000, noNaN: true }),
+          kind: fc.constantFrom('centre-to-centre', 'centre-to-face', 'face-to-face', 'cut'),
+          nps: fc.option(fc.constantFrom('1', '2', '4', '6', '24'), { nil: undefined }),
+        }),
+        { maxLength: 10 },
+      ),
+      nps: fc.constantFrom('1', '2', '4', '6', '10', '14'),
+    }),
+  );
+
+  it('never throws, never gives NaN or a negative length on random graphs of random components', () => {
+    fc.assert(
+      fc.property(graphArb, (g) => {
+        const d = {
+          format: 'tackline.spool',
+          version: 1,
+          spec: { nps: g.nps },
+          origin: { x: 0, y: 0, z: 0 },
+          nodes: g.nodes,
+          runs: g.runs.map((r, i) => ({
+            id: `r${i}`,
+            from: `n${r.from}`,
+            to: `n${r.to}`,
+            direction: r.direction,
+            length: { mm: r.mm, kind: r.kind },
+            ...(r.nps ? { nps: r.nps } : {}),
+          })),
+        };
+        const r = computeSpool(d);
+        assertSane(r);
+        // The shapes are valid: what is wrong is geometry, reported as engine issues.
+        expect(r.issues.some((i) => i.code === 'invalid-design')).toBe(false);
+        if (!r.ok) expect(r.issues.some((i) => i.severity === 'error')).toBe(true);
+      }),
+      { numRuns: 400 },
+    );
+  });
+
   type Mutation = (d: SpoolDesign, pick: number) => SpoolDesign;
   const mutations: [string, Mutation][] = [
     ['drop a run', (d, k) => ({ ...d, runs: d.runs.filter((_, i) => i !== k % d.runs.length) })],
