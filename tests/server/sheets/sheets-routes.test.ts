@@ -102,6 +102,10 @@ describe('GET /api/spools/:id/sheet.pdf', () => {
       .parse(binary);
     expect(draft.status).toBe(200);
     expect(draft.headers['content-disposition']).toContain('rev-B-draft');
+    // B is compared with A, the issued revision before it (same design here: nothing changed).
+    const draftText = (await readPdfText(draft.body as Buffer)).map((p) => p.text).join(' ');
+    expect(draftText).toContain('CHANGED SINCE REVISION A');
+    expect(draftText).toContain('No change to any cut length');
   });
 
   it('marks a superseded revision, asked for by id, with the revision that replaced it', async () => {
