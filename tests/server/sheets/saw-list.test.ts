@@ -91,5 +91,9 @@ describe('renderSawList', () => {
     const out = await renderSawList(input(list));
     const text = (await readPdfText(out.pdf)).map((p) => p.text).join(' ');
     expect(text).toContain('INCLUDES UNISSUED SPOOLS: CW-S02 rev A (draft)');
+    // Each of its pieces is flagged in its row, not only in the band.
+    const draftPieces = list[1]!.result.pieces;
+    expect(draftPieces.length).toBeGreaterThan(0);
+    for (const p of draftPieces) expect(text).toMatch(new RegExp(`CW-S02 A NOT ISSUED ${p.mark} `));
   });
 });

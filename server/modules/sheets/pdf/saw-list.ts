@@ -37,6 +37,8 @@ export interface SawListInput {
 export interface SawListPiece {
   spoolMark: string;
   revisionLetter: string;
+  /** Pieces of an unissued revision are listed but flagged: not to be cut yet. */
+  issued: boolean;
   piece: PipePiece;
 }
 
@@ -100,7 +102,12 @@ export function sawListGroups(spools: SawListSpool[]): SawListGroup[] {
         };
         groups.set(key, group);
       }
-      group.pieces.push({ spoolMark: spool.mark, revisionLetter: spool.revisionLetter, piece });
+      group.pieces.push({
+        spoolMark: spool.mark,
+        revisionLetter: spool.revisionLetter,
+        issued: spool.revisionState === 'issued',
+        piece,
+      });
     }
   }
   for (const group of groups.values()) {
@@ -191,13 +198,13 @@ export async function renderSawList(
   );
   let sequence = 0;
   for (const g of groups) {
-    const rows: TableRow[] = g.pieces.map(({ spoolMark, revisionLetter, piece }) => {
+    const rows: TableRow[] = g.pieces.map(({ spoolMark, revisionLetter, issued, piece }) => {
       const uncut = piece.cutLengthMm === null;
       if (!uncut) sequence += 1;
       return {
         cells: [
           uncut ? '—' : String(sequence),
-          `${spoolMark} ${revisionLetter}`,
+          `${spoolMark} ${revisionLetter}${issued ? '' : ' NOT ISSUED'}`,
           piece.mark,
           uncut ? 'NOT COMPUTED' : formatLength(piece.cutLengthMm!, units),
           piece.stockLengthMm === null ? '—' : formatLength(piece.stockLengthMm, units),
@@ -205,7 +212,7 @@ export async function renderSawList(
           piece.heat ?? '',
           '',
         ],
-        emphasis: uncut ? 'warn' : undefined,
+        emphasis: uncut || !issued ? 'warn' : undefined,
       };
     });
     rows.push({
@@ -227,7 +234,7 @@ export async function renderSawList(
         size: sizes.table,
         columns: [
           { header: '#', weight: 0.45 },
-          { header: 'Spool', weight: 1.5 },
+          { header: 'Spool', weight: 1.5, wrap: true },
           { header: 'Piece', weight: 0.6, font: 'body-bold' },
           { header: 'Cut length', weight: 1.35, align: 'right', font: 'body-bold' },
           { header: 'Stock', weight: 1.25, align: 'right' },
@@ -308,6 +315,7 @@ export async function renderSawList(
         ['Cut by', null],
       ],
       qrUrl: input.jobUrl,
+      qrCaption: 'Scan: job page',
     },
     marks,
   );

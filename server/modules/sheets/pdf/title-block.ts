@@ -21,6 +21,8 @@ export interface TitleBlockFields {
   /** Label/value pairs: status, drawn, checked, date, units. A null value prints a line to sign on. */
   facts: Array<[string, string | null]>;
   qrUrl: string | null;
+  /** Words under the QR code, e.g. "Scan: spool page". */
+  qrCaption?: string;
   /** What this page holds, e.g. "Spool drawing", "Cut lists", "Template 1:1". */
   pageTitle: string;
 }
@@ -75,7 +77,7 @@ export function drawTitleBlock(
   if (fields.qrUrl) {
     const qrSize = h - 2 * pad - t.tiny - 1;
     drawQrCode(doc, fields.qrUrl, frame.x + (h - qrSize) / 2, y + pad, qrSize);
-    drawText(doc, 'Scan: spool page', frame.x, y + h - pad - t.tiny, {
+    drawText(doc, fields.qrCaption ?? 'Scan: spool page', frame.x, y + h - pad - t.tiny, {
       size: t.tiny,
       color: INK.muted,
       width: h,
