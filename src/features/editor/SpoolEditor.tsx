@@ -54,7 +54,8 @@ export default function SpoolEditor({ spoolId, readOnly }: { spoolId: string; re
   const createDraft = useCreateDraft(spoolId);
   const issue = useIssueDraft(spoolId);
   const [issueOpen, setIssueOpen] = useState(false);
-  const [conflictLater, setConflictLater] = useState(false);
+  // The conflict the user put off ("decide later"); a new conflict asks again.
+  const [conflictLater, setConflictLater] = useState<object | null>(null);
 
   useEffect(() => model.setCompute(compute), [model, compute]);
   useEffect(() => model.setReadOnly(!editing), [model, editing]);
@@ -133,7 +134,7 @@ export default function SpoolEditor({ spoolId, readOnly }: { spoolId: string; re
         {SAVE_WORDS[autosave.status]}
       </span>
       {autosave.status === 'conflict' ? (
-        <PanelButton tone="primary" onClick={() => setConflictLater(false)}>
+        <PanelButton tone="primary" onClick={() => setConflictLater(null)}>
           Choose a version
         </PanelButton>
       ) : (
@@ -151,14 +152,14 @@ export default function SpoolEditor({ spoolId, readOnly }: { spoolId: string; re
     <>
       {loadProblem ? <p className="mb-2 rounded-md bg-danger-50 p-2 text-sm text-danger-700">{loadProblem}</p> : null}
       <EditorWorkspace model={model} units={units} banner={banner} actions={actions} defaultNps={null} />
-      {autosave.conflict && !conflictLater ? (
+      {autosave.conflict && conflictLater !== autosave.conflict ? (
         <ConflictDialog
           conflict={autosave.conflict}
           compute={compute}
           units={units}
           onKeepMine={() => void autosave.keepMine()}
           onTakeTheirs={autosave.takeTheirs}
-          onLater={() => setConflictLater(true)}
+          onLater={() => setConflictLater(autosave.conflict)}
         />
       ) : null}
       <IssueRevisionDialog

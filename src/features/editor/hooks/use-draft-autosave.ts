@@ -49,7 +49,6 @@ export function useDraftAutosave({
   useEffect(() => {
     versionRef.current = draft?.version ?? 0;
     savedRevisionRef.current = model.getSnapshot().designRevision;
-    setStatus(enabled && draft ? 'saved' : 'off');
     // Only the draft's identity matters here; its version moves with our own saves.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [draftId, enabled, model]);
@@ -158,5 +157,5 @@ export function useDraftAutosave({
     setStatus('conflict');
   }, []);
 
-  return { status, error, conflict, saveNow, keepMine, takeTheirs, markLoaded, raiseConflict, version: () => versionRef.current };
+  return { status: enabled && draftId ? status : ('off' as SaveStatus), error, conflict, saveNow, keepMine, takeTheirs, markLoaded, raiseConflict, version: () => versionRef.current };
 }

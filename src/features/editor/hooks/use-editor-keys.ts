@@ -1,4 +1,4 @@
-import { useEffect, useRef } from 'react';
+import { useEffect, useEffectEvent } from 'react';
 import { shortcutFor, type ShortcutAction } from '../panels/editor-shortcuts';
 
 function isTextBox(target: EventTarget | null): boolean {
@@ -18,8 +18,7 @@ function isTextBox(target: EventTarget | null): boolean {
  * open. Escape leaves a text box first, so the next key is a command again.
  */
 export function useEditorKeys(onAction: (action: ShortcutAction, event: KeyboardEvent) => void, enabled = true): void {
-  const handler = useRef(onAction);
-  handler.current = onAction;
+  const handle = useEffectEvent(onAction);
   useEffect(() => {
     if (!enabled) return;
     const onKeyDown = (event: KeyboardEvent) => {
@@ -33,7 +32,7 @@ export function useEditorKeys(onAction: (action: ShortcutAction, event: Keyboard
       const action = shortcutFor(event, inBox);
       if (!action) return;
       event.preventDefault();
-      handler.current(action, event);
+      handle(action, event);
     };
     window.addEventListener('keydown', onKeyDown);
     return () => window.removeEventListener('keydown', onKeyDown);

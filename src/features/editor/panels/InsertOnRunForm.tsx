@@ -55,9 +55,15 @@ export function InsertOnRunForm({
   const [socketBranch, setSocketBranch] = useState(false);
   const distanceRef = useRef<HTMLInputElement>(null);
 
+  // A keyboard request picks the type (during render, React's pattern for derived state)…
+  const [seenRequest, setSeenRequest] = useState(request);
+  if (request !== seenRequest) {
+    setSeenRequest(request);
+    if (request) setType(request.type);
+  }
+  // …and puts the cursor in the distance box.
   useEffect(() => {
     if (!request) return;
-    setType(request.type);
     distanceRef.current?.focus();
     distanceRef.current?.select();
   }, [request]);

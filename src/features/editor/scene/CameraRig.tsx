@@ -1,4 +1,4 @@
-import { useEffect, useRef } from 'react';
+import { useEffect, useEffectEvent, useRef } from 'react';
 import { useThree } from '@react-three/fiber';
 import { Vector3 } from 'three';
 import type { ViewPreset } from '../model/view-prefs';
@@ -24,17 +24,16 @@ type Controls = { target: Vector3; update: () => void };
  * zoomed in to work keeps their view while typing dimensions.
  */
 export function CameraRig({ preset, nonce, bounds, hasModel }: { preset: ViewPreset; nonce: number; bounds: SceneBounds; hasModel: boolean }) {
-  const camera = useThree((s) => s.camera);
+  const get = useThree((s) => s.get);
   const controls = useThree((s) => s.controls) as unknown as Controls | null;
-  const invalidate = useThree((s) => s.invalidate);
   const framedOnce = useRef(false);
-  const boundsRef = useRef(bounds);
-  boundsRef.current = bounds;
 
-  useEffect(() => {
+  // Reads the latest bounds without making them a reason to re-frame.
+  const frame = useEffectEvent(() => {
+    const { camera, invalidate } = get();
     if (!controls) return;
     if (!hasModel && framedOnce.current) return;
-    const b = boundsRef.current;
+    const b = bounds;
     const fov = 'fov' in camera ? ((camera as { fov: number }).fov * Math.PI) / 180 : Math.PI / 4;
     // A bounding sphere frames loosely; 0.85 of it fills the view without cropping a spool.
     const distance = (b.radius / Math.sin(fov / 2)) * 0.85;
@@ -48,8 +47,10 @@ export function CameraRig({ preset, nonce, bounds, hasModel }: { preset: ViewPre
     controls.update();
     if (hasModel) framedOnce.current = true;
     invalidate();
-    // Re-frame on a preset request or when the first model arrives, not on every bounds change.
-  }, [preset, nonce, hasModel, controls, camera, invalidate]);
+  });
+
+  // Re-frame on a preset request or when the first model arrives, not on every bounds change.
+  useEffect(() => frame(), [preset, nonce, hasModel, controls]);
 
   return null;
 }

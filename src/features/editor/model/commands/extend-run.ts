@@ -88,23 +88,17 @@ export function extendRun(design: SpoolDesign, args: ExtendRunArgs, ctx: Command
   }
 
   // Direction of travel into the old end, and of the new run, both away from the root side.
-  let inDir: Vec3;
-  let run: SpoolRun;
-  if (incoming) {
-    inDir = incoming.direction;
-    run = { id: runId, from: from.id, to: tipId, direction: dir, length: { mm, kind: 'centre-to-centre' } };
-  } else {
+  if (!incoming) {
     // The root end: the new run comes before it, pointing back towards it.
     const first = outgoing[0]!;
-    inDir = scale(dir, -1);
     const reversed = tidy(scale(dir, -1));
-    run = { id: runId, from: tipId, to: from.id, direction: reversed, length: { mm, kind: 'centre-to-centre' } };
-    const turn = angleBetweenDeg(reversed, first.direction);
-    const problem = turnError(turn);
+    const before: SpoolRun = { id: runId, from: tipId, to: from.id, direction: reversed, length: { mm, kind: 'centre-to-centre' } };
+    const problem = turnError(angleBetweenDeg(reversed, first.direction));
     if (problem) return fail(problem);
-    return finishTurn(design, from, run, tipId, tipEnd, args, `Run ${fmt(mm)} ${words} before the start`);
+    return finishTurn(design, from, before, tipId, tipEnd, args, `Run ${fmt(mm)} ${words} before the start`);
   }
-  const turn = angleBetweenDeg(inDir, dir);
+  const run: SpoolRun = { id: runId, from: from.id, to: tipId, direction: dir, length: { mm, kind: 'centre-to-centre' } };
+  const turn = angleBetweenDeg(incoming.direction, dir);
   const problem = turnError(turn);
   if (problem) return fail(problem);
   return finishTurn(design, from, run, tipId, tipEnd, args, `Run ${fmt(mm)} ${words}`);
