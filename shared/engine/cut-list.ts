@@ -6,47 +6,14 @@
  */
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import { pipeOdMm } from '../standards/pipe-schedules';
-import type { EndPrep, PipePiece } from './compute-result';
+import type { PipePiece } from './compute-result';
+import { endPrepFor } from './end-prep';
 import type { SpoolGraph } from './build-graph';
 import { addError, addWarning, type IssueSink } from './issues';
 import type { NodeAnalysis, NodeEnd, RunPipe } from './node-analysis';
 import type { PlacedRun } from './place-runs';
-import { addScaled, cross, dot, normalise, rotateAbout, scale, sub, add } from './vec3-math';
-
-/** Wall at or below which butt-weld ends are cut square, mm (ASME B16.25). */
-export const SQUARE_END_MAX_WALL_MM = 3;
-/** Wall above which the bevel is compound (37.5° then 10°), mm (ASME B16.25). */
-export const COMPOUND_BEVEL_MIN_WALL_MM = 22;
-
-/** Preparation of a pipe end meeting `end` at node `nodeId`, for a pipe of wall `wallMm`. */
-export function endPrepFor(
-  end: NodeEnd | null,
-  nodeId: string,
-  wallMm: number | null,
-  branchOf?: string,
-): EndPrep {
-  const bevel = (): EndPrep => {
-    if (wallMm !== null && wallMm <= SQUARE_END_MAX_WALL_MM)
-      return { type: 'square', label: 'square (wall ≤ 3 mm)', nodeId };
-    if (wallMm !== null && wallMm > COMPOUND_BEVEL_MIN_WALL_MM)
-      return { type: 'compound-bevel', label: 'compound bevel 37.5°/10°', nodeId };
-    return { type: 'bevel', label: 'bevel 37.5°', nodeId };
-  };
-  if (!end) return bevel();
-  switch (end.prep) {
-    case 'weld-bevel':
-      return bevel();
-    case 'square':
-      return { type: 'square', label: 'square', nodeId };
-    case 'saddle':
-      return { type: 'saddle', label: `saddle${branchOf ? ` (set-on ${branchOf})` : ''}`, nodeId };
-    case 'mitre': {
-      const b = bevel();
-      const cut = Math.round((end.mitreCutDeg ?? 0) * 100) / 100;
-      return { type: 'mitre', label: `mitre ${cut}°${b.type === 'square' ? '' : ` + ${b.label}`}`, nodeId };
-    }
-  }
-}
+import { addScaled } from './vec3-math';
+import { mitreSegmentPieces } from './mitre-segments';
 
 /** Where the pipe itself ends at a run end, mm plant (port + take-off + gap along the run). */
 function pipeEndPoint(placed: PlacedRun, atFrom: boolean): Vec3 {
@@ -154,86 +121,8 @@ export function buildCutList(
   }
 
   // Mitred bends: their middle segments are pipe pieces too.
-  for (const nodeId of graph.nodeOrder) {
-    const a = analyses.get(nodeId);
-    if (!a || a.detail.type !== 'elbow' || a.detail.construction !== 'mitre' || !a.nps) continue;
-    const welds = a.detail.mitreWelds ?? 0;
-    const seg = a.detail.mitreSegmentMm;
-    const R = a.detail.bendRadiusMm;
-    const [ea, eb] = a.ends;
-    const wp = positions.get(nodeId);
-    if (welds < 2 || !ea || !eb || !wp || R === null) continue;
-    const pipe = pipes.get(ea.conn.run.id)!;
-    const verts = mitreVertices(wp, ea.conn.outward, eb.conn.outward, R, a.detail.angleDeg, welds);
-    const cutDeg = a.detail.angleDeg / welds / 2;
-    const prep = endPrepFor({ ...ea, prep: 'mitre', mitreCutDeg: cutDeg }, nodeId, pipe.dims?.wallMm ?? null);
-    const g = pipe.spec.rootGapMm;
-    for (let i = 0; i + 1 < verts.length; i++) {
-      const v0 = verts[i]!;
-      const v1 = verts[i + 1]!;
-      const dir = normalise(sub(v1, v0)) ?? ea.conn.outward;
-      const cut = seg;
-      pieces.push({
-        mark: `P${pieces.length + 1}`,
-        runIds: [],
-        nodeId,
-        nps: a.nps,
-        schedule: pipe.schedule,
-        material: pipe.material,
-        heat: pipe.heat,
-        odMm: pipe.dims?.odMm ?? null,
-        wallMm: pipe.dims?.wallMm ?? null,
-        cutLengthMm: cut,
-        shortPointLengthMm:
-          cut !== null && pipe.dims
-            ? Math.max(0, cut - pipe.dims.odMm * Math.tan((cutDeg * Math.PI) / 180))
-            : null,
-        fieldFitAllowanceMm: 0,
-        stockLengthMm: cut === null ? null : cut + pipe.spec.sawKerfMm,
-        start: addScaled(v0, dir, g / 2),
-        end: addScaled(v1, dir, -g / 2),
-        ends: [prep, prep],
-        massKg: null,
-      });
-    }
-  }
+  for (const seg of mitreSegmentPieces(graph, analyses, pipes, positions, pieces.length)) pieces.push(seg);
   return { pieces, marks };
-}
-
-/**
- * Joint positions of a mitred bend at work point `wp` with legs along unit `oa`, `ob`
- * (outward), radius R (mm), total deflection `angleDeg` and `welds` joints: the vertices of
- * the polygon circumscribing the bend arc, from leg `a` to leg `b`.
- */
-export function mitreVertices(
-  wp: Vec3,
-  oa: Vec3,
-  ob: Vec3,
-  R: number,
-  angleDeg: number,
-  welds: number,
-): Vec3[] {
-  const theta = (angleDeg * Math.PI) / 180;
-  const alpha = theta / welds;
-  const bis = normalise(add(oa, ob));
-  const n = normalise(cross(oa, ob));
-  if (!bis || !n) return [];
-  const centre = addScaled(wp, bis, R / Math.cos(theta / 2));
-  const startTangent = addScaled(wp, oa, R * Math.tan(theta / 2));
-  const radial = sub(startTangent, centre);
-  const endTangent = addScaled(wp, ob, R * Math.tan(theta / 2));
-  // Sweep sense: the rotation about ±n that carries the start radius to the end radius.
-  const trial = rotateAbout(radial, n, theta);
-  const sense =
-    dot(sub(add(centre, trial), endTangent), sub(add(centre, trial), endTangent)) < 1e-6 * R * R ? 1 : -1;
-  const out: Vec3[] = [];
-  const reach = R / Math.cos(alpha / 2);
-  for (let i = 0; i < welds; i++) {
-    const phi = (i + 0.5) * alpha;
-    const dir = normalise(rotateAbout(radial, scale(n, sense), phi))!;
-    out.push(addScaled(centre, dir, reach));
-  }
-  return out;
 }
 
 /**
