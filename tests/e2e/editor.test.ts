@@ -217,4 +217,27 @@ describe('spool editor in the browser', () => {
       await page.close();
     }
   });
+
+  it('a detailer issues the revision from the editor; the issued revision opens read-only', { timeout: 90_000 }, async () => {
+    await browser.context.clearCookies();
+    const page = await browser.context.newPage();
+    await page.goto(`${app.baseUrl}/`);
+    await signInAs(page, DEMO_USERS.detailer);
+    await page.goto(`${app.baseUrl}/spools/${spoolId}`);
+    await page.locator('[data-testid="cut-list"] tbody tr').nth(2).waitFor();
+    await page.getByTestId('spool-editor').getByRole('button', { name: /^Issue revision/ }).click();
+    const dialog = page.getByRole('dialog', { name: 'Issue this revision' });
+    await dialog.getByLabel('What changed (revision note)').fill('First issue for fabrication');
+    await dialog.getByRole('button', { name: 'Issue revision' }).click();
+    await page.getByText(/Showing issued revision A/).waitFor({ timeout: 15_000 });
+    expect(await page.getByTestId('spool-editor').getAttribute('data-read-only')).toBe('true');
+    expect(await page.getByRole('form', { name: 'Add a run' }).count()).toBe(0);
+    await page.getByRole('button', { name: 'Start the next revision' }).waitFor();
+    await saveScreenshot(page, 'editor-07-issued');
+    const spool = (await (await page.request.get(`${app.baseUrl}/api/spools/${spoolId}`)).json()) as Spool;
+    expect(spool.currentRevision?.letter).toBe('A');
+    expect(spool.draft).toBeNull();
+    await signOut(page);
+    await page.close();
+  });
 });
