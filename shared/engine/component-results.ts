@@ -28,14 +28,16 @@ export function componentResults(
   for (const nodeId of graph.nodeOrder) {
     const a = analyses.get(nodeId);
     const wp = positions.get(nodeId);
-    if (!a || !wp) continue;
+    // A component of unknown size cannot be drawn; an error already says why.
+    if (!a || !wp || a.nps === null) continue;
+    const nps = a.nps;
     const ends: ComponentEnd[] = a.ends.map((e) => {
       const port = add(wp, e.portOffset);
       return {
         runId: e.conn.run.id,
         point: e.takeOffMm === null || e.pipeContinues ? port : addScaled(port, e.conn.outward, e.takeOffMm),
         outward: e.conn.outward,
-        nps: e.nps ?? a.nps ?? ('1' as Nps),
+        nps: e.nps ?? nps,
         odMm: od(e.nps),
         joint: e.joint,
         takeOffMm: e.takeOffMm,
@@ -75,11 +77,11 @@ export function componentResults(
           type: 'tee',
           runAxis: a.ends[0]!.conn.outward,
           branchAxis: a.ends[2]!.conn.outward,
-          branchNps: d.branchNps ?? a.nps ?? ('1' as Nps),
+          branchNps: d.branchNps ?? nps,
         };
         break;
       case 'branch': {
-        const branchNps = d.branchNps ?? a.nps ?? ('1' as Nps);
+        const branchNps = d.branchNps ?? nps;
         if (a.node.kind === 'set-on-branch') {
           shape = {
             type: 'set-on-branch',
@@ -144,7 +146,7 @@ export function componentResults(
           runId: null,
           point: wp,
           outward: negate(a.ends[0]!.conn.outward),
-          nps: a.nps ?? ('1' as Nps),
+          nps,
           odMm: d.odMm,
           joint: 'flange-face',
           takeOffMm: null,
