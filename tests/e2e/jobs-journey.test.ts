@@ -1,7 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, onTestFailed } from 'vitest';
 import { startAppServer, type RunningApp } from './helpers/app-server';
 import { launchBrowser, type TestBrowser } from './helpers/browser';
 import { saveScreenshot } from './helpers/screenshots';
+import type { Page } from 'playwright-core';
 import { DEMO_ORGANISATIONS } from '../../server/db/seed/demo-data';
 import { DEMO_USERS, signInAs, signOut } from './helpers/sign-in';
 
@@ -19,6 +20,13 @@ const ISSUE_MARK = demoMarks[2]!;
  * The first journeys a shop makes: a detailer sets up a job and its first spool;
  * a client viewer reads the same job without any way to change it.
  */
+/** On a failure, keep a picture of the page as it was, to see why. */
+function keepPictureOnFailure(page: Page, name: string): void {
+  onTestFailed(async () => {
+    await saveScreenshot(page, `failed-${name}`).catch(() => undefined);
+  });
+}
+
 describe('jobs and spools in the browser', () => {
   let app: RunningApp;
   let browser: TestBrowser;
@@ -35,6 +43,7 @@ describe('jobs and spools in the browser', () => {
 
   it('a detailer signs in, creates a job, adds a spool and sees it in the job’s table', { timeout: 90_000 }, async () => {
     const page = await browser.freshPage();
+    keepPictureOnFailure(page, 'detailer');
     const problems: string[] = [];
     page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
     page.on('console', (m) => {
@@ -130,6 +139,7 @@ describe('jobs and spools in the browser', () => {
     await expect(spoolDialog.getByLabel('Spool mark').inputValue()).resolves.toBe('CHW-110-S01');
     await saveScreenshot(page, '08-duplicate-spool');
     await spoolDialog.getByRole('button', { name: 'Cancel' }).click();
+    await spoolDialog.waitFor({ state: 'hidden' });
 
     await row.getByRole('link', { name: 'CHW-110-S01' }).click();
     await page.getByRole('heading', { name: 'CHW-110-S01' }).waitFor();
@@ -145,6 +155,7 @@ describe('jobs and spools in the browser', () => {
 
   it('a viewer sees the jobs and spools but no button that changes them', { timeout: 60_000 }, async () => {
     const page = await browser.freshPage();
+    keepPictureOnFailure(page, 'viewer');
     // Signed out, a deep link goes to sign-in and comes back afterwards.
     await page.goto(`${app.baseUrl}/users`);
     await page.waitForURL(/\/sign-in\?next=%2Fusers/);
@@ -200,6 +211,7 @@ describe('jobs and spools in the browser', () => {
 
   it('a detailer issues a revision and a fabricator records the cut', { timeout: 60_000 }, async () => {
     const page = await browser.freshPage();
+    keepPictureOnFailure(page, 'issue');
     await page.goto(`${app.baseUrl}/`);
     await signInAs(page, DEMO_USERS.detailer);
     await page.getByRole('link', { name: DEMO_JOB }).click();
@@ -243,6 +255,7 @@ describe('jobs and spools in the browser', () => {
 
   it('an admin manages users, and the job reads well at tablet width', { timeout: 60_000 }, async () => {
     const page = await browser.freshPage();
+    keepPictureOnFailure(page, 'admin');
     await page.goto(`${app.baseUrl}/sign-in`);
     await signInAs(page, DEMO_USERS.admin);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Users' }).click();
@@ -260,7 +273,19 @@ describe('jobs and spools in the browser', () => {
     await addUser.getByLabel('First password').fill('bevel-and-land-2026');
     await addUser.getByRole('button', { name: 'Add user' }).click();
     await addUser.waitFor({ state: 'hidden' });
-    await page.getByRole('row').filter({ hasText: 'Tamsin Oakridge' }).filter({ hasText: 'tamsin@kestrel.example' }).waitFor();
+    const tamsin = page.getByRole('row').filter({ hasText: 'Tamsin Oakridge' });
+    await tamsin.filter({ hasText: 'tamsin@kestrel.example' }).waitFor();
+
+    // Role changes and deactivation are confirmed first, then show in the row.
+    await tamsin.getByLabel('Role of Tamsin Oakridge').selectOption('inspector');
+    const confirmRole = page.getByRole('dialog', { name: 'Make Tamsin Oakridge inspector?' });
+    await confirmRole.getByRole('button', { name: 'Change role' }).click();
+    await confirmRole.waitFor({ state: 'hidden' });
+    await expect(tamsin.getByLabel('Role of Tamsin Oakridge').inputValue()).resolves.toBe('inspector');
+    await tamsin.getByRole('button', { name: 'Deactivate' }).click();
+    await page.getByRole('dialog', { name: 'Deactivate Tamsin Oakridge?' }).getByRole('button', { name: 'Deactivate' }).click();
+    await tamsin.getByText('Deactivated').waitFor();
+    await tamsin.getByRole('button', { name: 'Reactivate' }).waitFor();
 
     // Archiving takes a job out of the default list; the "Archived" filter still finds it.
     const created = await page.request.post(`${app.baseUrl}/api/jobs`, {

@@ -4,7 +4,7 @@ import type { Role } from '../../../../shared/schemas/role.schema';
 import type { Spool } from '../../../../shared/schemas/spool.schema';
 import { allowedSpoolStatusTargets, spoolStatusSchema, type SpoolStatus } from '../../../../shared/schemas/spool-status.schema';
 import { Button } from '../../../components/ui/Button';
-import { Dialog } from '../../../components/ui/Dialog';
+import { ConfirmDialog } from '../../../components/ui/ConfirmDialog';
 import { InlineError } from '../../../components/ui/ErrorState';
 import { SelectField } from '../../../components/ui/Field';
 import { StaleNotice } from '../../../components/ui/StaleNotice';
@@ -74,19 +74,16 @@ export function SpoolStatusActions({ spool, role }: { spool: Spool; role: Role }
           ))}
         </div>
       )}
-      <Dialog open={confirming !== null} onClose={() => setConfirming(null)} title={`Record ${spool.mark} as ${confirming ? spoolStatusDisplay[confirming].label : ''}?`}>
-        <p className="text-sm text-ink-800">
-          This goes on the spool's record with your name and the time. Only an admin can move it back.
-        </p>
-        <div className="mt-4 flex justify-end gap-2">
-          <Button variant="ghost" onClick={() => setConfirming(null)}>
-            Cancel
-          </Button>
-          <Button variant="primary" busy={change.isPending} onClick={() => confirming && move(confirming)}>
-            {confirming ? spoolStatusDisplay[confirming].action : ''}
-          </Button>
-        </div>
-      </Dialog>
+      <ConfirmDialog
+        open={confirming !== null}
+        title={`Record ${spool.mark} as ${confirming ? spoolStatusDisplay[confirming].label : ''}?`}
+        confirmLabel={confirming ? spoolStatusDisplay[confirming].action : ''}
+        busy={change.isPending}
+        onCancel={() => setConfirming(null)}
+        onConfirm={() => confirming && move(confirming)}
+      >
+        This goes on the spool's record with your name and the time. Only an admin can move it back.
+      </ConfirmDialog>
       {stale ? <StaleNotice what="spool" onReload={reload} /> : <InlineError error={change.error} />}
     </section>
   );

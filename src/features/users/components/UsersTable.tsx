@@ -1,6 +1,8 @@
+import { useState } from 'react';
 import type { Role } from '../../../../shared/schemas/role.schema';
 import type { User } from '../../../../shared/schemas/user.schema';
 import { Button } from '../../../components/ui/Button';
+import { ConfirmDialog } from '../../../components/ui/ConfirmDialog';
 import { StatusBadge } from '../../../components/ui/StatusBadge';
 import { Table, type SortOrder } from '../../../components/ui/Table';
 import { formatDateTime } from '../../../lib/format-date';
@@ -23,6 +25,16 @@ interface UsersTableProps {
 export function UsersTable({ users, currentUserId, sort, onSort, busy }: UsersTableProps) {
   const update = useUpdateUser();
   const pendingId = update.isPending ? update.variables?.id : undefined;
+  // Role changes and deactivation change what someone can do at once: confirm them first.
+  const [pending, setPending] = useState<{ user: User; role?: Role; active?: boolean } | null>(null);
+  const confirm = () => {
+    if (!pending) return;
+    const { user, role, active } = pending;
+    update.mutate(
+      { id: user.id, body: { ...(role ? { role } : {}), ...(active !== undefined ? { active } : {}), version: user.version } },
+      { onSuccess: () => setPending(null) },
+    );
+  };
   return (
     <>
       <Table
@@ -55,7 +67,7 @@ export function UsersTable({ users, currentUserId, sort, onSort, busy }: UsersTa
                 value={u.role}
                 disabled={u.id === currentUserId || pendingId === u.id}
                 title={u.id === currentUserId ? 'You cannot change your own role' : undefined}
-                onChange={(e) => update.mutate({ id: u.id, body: { role: e.target.value as Role, version: u.version } })}
+                onChange={(e) => setPending({ user: u, role: e.target.value as Role })}
                 className="min-h-11 rounded-md border border-steel-300 bg-white px-2 text-sm disabled:bg-steel-100"
               >
                 {roleOptions.map((o) => (
@@ -82,7 +94,7 @@ export function UsersTable({ users, currentUserId, sort, onSort, busy }: UsersTa
                   <Button
                     variant="ghost"
                     busy={pendingId === u.id}
-                    onClick={() => update.mutate({ id: u.id, body: { active: !u.active, version: u.version } })}
+                    onClick={() => (u.active ? setPending({ user: u, active: false }) : update.mutate({ id: u.id, body: { active: true, version: u.version } }))}
                   >
                     {u.active ? 'Deactivate' : 'Reactivate'}
                   </Button>
@@ -92,7 +104,28 @@ export function UsersTable({ users, currentUserId, sort, onSort, busy }: UsersTa
           },
         ]}
       />
-      {update.error ? (
+      <ConfirmDialog
+        open={pending !== null}
+        title={
+          pending?.role
+            ? `Make ${pending.user.displayName} ${roleLabels[pending.role].toLowerCase()}?`
+            : `Deactivate ${pending?.user.displayName ?? ''}?`
+        }
+        confirmLabel={pending?.role ? 'Change role' : 'Deactivate'}
+        tone={pending?.role ? 'primary' : 'danger'}
+        busy={update.isPending}
+        error={pending ? update.error : null}
+        onCancel={() => {
+          setPending(null);
+          update.reset();
+        }}
+        onConfirm={confirm}
+      >
+        {pending?.role
+          ? 'What they can see and do changes from their next request.'
+          : 'They can no longer sign in. Their name stays on every record they made; you can reactivate them later.'}
+      </ConfirmDialog>
+      {update.error && !pending ? (
         <p role="alert" className="mt-2 rounded-md bg-danger-50 px-3 py-2 text-sm text-danger-700">
           {update.error.message}
         </p>
