@@ -11,10 +11,33 @@ import {
 } from '../standards/flanges';
 import type { Lookup } from '../standards/lookup-result';
 import type { Nps } from '../standards/nps';
-import { pipeDimensions, type PipeDimensions, type Schedule } from '../standards/pipe-schedules';
+import { elbowDimensions, type ElbowDimensions, type ElbowKind } from '../standards/butt-weld-fittings';
+import {
+  pipeDimensions,
+  scheduleLabel,
+  type PipeDimensions,
+  type Schedule,
+} from '../standards/pipe-schedules';
 
 const pipes = new Map<string, Lookup<PipeDimensions>>();
 const flanges = new Map<string, Lookup<FlangeDimensions>>();
+const elbows = new Map<string, Lookup<ElbowDimensions>>();
+const labels = new Map<Schedule, string>();
+
+/** {@link elbowDimensions}, memoised. */
+export function cachedElbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensions> {
+  const key = `${nps}|${kind}`;
+  let hit = elbows.get(key);
+  if (!hit) elbows.set(key, (hit = elbowDimensions(nps, kind)));
+  return hit;
+}
+
+/** {@link scheduleLabel}, memoised ("Sch 40", "STD"). */
+export function cachedScheduleLabel(schedule: Schedule): string {
+  let hit = labels.get(schedule);
+  if (hit === undefined) labels.set(schedule, (hit = scheduleLabel(schedule)));
+  return hit;
+}
 
 /** {@link pipeDimensions}, memoised. */
 export function cachedPipeDimensions(nps: Nps, schedule: Schedule): Lookup<PipeDimensions> {

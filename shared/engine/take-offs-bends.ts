@@ -3,10 +3,9 @@
  * cut from a 90° with take-off R·tan(θ/2)), mitred bends, and 180° returns.
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
-import { elbowDimensions } from '../standards/butt-weld-fittings';
 import { npsInches } from '../standards/nps';
-import { scheduleLabel } from '../standards/pipe-schedules';
 import type { Connection } from './classify-nodes';
+import { cachedElbowDimensions, cachedScheduleLabel } from './standards-cache';
 import { addError, addWarning } from './issues';
 import { buttEnd } from './node-end-builders';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
@@ -41,7 +40,7 @@ export function analyseElbow(
   const tol = ctx.angleToleranceDeg;
   const gA = ctx.specAt(a.run.id).rootGapMm;
   const gB = ctx.specAt(b.run.id).rootGapMm;
-  const sched = scheduleLabel(pipe.schedule);
+  const sched = cachedScheduleLabel(pipe.schedule);
   const spec = ctx.specAt(a.run.id);
   const fail = (msg: string): NodeAnalysis => {
     addError(ctx.issues, 'angle-not-made', msg, node.id);
@@ -77,7 +76,7 @@ export function analyseElbow(
 
   const is90 = Math.abs(angleDeg - 90) <= tol;
   const is45 = Math.abs(angleDeg - 45) <= tol;
-  const base90 = elbowDimensions(nps, radius === 'long' ? 'LR90' : 'SR90');
+  const base90 = cachedElbowDimensions(nps, radius === 'long' ? 'LR90' : 'SR90');
 
   if (mitre) {
     const welds = node.mitreWelds ?? 2;
@@ -143,7 +142,7 @@ export function analyseElbow(
     else ({ centreToEndMm: takeOff, source } = base90.value);
     what = `Elbow 90° ${rr}`;
   } else if (is45 && radius === 'long') {
-    const e45 = elbowDimensions(nps, 'LR45');
+    const e45 = cachedElbowDimensions(nps, 'LR45');
     if (!e45.ok) addError(ctx.issues, 'standard-data-missing', e45.missing, node.id);
     else {
       ({ centreToEndMm: takeOff, source } = e45.value);
@@ -199,7 +198,7 @@ export function analyseReturn(
   const radius = node.radius ?? 'long';
   const rr = radius === 'long' ? 'LR' : 'SR';
   const spec = ctx.specAt(a.run.id);
-  const sched = scheduleLabel(pipe.schedule);
+  const sched = cachedScheduleLabel(pipe.schedule);
   const u = normalise(rejectFrom(node.offsetDirection, a.outward));
   if (!u) {
     addError(
@@ -209,7 +208,7 @@ export function analyseReturn(
       node.id,
     );
   }
-  const look = nps ? elbowDimensions(nps, radius === 'long' ? 'LR180' : 'SR180') : null;
+  const look = nps ? cachedElbowDimensions(nps, radius === 'long' ? 'LR180' : 'SR180') : null;
   if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
   const O = look?.ok ? look.value.centreToEndMm : null;
   const half = O !== null && u ? scale(u, O / 2) : { x: 0, y: 0, z: 0 };

@@ -6,10 +6,9 @@
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
 import { capDimensions } from '../standards/butt-weld-fittings';
 import { socketWeldDimensions } from '../standards/socket-weld-fittings';
-import { scheduleLabel } from '../standards/pipe-schedules';
 import type { Connection } from './classify-nodes';
+import { cachedScheduleLabel, cachedFlangeDimensions } from './standards-cache';
 import { addError } from './issues';
-import { cachedFlangeDimensions } from './standards-cache';
 import { buttEnd, openEnd, socketEnd } from './node-end-builders';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
 
@@ -20,7 +19,7 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
   const pipe = ctx.pipe(conn.run.id);
   const spec = ctx.specAt(conn.run.id);
   const nps = pipe.nps;
-  const sched = scheduleLabel(pipe.schedule);
+  const sched = cachedScheduleLabel(pipe.schedule);
   const base = { node, role: ctx.role, nps, internalWelds: [] as NodeAnalysis['internalWelds'] };
   const end = node.end;
 

@@ -5,9 +5,8 @@
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
 import { reducerDimensions } from '../standards/butt-weld-fittings';
 import { compareNps } from '../standards/nps';
-import { scheduleLabel } from '../standards/pipe-schedules';
 import type { Connection } from './classify-nodes';
-import { cachedPipeDimensions } from './standards-cache';
+import { cachedPipeDimensions, cachedScheduleLabel } from './standards-cache';
 import { addError } from './issues';
 import { buttEnd } from './node-end-builders';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
@@ -83,7 +82,7 @@ export function analyseReducer(
       smallOffset = scale(f, -(odL.value.odMm - odS.value.odMm) / 2);
     }
   }
-  const sched = scheduleLabel(pa.schedule);
+  const sched = cachedScheduleLabel(pa.schedule);
   const kind = eccentric ? `eccentric, flat ${flat}` : 'concentric';
   const largeEnd = buttEnd(large, largeNps, half, ctx.specAt(large.run.id).rootGapMm);
   const smallEnd = {

@@ -4,8 +4,8 @@
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
 import { teeDimensions } from '../standards/butt-weld-fittings';
-import { scheduleLabel } from '../standards/pipe-schedules';
 import type { Connection } from './classify-nodes';
+import { cachedScheduleLabel } from './standards-cache';
 import { addError } from './issues';
 import { buttEnd } from './node-end-builders';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
@@ -38,7 +38,7 @@ export function analyseTee(
   if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
   const C = look?.ok ? look.value.runCentreToEndMm : null;
   const M = look?.ok ? look.value.branchCentreToEndMm : null;
-  const sched = scheduleLabel(pa.schedule);
+  const sched = cachedScheduleLabel(pa.schedule);
   const size = runNps === branchNps ? `NPS ${runNps ?? '?'}` : `NPS ${runNps} × ${branchNps}`;
   const kind = runNps === branchNps ? 'equal' : 'reducing';
   return {
