@@ -33,6 +33,8 @@ export function flangeDetailsBlock(
   tags: Map<string, string>,
   units: LengthUnits,
   size: number,
+  /** Per flange node: extra words for the cell (its design label, a revision mark). */
+  extras: Map<string, string> = new Map(),
   start = 0,
 ): FlowBlock {
   return {
@@ -40,7 +42,7 @@ export function flangeDetailsBlock(
       const titleH = size * 1.25 + 3;
       const cellW = Math.max(mm(46), Math.min(mm(60), area.w / Math.max(1, Math.floor(area.w / mm(50)))));
       const perRow = Math.max(1, Math.floor(area.w / cellW));
-      const cellH = cellW * 0.62 + size * 8.4;
+      const cellH = cellW * 0.62 + size * 10.6;
       const rowsFit = Math.floor((area.h - titleH) / cellH);
       if (rowsFit < 1 && !fresh) return { used: 0, rest: this };
       const count = Math.min(flanges.length - start, Math.max(1, rowsFit) * perRow);
@@ -65,13 +67,14 @@ export function flangeDetailsBlock(
           tags.get(f.nodeId) ?? f.nodeId,
           units,
           size,
+          extras.get(f.nodeId) ?? '',
         );
       }
       const rowsUsed = Math.ceil(count / perRow);
       const next = start + count;
       return {
         used: titleH + rowsUsed * cellH,
-        rest: next < flanges.length ? flangeDetailsBlock(flanges, tags, units, size, next) : null,
+        rest: next < flanges.length ? flangeDetailsBlock(flanges, tags, units, size, extras, next) : null,
       };
     },
   };
@@ -84,6 +87,7 @@ function drawFlangeCell(
   tag: string,
   units: LengthUnits,
   size: number,
+  extra: string,
 ): void {
   const bad = f.mustTwoHole && !f.straddles;
   doc.save();
@@ -111,10 +115,17 @@ function drawFlangeCell(
     },
   );
 
+  if (extra) {
+    drawText(doc, extra, cell.x + pad, cell.y + pad + size * 2.3, {
+      size: size * 0.85,
+      color: INK.muted,
+      width: cell.w - 2 * pad,
+    });
+  }
   // The view: reference up, holes clockwise as seen facing the face.
   const r = cell.w * 0.27;
   const cx = cell.x + cell.w / 2;
-  const cy = cell.y + pad + size * 2.7 + r + size + 8;
+  const cy = cell.y + pad + size * 3.7 + r + size + 8;
   const ref = f.reference === 'plant-vertical' ? 'UP' : 'N';
   doc.lineWidth(0.5).strokeColor(INK.muted).dash(3, { space: 2 });
   doc

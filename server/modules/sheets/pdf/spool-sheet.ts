@@ -94,6 +94,15 @@ function sheetNotes(input: SpoolSheetInput, templateProblems: string[]): string[
   return notes;
 }
 
+// What each flange cell adds to its own line: the designer's label (where it goes) and a revision mark.
+function flangeExtras(design: SpoolDesign, changes: RevisionChanges | null): Map<string, string> {
+  const out = new Map<string, string>();
+  for (const node of design.nodes) if (node.label) out.set(node.id, `“${node.label}”`);
+  for (const id of changes?.changedFlanges ?? [])
+    out.set(id, [out.get(id), `changed in rev ${changes!.markLetter}`].filter(Boolean).join(' · '));
+  return out;
+}
+
 /** Renders a spool's fabrication sheet: drawing, tables, flange views, notes, cautions and 1:1 templates. */
 export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolSheetOutput> {
   const { header, result, units, paper, design } = input;
@@ -163,7 +172,9 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
   );
   blocks.push(weldListBlock(result, tableSize));
   if (result.flanges.length > 0)
-    blocks.push(flangeDetailsBlock(result.flanges, flangeTags, units, tableSize));
+    blocks.push(
+      flangeDetailsBlock(result.flanges, flangeTags, units, tableSize, flangeExtras(design, changes)),
+    );
   const pairs = flangePairsBlock(result, flangeTags, units, tableSize);
   if (pairs) blocks.push(pairs);
   const overall = overallBlock(result, units, tableSize);
