@@ -24,6 +24,7 @@ import { PanelButton } from './panels/panel-bits';
 import { ResultTabs } from './panels/ResultTabs';
 import { RunProperties } from './panels/RunProperties';
 import { StartPanel } from './panels/StartPanel';
+import { SpoolSpecPanel } from './panels/SpoolSpecPanel';
 import { ViewBar } from './panels/ViewBar';
 import { FileMenu } from './panels/FileMenu';
 import SpoolCanvas from './scene/SpoolCanvas';
@@ -248,6 +249,7 @@ export function EditorWorkspace({
             <div className="flex flex-col gap-2 text-sm text-steel-700">
               <h3 className="text-base font-semibold text-ink-900">Nothing selected</h3>
               <p>Click a pipe or fitting in the model, a piece in the cut list or a line in Checks. Keys ] and [ step through the components.</p>
+              {design ? <SpoolSpecPanel model={model} design={design} result={result} units={units} readOnly={readOnly} /> : null}
               {result ? (
                 <dl className="mt-2 flex flex-col gap-1">
                   <div className="flex justify-between">
