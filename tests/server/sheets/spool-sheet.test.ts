@@ -192,24 +192,27 @@ describe('spool sheet marks', () => {
     expect(renderPageInk(out.pdf, 20)[0]!.inkedFraction).toBeGreaterThan(0.02);
   });
 
-  it('encodes the spool page URL in a QR code that a reader decodes', async () => {
-    const header = testHeader('CW-201-S03');
-    const out = await renderSpoolSheet({ header, design, result, units: 'mm', paper: 'A3' });
-    const grey = renderPageGrey(out.pdf, 1, 150);
-    // Crop the title block's left end (the QR cell) to keep the decoder quick.
-    const setup = pageSetup('A3');
-    const px = (pt: number) => Math.round((pt / 72) * 150);
-    const x0 = px(setup.frame.x);
-    const y0 = px(setup.frame.y + setup.frame.h - setup.titleBlockHeight);
-    const w = px(setup.titleBlockHeight) + 4;
-    const h = px(setup.titleBlockHeight) + 4;
-    const rgba = new Uint8ClampedArray(w * h * 4);
-    for (let y = 0; y < h; y += 1) {
-      for (let x = 0; x < w; x += 1) {
-        const g = grey.pixels[(y0 + y) * grey.width + (x0 + x)] ?? 255;
-        rgba.set([g, g, g, 255], (y * w + x) * 4);
+  it.each(['A3', 'Letter'] as const)(
+    'encodes the spool page URL in a QR code that a reader decodes (%s)',
+    async (paper) => {
+      const header = testHeader('CW-201-S03');
+      const out = await renderSpoolSheet({ header, design, result, units: 'mm', paper });
+      const grey = renderPageGrey(out.pdf, 1, 150);
+      // Crop the title block's left end (the QR cell) to keep the decoder quick.
+      const setup = pageSetup(paper);
+      const px = (pt: number) => Math.round((pt / 72) * 150);
+      const x0 = px(setup.frame.x);
+      const y0 = px(setup.frame.y + setup.frame.h - setup.titleBlockHeight);
+      const w = px(setup.titleBlockHeight) + 4;
+      const h = px(setup.titleBlockHeight) + 4;
+      const rgba = new Uint8ClampedArray(w * h * 4);
+      for (let y = 0; y < h; y += 1) {
+        for (let x = 0; x < w; x += 1) {
+          const g = grey.pixels[(y0 + y) * grey.width + (x0 + x)] ?? 255;
+          rgba.set([g, g, g, 255], (y * w + x) * 4);
+        }
       }
-    }
-    expect(jsQR(rgba, w, h)?.data).toBe(header.spoolUrl);
-  });
+      expect(jsQR(rgba, w, h)?.data).toBe(header.spoolUrl);
+    },
+  );
 });
