@@ -6,7 +6,7 @@ import { cn } from '../../lib/cn';
 import { deleteComponent, deletionPreview } from './model/commands/delete-component';
 import { extendRun } from './model/commands/extend-run';
 import { setEnd } from './model/commands/edit-node';
-import { nodeById, runById } from './model/design-graph';
+import { incomingRun, nodeById, runById } from './model/design-graph';
 import type { EditorModel } from './model/editor-model';
 import { extendTarget } from './model/extend-target';
 import { IdAllocator } from './model/id-allocator';
@@ -67,7 +67,7 @@ export function EditorWorkspace({
   const snap = useEditorSnapshot(model);
   const result = useEditorResult(model, snap);
   const { design, selection, view, readOnly } = snap;
-  const [draft, setDraft] = useState<BuildDraft>({ axis: 'east', offset: { east: 1, north: 1, up: 0 }, lengthMm: null, kind: 'auto', radius: 'long' });
+  const [draft, setDraft] = useState<BuildDraft>({ axis: 'east', offset: { east: 1, north: 1, up: 0 }, lengthMm: null, kind: 'auto', radius: 'long', returnSide: null });
   const [insertRequest, setInsertRequest] = useState<{ type: InsertType; nonce: number } | null>(null);
   const [keysOpen, setKeysOpen] = useState(false);
   const [pendingDelete, setPendingDelete] = useState<{ id: string; count: number } | null>(null);
@@ -78,6 +78,16 @@ export function EditorWorkspace({
   const begun = !!design && (design.runs.length > 0 || !!design.spec?.nps);
   const from = extendTarget(design, selection);
   const fromNode = design && from ? nodeById(design, from) : undefined;
+  // Doubling back on the run into the open end calls for a 180° return: ask for its side.
+  const turningBackFrom = useMemo(() => {
+    if (!design || !from || draft.axis === 'offset') return null;
+    const feeding = incomingRun(design, from);
+    if (!feeding) return null;
+    const v = PLANT_AXES[draft.axis].vector;
+    const d = feeding.direction;
+    const len = Math.hypot(d.x, d.y, d.z);
+    return (v.x * d.x + v.y * d.y + v.z * d.z) / len < -0.9999 ? d : null;
+  }, [design, from, draft.axis]);
 
   const addRun = useCallback(() => {
     if (!from || draft.lengthMm === null) return;
@@ -86,12 +96,17 @@ export function EditorWorkspace({
       model.apply(() => ({ ok: false, error: 'Give the offsets a direction (not all zero)' }));
       return;
     }
+    const returnSide = turningBackFrom && draft.returnSide ? PLANT_AXES[draft.returnSide].vector : undefined;
     const r = model.edit((d, ctx) =>
-      extendRun(d, { fromNodeId: from, direction, lengthMm: draft.lengthMm!, elbowRadius: draft.radius, ...(draft.kind !== 'auto' ? { lengthKind: draft.kind } : {}) }, ctx),
+      extendRun(
+        d,
+        { fromNodeId: from, direction, lengthMm: draft.lengthMm!, elbowRadius: draft.radius, ...(returnSide ? { returnSide } : {}), ...(draft.kind !== 'auto' ? { lengthKind: draft.kind } : {}) },
+        ctx,
+      ),
     );
     // Hand the keys back to the editor: the next letter is a direction, not text in the box.
     if (r.ok) rootRef.current?.focus();
-  }, [from, draft, model]);
+  }, [from, draft, model, turningBackFrom]);
 
   const requestDelete = useCallback(
     (id: string) => {
@@ -223,6 +238,7 @@ export function EditorWorkspace({
           fromLabel={fromNode ? `${fromNode.kind === 'end' ? 'open end' : fromNode.kind} ${fromNode.id}` : null}
           units={units}
           disabled={!from}
+          turningBackFrom={turningBackFrom}
         />
       ) : null}
       <p role="status" aria-live="polite" className={cn('min-h-5 text-sm', snap.lastError ? 'font-semibold text-danger-700' : 'text-steel-600')} data-testid="editor-status">

@@ -7,6 +7,8 @@ import type { LengthUnits } from '../../../../shared/units/length-format';
 import { EditorIcon } from './editor-icons';
 import { LengthInput } from './LengthInput';
 import { SHORTCUTS } from './editor-shortcuts';
+import { AxisPicker } from './AxisPicker';
+import { perpendicular } from '../model/vector';
 
 /** What the next run will be. */
 export type BuildDraft = {
@@ -16,6 +18,8 @@ export type BuildDraft = {
   lengthMm: number | null;
   kind: RunLengthKind | 'auto';
   radius: ElbowRadius;
+  /** Turning straight back: the side the 180° return steps to. */
+  returnSide: PlantAxis | null;
 };
 
 export const LENGTH_KIND_OPTIONS: { value: RunLengthKind | 'auto'; label: string }[] = [
@@ -39,8 +43,10 @@ export const BuildBar = forwardRef<
     fromLabel: string | null;
     units: LengthUnits;
     disabled: boolean;
+    /** Set when the chosen direction doubles back on the run: the run's direction (the return's side is square to it). */
+    turningBackFrom: { x: number; y: number; z: number } | null;
   }
->(function BuildBar({ draft, onDraft, onAdd, fromLabel, units, disabled }, lengthRef) {
+>(function BuildBar({ draft, onDraft, onAdd, fromLabel, units, disabled, turningBackFrom }, lengthRef) {
   const axes = Object.entries(PLANT_AXES) as [PlantAxis, (typeof PLANT_AXES)[PlantAxis]][];
   return (
     <form
@@ -106,6 +112,15 @@ export const BuildBar = forwardRef<
             />
           ))}
         </fieldset>
+      ) : null}
+      {turningBackFrom ? (
+        <AxisPicker
+          label="180° return steps to"
+          value={draft.returnSide}
+          onPick={(a) => onDraft({ ...draft, returnSide: a })}
+          allowed={(a) => perpendicular(PLANT_AXES[a].vector, turningBackFrom)}
+          disabled={disabled}
+        />
       ) : null}
       <div className="w-36">
         <LengthInput

@@ -138,3 +138,25 @@ describe('extendRun', () => {
     expect(Math.abs((elbow.ends[0]!.takeOffMm ?? 0) - R * Math.tan(rad / 2))).toBeLessThan(1 + MM);
   });
 });
+
+describe('extendRun with a 180° return', () => {
+  it('turns straight back through a return stepping to the chosen side: legs O apart', () => {
+    // ASME B16.9 LR 180° return centre-to-centre O, NPS 6 = 457 mm (shared reference §2, S; tolerance ±6 mm).
+    const m = newModel();
+    startWithFlange(m, '6');
+    extend(m, 'east', 1500);
+    const tip = m.getSnapshot().design!.nodes.at(-1)!.id;
+    const side = { x: 0, y: 1, z: 0 };
+    const wrongSide = m.edit((d, ctx) => extendRun(d, { fromNodeId: tip, direction: { x: -1, y: 0, z: 0 }, lengthMm: 1500, returnSide: { x: 1, y: 1, z: 0 } }, ctx));
+    expect(wrongSide.ok).toBe(false);
+    const r = m.edit((d, ctx) => extendRun(d, { fromNodeId: tip, direction: { x: -1, y: 0, z: 0 }, lengthMm: 1500, returnSide: side }, ctx));
+    expect(r.ok).toBe(true);
+    const d = m.getSnapshot().design!;
+    expect(d.nodes.map((n) => n.kind)).toEqual(['end', 'return', 'end']);
+    const res = resultOf(m);
+    expect(errors(m)).toEqual([]);
+    const end = res.openEnds.find((o) => o.nodeId === d.nodes[2]!.id)!;
+    expect(Math.abs(end.facePoint.y - 457)).toBeLessThanOrEqual(6);
+    expect(end.facePoint.x).toBeCloseTo(0, 3);
+  });
+});

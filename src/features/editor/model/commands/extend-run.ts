@@ -6,7 +6,7 @@ import type { Nps } from '../../../../../shared/standards/nps';
 import { incomingRun, nodeById, outgoingRuns, runsAt } from '../design-graph';
 import { refreshLengthKinds, tidyMm, withNode } from '../design-edit';
 import { describeDirection } from '../plant-directions';
-import { angleBetweenDeg, normalise, scale, tidy, vecLength } from '../vector';
+import { angleBetweenDeg, normalise, perpendicular, scale, tidy, vecLength } from '../vector';
 import { selectNode } from '../editor-selection';
 import type { CommandContext } from './command-context';
 import { done, fail, type CommandResult } from './command-result';
@@ -24,6 +24,12 @@ export type ExtendRunArgs = {
   nps?: Nps;
   /** Radius of the elbow made where the line turns. Default long. */
   elbowRadius?: ElbowRadius;
+  /**
+   * Turning straight back: the side the 180° return steps to (square to the run). The
+   * old end becomes a return and the new run runs antiparallel, offset by the return's
+   * centre-to-centre (ASME B16.9 O).
+   */
+  returnSide?: Vec3;
 };
 
 /** Largest turn one elbow makes, degrees (ASME B16.9 elbows are 90° at most). */
@@ -99,6 +105,20 @@ export function extendRun(design: SpoolDesign, args: ExtendRunArgs, ctx: Command
   }
   const run: SpoolRun = { id: runId, from: from.id, to: tipId, direction: dir, length: { mm, kind: 'centre-to-centre' } };
   const turn = angleBetweenDeg(incoming.direction, dir);
+  if (turn > 179.99 && args.returnSide) {
+    if (!perpendicular(args.returnSide, incoming.direction)) return fail('A return steps to one side: choose a side square to the run');
+    const ret: SpoolNode = {
+      id: from.id,
+      kind: 'return',
+      ...(from.label ? { label: from.label } : {}),
+      radius: args.elbowRadius ?? 'long',
+      offsetDirection: tidy(normalise(args.returnSide)),
+    };
+    let next = withNode(design, ret);
+    next = { ...next, nodes: [...next.nodes, { id: tipId, kind: 'end', end: tipEnd }], runs: [...next.runs, run] };
+    next = applyKind(refreshLengthKinds(next, [from.id, tipId]), run.id, args.lengthKind);
+    return done(next, `Return and run ${fmt(mm)} ${words}`, { select: selectNode(tipId) });
+  }
   const problem = turnError(turn);
   if (problem) return fail(problem);
   return finishTurn(design, from, run, tipId, tipEnd, args, `Run ${fmt(mm)} ${words}`);
@@ -106,7 +126,7 @@ export function extendRun(design: SpoolDesign, args: ExtendRunArgs, ctx: Command
 
 function turnError(turnDeg: number): string | null {
   if (turnDeg < 0.01) return 'That is the direction the line already runs: change the run length instead';
-  if (turnDeg > 179.99) return 'That doubles straight back: a 180° turn needs two elbows (turn 90° twice)';
+  if (turnDeg > 179.99) return 'That doubles straight back: use a 180° return (choose its side) or two elbows';
   if (turnDeg > MAX_ELBOW_DEG + 0.01) {
     return `One elbow turns at most 90°; this turn is ${turnDeg.toFixed(1)}°. Turn in two steps`;
   }
