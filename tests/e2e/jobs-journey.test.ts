@@ -193,7 +193,7 @@ describe('jobs and spools in the browser', () => {
     // The sheet is for every role; the link the page builds answers with a PDF.
     const spoolId = page.url().split('/').pop()!;
     const sheet = await page.request.get(`${app.baseUrl}/api/spools/${spoolId}/sheet.pdf?paper=A4`);
-    expect(sheet.status()).toBe(200);
+    expect(sheet.status(), await sheet.text()).toBe(200);
     expect(sheet.headers()['content-type']).toBe('application/pdf');
 
     // The session ends mid-work (expired, or signed out elsewhere): the next request sends
@@ -321,6 +321,11 @@ describe('jobs and spools in the browser', () => {
     await page.goto(`${app.baseUrl}/no-such-page`);
     await page.getByRole('heading', { name: 'No such page' }).waitFor();
     await saveScreenshot(page, '16-not-found');
+    // A record id that does not exist (or belongs to another shop), or is not an id at all.
+    await page.goto(`${app.baseUrl}/spools/7f1d2c3b-0000-4000-8000-000000000000`);
+    await page.getByRole('heading', { name: 'No such spool' }).waitFor();
+    await page.goto(`${app.baseUrl}/jobs/not-an-id`);
+    await page.getByRole('heading', { name: 'No such job' }).waitFor();
     await page.close();
   });
 });
