@@ -176,6 +176,8 @@ export type EndPrep = {
   label: string;
   /** The node this end meets. */
   nodeId: string;
+  /** Mitre ends: the cut angle from square, degrees (for the mitre template). */
+  mitreCutDeg?: number;
 };
 
 /** One pipe piece of the cut list. */

@@ -36,7 +36,12 @@ export function endPrepFor(
     case 'mitre': {
       const b = bevel();
       const cut = Math.round((end.mitreCutDeg ?? 0) * 100) / 100;
-      return { type: 'mitre', label: `mitre ${cut}°${b.type === 'square' ? '' : ` + ${b.label}`}`, nodeId };
+      return {
+        type: 'mitre',
+        label: `mitre ${cut}°${b.type === 'square' ? '' : ` + ${b.label}`}`,
+        nodeId,
+        mitreCutDeg: end.mitreCutDeg ?? 0,
+      };
     }
   }
 }
