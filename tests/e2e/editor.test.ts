@@ -128,6 +128,7 @@ describe('spool editor in the browser', () => {
     await page.reload();
     await page.locator('[data-testid="cut-list"] tbody tr').nth(2).waitFor();
     expect(await cutListOnScreen(page)).toEqual(onScreen);
+    await waitSaved(page);
     await page.getByRole('tab', { name: /Bolt holes/ }).click();
     await saveScreenshot(page, 'editor-03-bolt-holes');
     await page.getByRole('tab', { name: /Weight/ }).click();

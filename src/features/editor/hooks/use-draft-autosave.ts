@@ -35,7 +35,8 @@ export function useDraftAutosave({
   enabled: boolean;
 }) {
   const queryClient = useQueryClient();
-  const [status, setStatus] = useState<SaveStatus>(enabled && draft ? 'saved' : 'off');
+  // What the server holds is saved until an edit says otherwise; 'off' is derived below.
+  const [status, setStatus] = useState<SaveStatus>('saved');
   const [error, setError] = useState<unknown>(null);
   const [conflict, setConflict] = useState<DraftConflict | null>(null);
   const versionRef = useRef(draft?.version ?? 0);
@@ -142,13 +143,6 @@ export function useDraftAutosave({
     setStatus('saved');
   }, [conflict, model, draftId, spoolId]);
 
-  /** Marks the model's current design as what the server holds (after a load). */
-  const markLoaded = useCallback((version: number) => {
-    versionRef.current = version;
-    savedRevisionRef.current = model.getSnapshot().designRevision;
-    setStatus(enabled && draftId ? 'saved' : 'off');
-  }, [model, enabled, draftId]);
-
   /** Opens a conflict found at load time (a kept local copy made on an older version). */
   const raiseConflict = useCallback((mine: SpoolDesign, theirs: Revision) => {
     const parsed = spoolDesignSchema.safeParse(theirs.design);
@@ -157,5 +151,5 @@ export function useDraftAutosave({
     setStatus('conflict');
   }, []);
 
-  return { status: enabled && draftId ? status : ('off' as SaveStatus), error, conflict, saveNow, keepMine, takeTheirs, markLoaded, raiseConflict, version: () => versionRef.current };
+  return { status: enabled && draftId ? status : ('off' as SaveStatus), error, conflict, saveNow, keepMine, takeTheirs, raiseConflict, version: () => versionRef.current };
 }
