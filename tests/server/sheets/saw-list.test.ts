@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { formatFtIn, formatMm } from '../../../shared/units/length-format';
-import { renderSawList, sawListGroups, type SawListSpool } from '../../../server/modules/sheets/pdf/saw-list';
+import { renderSawList } from '../../../server/modules/sheets/pdf/saw-list';
+import { sawListGroups, type SawListSpool } from '../../../server/modules/sheets/pdf/saw-list-groups';
 import { readPdfText, renderPageInk } from './helpers/pdf-reading';
 import { computedSample, SAMPLE_FILES } from './helpers/sheet-fixtures';
 

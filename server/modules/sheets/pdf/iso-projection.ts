@@ -1,6 +1,13 @@
 import type { Vec3 } from '../../../../shared/schemas/spool-design-primitives.schema';
 import type { Rect } from './page-setup';
 
+/** Unit vectors of the plant axes: x east, y north, z up. */
+export const PLANT_AXES: Record<'x' | 'y' | 'z', Vec3> = {
+  x: { x: 1, y: 0, z: 0 },
+  y: { x: 0, y: 1, z: 0 },
+  z: { x: 0, y: 0, z: 1 },
+};
+
 /** A point in the drawing plane, mm (u to the right, v up). */
 export interface IsoPoint {
   u: number;

@@ -4,7 +4,8 @@ import { formatLength, type LengthUnits } from '../../../../shared/units/length-
 import { flangeDetailsBlock, flangePairsBlock } from './flange-details';
 import { flowBlocks, type FlowBlock } from './flow-layout';
 import { paragraphBlock } from './paragraph-block';
-import { drawIsometric, type PrintedDimension } from './iso-drawing';
+import type { PrintedDimension } from './iso-dimensions';
+import { drawIsometric } from './iso-drawing';
 import type { PaperSize, Rect } from './page-setup';
 import type { SheetHeader } from './sheet-header';
 import { SheetDocument, type DocumentMarks } from './sheet-document';
