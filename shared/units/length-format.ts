@@ -30,7 +30,9 @@ function gcd(a: number, b: number): number {
  */
 export function formatFtIn(mm: number): string {
   if (!Number.isFinite(mm)) return INVALID_LENGTH_TEXT;
-  const sixteenths = Math.round((Math.abs(mm) / MM_PER_INCH) * 16);
+  // The nudge keeps exact halves (3/32" = 2.38125 mm) rounding up: mm → in division
+  // lands a hair under .5 in binary floating point.
+  const sixteenths = Math.round((Math.abs(mm) / MM_PER_INCH) * 16 + 1e-9);
   if (sixteenths === 0) return '0"';
   const sign = mm < 0 ? '-' : '';
   const feet = Math.floor(sixteenths / 192);

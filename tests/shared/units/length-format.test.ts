@@ -46,6 +46,13 @@ describe('formatFtIn', () => {
     expect(formatFtIn(inch(1 / 40))).toBe(`0"`);
   });
 
+  it('rounds exact halves of a sixteenth up, as typed in millimetres (3/32" = 2.38125 mm → 1/8")', () => {
+    // 3/32 in is exactly 2.38125 mm (1 in = 25.4 mm by definition); mm → in division lands a
+    // hair under the half in floating point, which used to round it down to 1/16".
+    expect(formatFtIn(2.38125)).toBe(`1/8"`);
+    expect(formatFtIn(inch(5 + 3 / 32))).toBe(`5 1/8"`);
+  });
+
   it('puts a minus in front of negative lengths', () => {
     expect(formatFtIn(-inch(15.5))).toBe(`-1'-3 1/2"`);
     expect(formatFtIn(-inch(0.001))).toBe(`0"`);
