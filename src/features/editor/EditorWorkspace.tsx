@@ -28,6 +28,7 @@ import { SpoolSpecPanel } from './panels/SpoolSpecPanel';
 import { ViewBar } from './panels/ViewBar';
 import { FileMenu } from './panels/FileMenu';
 import SpoolCanvas from './scene/SpoolCanvas';
+import { labelsThinned } from './scene/DimensionLabels';
 
 const DIRECTION_ACTIONS: Partial<Record<ShortcutAction, PlantAxis>> = {
   'dir-east': 'east',
@@ -250,6 +251,9 @@ export function EditorWorkspace({
           <div className="absolute left-2 top-2">
             <ViewBar view={view} onPreset={(p) => model.showPreset(p)} onLabels={(labels) => model.setView({ labels })} onCog={(on) => model.setView({ showCentreOfGravity: on })} />
           </div>
+          {result && labelsThinned(result) ? (
+            <p className="absolute right-2 top-2 max-w-xs rounded bg-white/90 px-2 py-1 text-xs text-ink-800 shadow-sm">Large spool: dimension labels show around the selection.</p>
+          ) : null}
           {result && result.weights.emptyKg > 0 ? (
             <p className="absolute bottom-2 left-2 max-w-[90%] rounded bg-white/90 px-2 py-1 text-xs text-ink-800 shadow-sm">
               About <strong>{Math.round(result.weights.emptyKg).toLocaleString('en-GB')} kg</strong> empty. Weights and centres of gravity are estimates; lifts are planned by a competent person.

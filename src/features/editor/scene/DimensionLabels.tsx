@@ -4,6 +4,7 @@ import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema';
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
 import type { ViewPrefs } from '../model/view-prefs';
+import type { Selection } from '../model/editor-selection';
 import { toScene } from './scene-units';
 import { isFlangeFace } from '../model/design-edit';
 
@@ -21,11 +22,13 @@ export const DimensionLabels = memo(function DimensionLabels({
   design,
   labels,
   units,
+  selection,
 }: {
   result: SpoolResult;
   design: SpoolDesign;
   labels: ViewPrefs['labels'];
   units: LengthUnits;
+  selection: Selection;
 }) {
   const items = useMemo(() => {
     const ends = new Set(design.nodes.filter((n) => n.kind === 'end').map((n) => n.id));
@@ -60,8 +63,16 @@ export const DimensionLabels = memo(function DimensionLabels({
     if (labels.welds) {
       for (const w of result.welds) out.push({ key: `w-${w.mark}`, at: toScene(w.position), text: w.mark, tone: 'weld' });
     }
-    return out;
-  }, [result, design, labels, units]);
+    if (out.length <= MAX_LABELS) return out;
+    // Too many to read (and to move every frame): keep those around the selection.
+    const near = nearSelection(design, selection);
+    const piecesNear = new Set(result.pieces.filter((p) => p.runIds.some((id) => near.runs.has(id))).map((p) => p.mark));
+    const weldsNear = new Set(result.welds.filter((w) => near.nodes.has(w.nodeId) || (w.runId && near.runs.has(w.runId))).map((w) => w.mark));
+    return out.filter((l) => {
+      const id = l.key.slice(2);
+      return l.key.startsWith('d-') ? near.runs.has(id) : l.key.startsWith('c-') ? piecesNear.has(id) : weldsNear.has(id);
+    });
+  }, [result, design, labels, units, selection]);
 
   return (
     <group name="labels">
@@ -75,6 +86,35 @@ export const DimensionLabels = memo(function DimensionLabels({
     </group>
   );
 });
+
+/** Most labels drawn at once; past this only those around the selection show. */
+export const MAX_LABELS = 150;
+
+/** True when a result has more labels than are drawn at once. */
+export function labelsThinned(result: SpoolResult): boolean {
+  return result.runs.length + result.pieces.length + result.welds.length > MAX_LABELS;
+}
+
+/** The selected run or node, its neighbouring runs and their nodes. */
+function nearSelection(design: SpoolDesign, selection: Selection): { runs: Set<string>; nodes: Set<string> } {
+  const runs = new Set<string>();
+  const nodes = new Set<string>();
+  if (!selection) return { runs, nodes };
+  if (selection.type === 'node') nodes.add(selection.id);
+  else {
+    const r = design.runs.find((x) => x.id === selection.id);
+    if (r) {
+      nodes.add(r.from);
+      nodes.add(r.to);
+    }
+  }
+  for (const r of design.runs) if (nodes.has(r.from) || nodes.has(r.to)) runs.add(r.id);
+  for (const r of design.runs) if (runs.has(r.id)) {
+    nodes.add(r.from);
+    nodes.add(r.to);
+  }
+  return { runs, nodes };
+}
 
 type P = { x: number; y: number; z: number };
 

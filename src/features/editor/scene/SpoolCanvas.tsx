@@ -69,7 +69,7 @@ export default function SpoolCanvas({
           <SpoolModel result={result} selection={selection} onSelect={onSelect} />
         </group>
       ) : null}
-      {result && design && !orbiting ? <DimensionLabels result={result} design={design} labels={view.labels} units={units} /> : null}
+      {result && design && !orbiting ? <DimensionLabels result={result} design={design} labels={view.labels} units={units} selection={selection} /> : null}
       {result && cog && view.showCentreOfGravity && !orbiting ? (
         <CentreOfGravityMarker position={cog} emptyKg={result.weights.emptyKg} sizeMm={cogMm} />
       ) : null}
