@@ -49,7 +49,7 @@ export function ElbowMesh({
   const arc = (Math.max(0.5, angleDeg) * Math.PI) / 180;
   return (
     <mesh position={pose.position} quaternion={pose.quaternion} onClick={onClick}>
-      <torusGeometry args={[mmToScene(bendRadiusMm), mmToScene(odMm / 2), 16, Math.max(6, Math.round(angleDeg / 6)), arc]} />
+      <torusGeometry args={[mmToScene(bendRadiusMm), mmToScene(odMm / 2), 14, Math.max(6, Math.round(angleDeg / 7)), arc]} />
       <meshStandardMaterial color={colour} metalness={0.35} roughness={0.5} />
     </mesh>
   );
