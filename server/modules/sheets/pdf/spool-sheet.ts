@@ -72,7 +72,8 @@ function rootDatum(
   result: SpoolResult,
 ): { label: string; position: SpoolResult['workPoints'][number]['position'] } {
   const targets = new Set(design.runs.map((r) => r.to));
-  const root = design.nodes.find((n) => !targets.has(n.id)) ?? design.nodes[0]!;
+  const root = design.nodes.find((n) => !targets.has(n.id)) ?? design.nodes[0];
+  if (!root) return { label: 'the design origin', position: design.origin };
   const position = result.workPoints.find((w) => w.nodeId === root.id)?.position ?? design.origin;
   return { label: `the work point of ${root.label ? `${root.label} (${root.id})` : root.id}`, position };
 }
