@@ -1,4 +1,4 @@
-import { useCallback, useMemo, useRef, useState, type ReactNode } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import type { Group } from 'three';
 import type { LengthUnits } from '../../../shared/units/length-format';
 import type { Nps } from '../../../shared/standards/nps';
@@ -74,6 +74,7 @@ export function EditorWorkspace({
   const [pendingDelete, setPendingDelete] = useState<{ id: string; count: number } | null>(null);
   const lengthRef = useRef<HTMLInputElement>(null);
   const rootRef = useRef<HTMLDivElement>(null);
+  const asideRef = useRef<HTMLElement>(null);
   const modelGroup = useRef<Group | null>(null);
   // Begun: it has runs, or its main size was chosen on the start panel.
   const begun = !!design && (design.runs.length > 0 || !!design.spec?.nps);
@@ -202,6 +203,12 @@ export function EditorWorkspace({
     }
   });
 
+  // A new selection starts at the top of its properties, not where the last one was scrolled.
+  const selectedKey = selection ? `${selection.type}:${selection.id}` : '';
+  useEffect(() => {
+    asideRef.current?.scrollTo({ top: 0 });
+  }, [selectedKey]);
+
   const selectedRun = design && selection?.type === 'run' ? runById(design, selection.id) : undefined;
   const selectedNode = design && selection?.type === 'node' ? nodeById(design, selection.id) : undefined;
   const onSelect = useCallback((s: typeof selection) => model.select(s), [model]);
@@ -260,7 +267,7 @@ export function EditorWorkspace({
             </p>
           ) : null}
         </div>
-        <aside aria-label="Properties" className="max-h-[32rem] overflow-auto rounded-md border border-steel-200 bg-white p-3">
+        <aside ref={asideRef} aria-label="Properties" className="max-h-[32rem] overflow-auto rounded-md border border-steel-200 bg-white p-3">
           {design && selectedRun ? (
             <RunProperties model={model} design={design} result={result} run={selectedRun} units={units} readOnly={readOnly} insertRequest={insertRequest} onDelete={requestDelete} />
           ) : design && selectedNode ? (
