@@ -49,7 +49,13 @@ export function drawOverallDimensions(
     const loSet = pagePoints.filter((pp) => pp.p[axis] <= min + 0.5);
     const hiSet = pagePoints.filter((pp) => pp.p[axis] >= max - 0.5);
     // Extension lines run along another plant axis, on whichever side keeps them shortest.
-    const d = unit2(isoProjectDirection(AXES[axis]));
+    const projected = isoProjectDirection(AXES[axis]);
+    const d = unit2(projected);
+    const expectedLength = size * view.scale * Math.hypot(projected.u, projected.v);
+    const text = `overall ${AXIS_NAME[axis]} ${formatLength(size, units)}`;
+    doc.font('cond-bold').fontSize(dimSize);
+    // Too short to carry its own text: the overall line under the drawing gives it.
+    if (expectedLength < doc.widthOfString(text) + 12) continue;
     const others = (['x', 'y', 'z'] as const).filter((k) => k !== axis);
     let best: { a: PagePoint; b: PagePoint; a2: PagePoint; b2: PagePoint; cost: number } | null = null;
     for (const k of others) {
@@ -82,6 +88,10 @@ export function drawOverallDimensions(
           }
           const fa = la.f;
           const fb = lb.f;
+          // The line must read true: between points that also differ along the other axes, its
+          // drawn length can be far from the size it is labelled with. Such a pair is not used.
+          const drawnLength = Math.hypot(fb.x - fa.x, fb.y - fa.y);
+          if (Math.abs(drawnLength - expectedLength) > 0.15 * expectedLength) continue;
           const inside = [fa, fb].every(
             (f) =>
               f.x > area.x + 10 &&
@@ -97,7 +107,6 @@ export function drawOverallDimensions(
     }
     // One that cannot sit on the page is left to the overall line printed under the drawing.
     if (!best || best.cost >= 10_000) continue;
-    const text = `overall ${AXIS_NAME[axis]} ${formatLength(size, units)}`;
     const drawn = drawDimensionBetween(doc, best.a, best.b, best.a2, best.b2, text, {
       size: dimSize,
       color: INK.black,
