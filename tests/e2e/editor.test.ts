@@ -21,6 +21,16 @@ async function cutListOnScreen(page: Page): Promise<{ mark: string; mm: number; 
   );
 }
 
+async function streamBytes(stream: NodeJS.ReadableStream): Promise<Buffer> {
+  const chunks: Buffer[] = [];
+  for await (const chunk of stream) chunks.push(Buffer.isBuffer(chunk) ? chunk : Buffer.from(chunk));
+  return Buffer.concat(chunks);
+}
+
+async function streamText(stream: NodeJS.ReadableStream): Promise<string> {
+  return (await streamBytes(stream)).toString('utf8');
+}
+
 async function waitSaved(page: Page): Promise<void> {
   await page.locator('[data-testid="save-status"][data-status="saved"]').waitFor({ timeout: 15_000 });
 }
@@ -135,6 +145,11 @@ describe('spool editor in the browser', () => {
     await page.getByText(/lifts are planned by a competent person/).first().waitFor();
     await page.getByRole('button', { name: 'Plan' }).click();
     await saveScreenshot(page, 'editor-04-plan-weight');
+    // A file that is not a spool design is refused with its reason, and nothing changes.
+    await page.getByLabel('Design file to import').setInputFiles({ name: 'wrong.json', mimeType: 'application/json', buffer: Buffer.from('{"format":"tackline.spool","version":1,"origin":{"x":0,"y":0,"z":0},"nodes":[],"runs":[]}') });
+    await page.getByTestId('editor-status').getByText(/Not a valid spool design: nodes/).waitFor();
+    await page.getByRole('tab', { name: /Cut list/ }).click();
+    expect(await cutListOnScreen(page)).toEqual(onScreen);
     expect(problems).toEqual([]);
     await signOut(page);
     await page.close();
@@ -208,6 +223,20 @@ describe('spool editor in the browser', () => {
       await page.locator('body').press('Delete');
       expect(await page.locator('[data-testid="cut-list"] tbody tr').count()).toBe(3);
       await saveScreenshot(page, `editor-05-read-only-${who}`);
+      if (who === 'fabricator') {
+        // What they may take away: the design file and a glTF model.
+        const [jsonDownload] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Design file' }).click()]);
+        const saved = JSON.parse(await streamText(await jsonDownload.createReadStream())) as { format: string; nodes: unknown[] };
+        expect(saved.format).toBe('tackline.spool');
+        expect(saved.nodes).toHaveLength(6);
+        const [glb] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'glTF' }).click()]);
+        const bytes = await streamBytes(await glb.createReadStream());
+        expect(bytes.subarray(0, 4).toString('latin1')).toBe('glTF');
+        expect(glb.suggestedFilename()).toBe('CW-990-S01.glb');
+        // On a tablet held upright the same screen still works.
+        await page.setViewportSize({ width: 820, height: 1180 });
+        await saveScreenshot(page, 'editor-08-tablet-fabricator');
+      }
 
       const spool = (await (await page.request.get(`${app.baseUrl}/api/spools/${spoolId}`)).json()) as Spool;
       const put = await page.request.put(`${app.baseUrl}/api/spools/${spoolId}/draft`, {
