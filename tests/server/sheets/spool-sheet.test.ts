@@ -88,6 +88,27 @@ describe.each(SAMPLE_FILES)('spool sheet of %s', (file) => {
     },
   );
 
+  it('prints each flange’s bolt circle and hole rotation, and the weights, as the engine computed them', async () => {
+    const out = await renderSpoolSheet({
+      header: testHeader('CW'),
+      design,
+      result,
+      units: 'mm',
+      paper: 'A3',
+    });
+    const text = (await readPdfText(out.pdf)).map((p) => p.text).join(' ');
+    for (const f of result.flanges) {
+      const ref = f.reference === 'plant-vertical' ? 'UP' : 'N';
+      expect(text).toContain(`Hole 1: ${Number(f.rotationDeg.toFixed(1))}° CW from ${ref}`);
+      expect(text).toContain(`BC ${formatMm(f.boltCircleMm!)}`);
+      expect(text).toContain(f.straddles ? 'Straddles centrelines' : 'On');
+    }
+    expect(text).toContain(`${result.weights.emptyKg.toFixed(1)} kg`);
+    expect(text).toContain(`${result.weights.waterFilledKg.toFixed(1)} kg`);
+    for (const item of result.bom.items)
+      if (item.category === 'pipe') expect(text).toContain(formatMm(item.totalCutMm!));
+  });
+
   it('has a title block on every sheet, with n of m, and the cautions', async () => {
     const out = await renderSpoolSheet({
       header: testHeader('CW-201-S03'),
