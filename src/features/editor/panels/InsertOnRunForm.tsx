@@ -13,12 +13,13 @@ import { PanelButton, SmallSelect, npsOptions } from './panel-bits';
 import { END_OPTIONS, endFromChoice, type EndChoice } from './end-options';
 
 /** The fittings that go on a run. */
-export type InsertType = 'tee' | 'set-on-branch' | 'half-coupling' | 'reducer';
+export type InsertType = 'tee' | 'set-on-branch' | 'half-coupling' | 'branch-outlet' | 'reducer';
 
 const TYPE_OPTIONS: { value: InsertType; label: string }[] = [
   { value: 'set-on-branch', label: 'Set-on branch' },
   { value: 'tee', label: 'Tee' },
   { value: 'half-coupling', label: 'Socket (half coupling)' },
+  { value: 'branch-outlet', label: 'Branch outlet (maker\'s height)' },
   { value: 'reducer', label: 'Reducer (size change)' },
 ];
 
@@ -53,6 +54,8 @@ export function InsertOnRunForm({
   const [reducerType, setReducerType] = useState<'concentric' | 'eccentric'>('concentric');
   const [orientation, setOrientation] = useState('0');
   const [socketBranch, setSocketBranch] = useState(false);
+  const [outletEnd, setOutletEnd] = useState<'butt' | 'socket'>('socket');
+  const [outletHeightMm, setOutletHeightMm] = useState<number | null>(null);
   const distanceRef = useRef<HTMLInputElement>(null);
 
   // A keyboard request picks the type (during render, React's pattern for derived state)…
@@ -68,7 +71,8 @@ export function InsertOnRunForm({
     distanceRef.current?.select();
   }, [request]);
 
-  const hasBranch = type === 'tee' || type === 'set-on-branch' || (type === 'half-coupling' && socketBranch);
+  const small = type === 'half-coupling' || type === 'branch-outlet';
+  const hasBranch = type === 'tee' || type === 'set-on-branch' || (small && socketBranch);
   const submit = () => {
     if (distanceMm === null) return;
     let component: InlineComponent;
@@ -77,6 +81,13 @@ export function InsertOnRunForm({
     else if (type === 'half-coupling') {
       const deg = Number(orientation);
       component = { kind: 'half-coupling', branchNps, ...(!socketBranch && Number.isFinite(deg) ? { orientationDeg: deg } : {}) };
+    } else if (type === 'branch-outlet') {
+      if (outletHeightMm === null) {
+        model.apply(() => ({ ok: false, error: "Give the outlet's height from the maker's catalogue" }));
+        return;
+      }
+      const deg = Number(orientation);
+      component = { kind: 'branch-outlet', branchNps, outletEnd, heightMm: outletHeightMm, ...(!socketBranch && Number.isFinite(deg) ? { orientationDeg: deg } : {}) };
     } else component = { kind: 'reducer', toNps, type: reducerType, ...(reducerType === 'eccentric' ? { flatSide: 'top' as const } : {}) };
     const branch =
       hasBranch && branchAxis && branchMm !== null
@@ -122,19 +133,33 @@ export function InsertOnRunForm({
         </div>
       ) : (
         <SmallSelect
-          label={type === 'half-coupling' ? 'Socket size' : 'Branch size'}
+          label={small ? 'Outlet size' : 'Branch size'}
           value={branchNps}
           onChange={(e) => setBranchNps(e.target.value as Nps)}
           options={npsOptions(type === 'half-coupling' ? smaller.filter((n) => compareNps(n, '2') <= 0) : smaller)}
         />
       )}
-      {type === 'half-coupling' ? (
+      {type === 'branch-outlet' ? (
+        <div className="grid grid-cols-2 gap-2">
+          <SmallSelect
+            label="Outlet end"
+            value={outletEnd}
+            onChange={(e) => setOutletEnd(e.target.value as 'butt' | 'socket')}
+            options={[
+              { value: 'socket', label: 'Socket weld' },
+              { value: 'butt', label: 'Butt weld' },
+            ]}
+          />
+          <LengthInput label="Height off the header" units={units} valueMm={outletHeightMm} onChange={setOutletHeightMm} hint="from the maker's catalogue" />
+        </div>
+      ) : null}
+      {small ? (
         <label className="flex items-center gap-2 text-sm">
           <input type="checkbox" checked={socketBranch} onChange={(e) => setSocketBranch(e.target.checked)} className="h-5 w-5" />
           with a branch pipe (else an open socket)
         </label>
       ) : null}
-      {type === 'half-coupling' && !socketBranch ? (
+      {small && !socketBranch ? (
         <label className="flex flex-col gap-0.5 text-xs font-semibold text-ink-700">
           Orientation, degrees clockwise looking along the run, 0 = top
           <input
