@@ -3,18 +3,16 @@
  * and outward direction, and the shape data a 3D scene or isometric needs.
  */
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
+import { cachedPipeOdMm } from './standards-cache';
 import type { ComponentEnd, ComponentResult, ComponentShape, OpenEnd } from './compute-result';
 import type { SpoolGraph } from './build-graph';
 import type { NodeAnalysis } from './node-analysis';
 import type { PlacedRun } from './place-runs';
-import { pipeOdMm } from '../standards/pipe-schedules';
 import type { Nps } from '../standards/nps';
 import { add, addScaled, cross, negate, normalise, UP } from './vec3-math';
 
 function od(nps: Nps | null): number | null {
-  if (!nps) return null;
-  const l = pipeOdMm(nps);
-  return l.ok ? l.value.odMm : null;
+  return nps ? cachedPipeOdMm(nps) : null;
 }
 
 /** Builds the component list, in tree order. */

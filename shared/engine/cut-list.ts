@@ -5,7 +5,7 @@
  * at or below; compound bevel above 22 mm).
  */
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
-import { pipeOdMm } from '../standards/pipe-schedules';
+import { cachedPipeOdMm } from './standards-cache';
 import type { PipePiece } from './compute-result';
 import { endPrepFor } from './end-prep';
 import type { SpoolGraph } from './build-graph';
@@ -164,8 +164,7 @@ function checkBranchClearance(
 }
 
 function pipeOdOf(nps: NonNullable<RunPipe['nps']>): number | null {
-  const l = pipeOdMm(nps);
-  return l.ok ? l.value.odMm : null;
+  return nps ? cachedPipeOdMm(nps) : null;
 }
 
 function checkLength(piece: PipePiece, pipe: RunPipe, issues: IssueSink): void {

@@ -14,6 +14,7 @@ import type { Nps } from '../standards/nps';
 import { elbowDimensions, type ElbowDimensions, type ElbowKind } from '../standards/butt-weld-fittings';
 import {
   pipeDimensions,
+  pipeOdMm,
   scheduleLabel,
   type PipeDimensions,
   type Schedule,
@@ -23,6 +24,17 @@ const pipes = new Map<string, Lookup<PipeDimensions>>();
 const flanges = new Map<string, Lookup<FlangeDimensions>>();
 const elbows = new Map<string, Lookup<ElbowDimensions>>();
 const labels = new Map<Schedule, string>();
+const ods = new Map<Nps, number | null>();
+
+/** Pipe outside diameter for a size (ASME B36.10M), mm, memoised; null when not tabulated. */
+export function cachedPipeOdMm(nps: Nps): number | null {
+  const hit = ods.get(nps);
+  if (hit !== undefined) return hit;
+  const l = pipeOdMm(nps);
+  const od = l.ok ? l.value.odMm : null;
+  ods.set(nps, od);
+  return od;
+}
 
 /** {@link elbowDimensions}, memoised. */
 export function cachedElbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensions> {

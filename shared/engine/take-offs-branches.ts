@@ -5,8 +5,8 @@
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
+import { cachedPipeOdMm } from './standards-cache';
 import { compareNps, type Nps } from '../standards/nps';
-import { pipeOdMm } from '../standards/pipe-schedules';
 import { socketWeldDimensions } from '../standards/socket-weld-fittings';
 import type { Connection } from './classify-nodes';
 import { branchDirectionFromOrientation, orientationOfBranch } from './clock-angles';
@@ -27,9 +27,7 @@ function headerAxis(a: Connection): Vec3 {
 }
 
 function odOf(nps: Nps | null): number | null {
-  if (!nps) return null;
-  const l = pipeOdMm(nps);
-  return l.ok ? l.value.odMm : null;
+  return nps ? cachedPipeOdMm(nps) : null;
 }
 
 /** Analyses a set-on branch: header legs `a`, `b`, branch leg `branch` at `angleDeg`. */
