@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
-import { Matrix4, Quaternion, Vector3 } from 'three';
 import type { Vec3 } from '../../../../shared/schemas/spool-design-primitives.schema';
-import { mmToScene, toVector3 } from './scene-units';
+import { mmToScene } from './scene-units';
+import { bendPose } from './bend-pose';
 import type { PickHandler } from './PipeSegment';
 
 /**
@@ -34,18 +34,7 @@ export function ElbowMesh({
   /** For a 180° return: the direction from the centre to the middle of the arc. */
   sweepHint?: Vec3;
 }) {
-  const pose = useMemo(() => {
-    const c = toVector3(arcCentre);
-    const u = toVector3(a).sub(c).normalize();
-    const toB = toVector3(b).sub(c);
-    let v = toB.clone().sub(u.clone().multiplyScalar(toB.dot(u)));
-    // A 180° return: b is opposite a, so take the sweep side from the bend plane.
-    if (v.lengthSq() < 1e-12) v = sweepHint ? toVector3(sweepHint) : toVector3(planeNormal).normalize().cross(u);
-    v.normalize();
-    const w = new Vector3().crossVectors(u, v);
-    const q = new Quaternion().setFromRotationMatrix(new Matrix4().makeBasis(u, v, w));
-    return { position: c, quaternion: q };
-  }, [arcCentre, a, b, planeNormal, sweepHint]);
+  const pose = useMemo(() => bendPose(arcCentre, a, b, planeNormal, sweepHint), [arcCentre, a, b, planeNormal, sweepHint]);
   const arc = (Math.max(0.5, angleDeg) * Math.PI) / 180;
   return (
     <mesh position={pose.position} quaternion={pose.quaternion} onClick={onClick}>
