@@ -13,7 +13,7 @@ const SIN_VERTICAL = Math.sin((VERTICAL_TOLERANCE_DEG * Math.PI) / 180);
 /** The "12 o'clock" reference for a view along unit `viewDir`: the plant vertical, or north. */
 export function clockReference(viewDir: Vec3): { up: Vec3; reference: 'plant-vertical' | 'plant-north' } {
   const r = rejectFrom(UP, viewDir);
-  const len = Math.hypot(r.x, r.y, r.z);
+  const len = Math.sqrt(r.x * r.x + r.y * r.y + r.z * r.z);
   if (len > SIN_VERTICAL)
     return { up: { x: r.x / len, y: r.y / len, z: r.z / len }, reference: 'plant-vertical' };
   return { up: normalise(rejectFrom(NORTH, viewDir)) ?? NORTH, reference: 'plant-north' };

@@ -49,7 +49,7 @@ export function overallDimensions(
       const dx = c.position.x - centre.x;
       const dy = c.position.y - centre.y;
       const dz = c.position.z - centre.z;
-      const l = Math.hypot(dx, dy, dz);
+      const l = Math.sqrt(dx * dx + dy * dy + dz * dz);
       if (l > 1e-9 && c.shape.type === 'elbow') {
         const mid = { x: centre.x + (dx / l) * r, y: centre.y + (dy / l) * r, z: centre.z + (dz / l) * r };
         env = grow(env, mid, (c.ends[0]?.odMm ?? 0) / 2);

@@ -213,8 +213,10 @@ export function analyseReturn(
   const O = look?.ok ? look.value.centreToEndMm : null;
   const half = O !== null && u ? scale(u, O / 2) : { x: 0, y: 0, z: 0 };
   const takeOff = O !== null && u ? 0 : null;
-  const endA = { ...buttEnd(a, nps, takeOff, ctx.specAt(a.run.id).rootGapMm), portOffset: scale(half, -1) };
-  const endB = { ...buttEnd(b, nps, takeOff, ctx.specAt(b.run.id).rootGapMm), portOffset: half };
+  const endA = buttEnd(a, nps, takeOff, ctx.specAt(a.run.id).rootGapMm);
+  endA.portOffset = scale(half, -1);
+  const endB = buttEnd(b, nps, takeOff, ctx.specAt(b.run.id).rootGapMm);
+  endB.portOffset = half;
   return {
     node,
     role: ctx.role,

@@ -63,12 +63,10 @@ export function analyseSetOn(
     reach = setOnBranchReach(headerOd / 2, branchOd / 2, angleDeg);
   }
   const gap = ctx.specAt(branch.run.id).rootGapMm;
-  const brEnd: NodeEnd = {
-    ...buttEnd(branch, br.nps, reach ? reach.longPointMm : null, gap, 'branch'),
-    joint: 'set-on',
-    prep: 'saddle',
-    shortPointTakeOffMm: reach ? reach.shortPointMm : null,
-  };
+  const brEnd: NodeEnd = buttEnd(branch, br.nps, reach ? reach.longPointMm : null, gap, 'branch');
+  brEnd.joint = 'set-on';
+  brEnd.prep = 'saddle';
+  brEnd.shortPointTakeOffMm = reach ? reach.shortPointMm : null;
   const orientationDeg = orientationOfBranch(h, branch.outward);
   const square = Math.abs(angleDeg - 90) <= ctx.angleToleranceDeg;
   return {

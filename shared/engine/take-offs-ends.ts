@@ -20,7 +20,7 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
   const spec = ctx.specAt(conn.run.id);
   const nps = pipe.nps;
   const sched = cachedScheduleLabel(pipe.schedule);
-  const base = { node, role: ctx.role, nps, internalWelds: [] as NodeAnalysis['internalWelds'] };
+  const role = ctx.role;
   const end = node.end;
 
   switch (end.type) {
@@ -37,19 +37,20 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
       if (d && !wn && d.slipOnSetbackMm === undefined) {
         addError(ctx.issues, 'standard-data-missing', `No slip-on setback for NPS ${nps}`, node.id);
       }
-      const e = wn
-        ? buttEnd(conn, nps, takeOff, spec.rootGapMm, 'flange')
-        : {
-            ...socketEnd(conn, nps, takeOff),
-            joint: 'slip-on' as const,
-            weldType: 'slip-on-fillet' as const,
-            weldCount: 2,
-          };
+      const e = wn ? buttEnd(conn, nps, takeOff, spec.rootGapMm, 'flange') : socketEnd(conn, nps, takeOff);
+      if (!wn) {
+        e.joint = 'slip-on';
+        e.weldType = 'slip-on-fillet';
+        e.weldCount = 2;
+      }
       const kind = wn ? 'weld neck' : 'slip-on';
       const blind = end.blind === true;
       const description = `Flange ${kind} RF Class ${cls}, NPS ${nps ?? '?'}${wn ? ` ${sched} bore` : ''}, ASME B16.5${blind ? ', with blind flange' : ''}`;
       return {
-        ...base,
+        node,
+        role,
+        nps,
+        internalWelds: [],
         ends: [e],
         description,
         bom: nps
@@ -82,7 +83,10 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
       if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
       const len = look?.ok ? look.value.lengthMm : null;
       return {
-        ...base,
+        node,
+        role,
+        nps,
+        internalWelds: [],
         ends: [buttEnd(conn, nps, len, spec.rootGapMm)],
         description: `Cap, NPS ${nps ?? '?'} ${sched}, ASME B16.9`,
         bom: nps
@@ -102,7 +106,10 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
       if (d && len === null)
         addError(ctx.issues, 'standard-data-missing', `No socket-weld cap length for NPS ${nps}`, node.id);
       return {
-        ...base,
+        node,
+        role,
+        nps,
+        internalWelds: [],
         ends: [socketEnd(conn, nps, takeOff)],
         description: `Socket-weld cap Class 3000, NPS ${nps ?? '?'}, ASME B16.11`,
         bom: nps
@@ -120,7 +127,10 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
       const fieldWeld = end.fieldWeld ?? true;
       const allowance = end.fieldFitAllowanceMm ?? 0;
       return {
-        ...base,
+        node,
+        role,
+        nps,
+        internalWelds: [],
         ends: [openEnd(conn, nps, 'weld-bevel')],
         description: `Open end, bevelled${fieldWeld ? ' for field weld' : ''}${allowance > 0 ? `, ${allowance} mm field-fit allowance` : ''}`,
         bom: null,
@@ -130,7 +140,10 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
     }
     case 'plain':
       return {
-        ...base,
+        node,
+        role,
+        nps,
+        internalWelds: [],
         ends: [openEnd(conn, nps, 'square')],
         description: 'Open end, square cut',
         bom: null,
