@@ -48,9 +48,6 @@ export function setRunDirection(design: SpoolDesign, args: { runId: string; dire
   const feeding = incomingRun(design, run.from);
   if (fromNode?.kind === 'elbow' && feeding) checks.push([feeding.direction, dir, run.from]);
   if (toNode?.kind === 'elbow') for (const out of outgoingRuns(design, run.to)) checks.push([dir, out.direction, run.to]);
-  if (fromNode?.kind === 'end') {
-    // A root end with this as its only run: no bend to check.
-  }
   if (fromNode && fromNode.kind !== 'elbow' && fromNode.kind !== 'end' && fromNode.kind !== 'return' && feeding) {
     if (isThroughRun(design, run.id)) return fail(`Run ${run.id} passes straight through ${fromNode.kind} ${fromNode.id}; turn it with an elbow after the fitting`);
   }
