@@ -3,7 +3,7 @@ import { idParamsSchema } from '../../../shared/schemas/id.schema';
 import { ANY_ROLE, requireRole } from '../../common/auth.middleware';
 import { actorOf } from '../../common/session-actor';
 import { inputOf, validate } from '../../common/validate.middleware';
-import { sawListQuerySchema, spoolSheetQuerySchema } from './sheets.schema';
+import { sawListQuerySchema, spoolSheetQuerySchema } from '../../../shared/schemas/sheet-query.schema';
 import type { SheetsService } from './sheets.service';
 
 const spoolSheet = { params: idParamsSchema, query: spoolSheetQuerySchema };

@@ -18,7 +18,7 @@ import { renderSawList } from './pdf/saw-list';
 import type { SawListSpool } from './pdf/saw-list-groups';
 import type { RevisionHistoryEntry, SheetHeader } from './pdf/sheet-header';
 import { renderSpoolSheet } from './pdf/spool-sheet';
-import { MAX_SAW_LIST_SPOOLS, type SawListQuery, type SpoolSheetQuery } from './sheets.schema';
+import { MAX_SAW_LIST_SPOOLS, type SawListQuery, type SpoolSheetQuery } from '../../../shared/schemas/sheet-query.schema';
 
 /** A rendered PDF and the file name to offer. */
 export interface RenderedPdf {

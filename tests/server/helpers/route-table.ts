@@ -214,4 +214,16 @@ export const ROUTES: RouteCase[] = [
       body: { note: 'For fabrication' },
     }),
   },
+  {
+    name: 'GET /api/spools/:id/sheet.pdf',
+    method: 'get',
+    allowed: ALL,
+    prepare: async (ds, shop) => ({ path: `/api/spools/${(await jobAndSpool(ds, shop)).spool.id}/sheet.pdf` }),
+  },
+  {
+    name: 'GET /api/jobs/:id/saw-list.pdf',
+    method: 'get',
+    allowed: ALL,
+    prepare: async (ds, shop) => ({ path: `/api/jobs/${(await jobAndSpool(ds, shop)).job.id}/saw-list.pdf` }),
+  },
 ];

@@ -1,9 +1,6 @@
-/** Paper sizes a sheet can be printed on; all are used in landscape. */
-export const PAPER_SIZES = ['A3', 'A4', 'Letter', 'Tabloid'] as const;
-export type PaperSize = (typeof PAPER_SIZES)[number];
+import type { PaperSize } from '../../../../shared/schemas/sheet-query.schema';
 
-/** The sheet's default paper. */
-export const DEFAULT_PAPER: PaperSize = 'A3';
+export type { PaperSize };
 
 /** PDF points per millimetre (1 pt = 1/72 in). */
 export const PT_PER_MM = 72 / 25.4;

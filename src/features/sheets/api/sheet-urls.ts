@@ -1,5 +1,5 @@
 import { apiUrl } from '../../../lib/api-client';
-import type { PaperSize } from '../paper-sizes';
+import type { PaperSize } from '../../../../shared/schemas/sheet-query.schema';
 
 /** URL of a spool's printable sheet; without a revision the server prints the latest issued one (else the draft). */
 export function spoolSheetUrl(

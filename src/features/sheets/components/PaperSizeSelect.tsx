@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import { PAPER_LABELS, PAPER_SIZES, type PaperSize } from '../paper-sizes';
+import { PAPER_LABELS, PAPER_SIZES, type PaperSize } from '../../../../shared/schemas/sheet-query.schema';
 
 interface PaperSizeSelectProps {
   value: PaperSize;

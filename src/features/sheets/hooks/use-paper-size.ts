@@ -1,5 +1,5 @@
 import { useCallback, useState } from 'react';
-import { DEFAULT_PAPER, isPaperSize, type PaperSize } from '../paper-sizes';
+import { DEFAULT_PAPER, isPaperSize, type PaperSize } from '../../../../shared/schemas/sheet-query.schema';
 
 const STORAGE_KEY = 'tackline.sheets.paper';
 
