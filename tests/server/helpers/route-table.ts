@@ -218,7 +218,9 @@ export const ROUTES: RouteCase[] = [
     name: 'GET /api/spools/:id/sheet.pdf',
     method: 'get',
     allowed: ALL,
-    prepare: async (ds, shop) => ({ path: `/api/spools/${(await jobAndSpool(ds, shop)).spool.id}/sheet.pdf` }),
+    prepare: async (ds, shop) => ({
+      path: `/api/spools/${(await jobAndSpool(ds, shop)).spool.id}/sheet.pdf`,
+    }),
   },
   {
     name: 'GET /api/jobs/:id/saw-list.pdf',
