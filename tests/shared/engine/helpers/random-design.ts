@@ -32,11 +32,22 @@ const BRANCHES: Record<(typeof SIZES)[number], Nps[]> = {
   '14': ['6', '10'],
 };
 
+// Reducer combinations with ASME B16.9 data in shared/standards.
+const REDUCED: Record<(typeof SIZES)[number], Nps[]> = {
+  '4': ['2'],
+  '6': ['4'],
+  '10': ['4', '6'],
+  '14': ['6', '10'],
+};
+
 /** Arbitrary valid chain parameters: lengths long enough for every take-off. */
 export const chainParams: fc.Arbitrary<ChainParams> = fc.constantFrom(...SIZES).chain((nps) =>
   fc.record({
     nps: fc.constant(nps as Nps),
     branchNps: fc.option(fc.constantFrom(...BRANCHES[nps]), { nil: null }),
+    reducer: fc.option(fc.record({ toNps: fc.constantFrom(...REDUCED[nps]), eccentric: fc.boolean() }), {
+      nil: null,
+    }),
     azimuth: fc.double({ min: 0, max: 360, noNaN: true }),
     elevation: fc.double({ min: -60, max: 60, noNaN: true }),
     segments: fc.array(
@@ -119,8 +130,10 @@ export function chainDesign(p: ChainParams): SpoolDesign {
         nps: p.branchNps,
       });
     } else if (last && p.reducer && s.kind === 'centre-to-centre' && p.segments.length > 1) {
-      // A reducer halfway along the last run (eccentric ones offset the small end's axis).
-      const { toNps, eccentric } = p.reducer;
+      // A reducer halfway along the last run (eccentric ones offset the small end's axis;
+      // "flat on top" needs a run that is not vertical).
+      const toNps = p.reducer.toNps;
+      const eccentric = p.reducer.eccentric && Math.abs(dir.z) < 0.9;
       nodes.push({
         id: 'x1',
         kind: 'reducer',
