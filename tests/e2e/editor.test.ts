@@ -224,6 +224,18 @@ describe('spool editor in the browser', () => {
       expect(await page.locator('[data-testid="cut-list"] tbody tr').count()).toBe(3);
       await saveScreenshot(page, `editor-05-read-only-${who}`);
       if (who === 'fabricator') {
+        // Orbit and zoom from the keyboard too: the picture changes with each key.
+        const canvas = page.locator('canvas').first();
+        await canvas.click({ position: { x: 20, y: 200 } });
+        await page.waitForTimeout(500);
+        const before = await canvas.screenshot();
+        // Still: nothing moves the camera until a key does.
+        await page.waitForTimeout(300);
+        expect((await canvas.screenshot()).equals(before)).toBe(true);
+        await page.keyboard.press('ArrowLeft');
+        await page.keyboard.press('ArrowUp');
+        await page.keyboard.press('+');
+        await expect.poll(async () => (await canvas.screenshot()).equals(before), { timeout: 10_000 }).toBe(false);
         // What they may take away: the design file and a glTF model.
         const [jsonDownload] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Design file' }).click()]);
         const saved = JSON.parse(await streamText(await jsonDownload.createReadStream())) as { format: string; nodes: unknown[] };

@@ -197,11 +197,29 @@ export function EditorWorkspace({
         model.setView({ labels: { centreToCentre: on, centreToFace: on, cutLengths: on, welds: on } });
         return;
       }
+      case 'orbit-left':
+        model.stepCamera(-15, 0);
+        return;
+      case 'orbit-right':
+        model.stepCamera(15, 0);
+        return;
+      case 'orbit-up':
+        model.stepCamera(0, 10);
+        return;
+      case 'orbit-down':
+        model.stepCamera(0, -10);
+        return;
+      case 'zoom-in':
+        model.stepCamera(0, 0, 0.8);
+        return;
+      case 'zoom-out':
+        model.stepCamera(0, 0, 1.25);
+        return;
       case 'help':
         setKeysOpen(true);
         return;
     }
-  });
+  }, { scope: rootRef });
 
   // A new selection starts at the top of its properties, not where the last one was scrolled.
   const selectedKey = selection ? `${selection.type}:${selection.id}` : '';

@@ -1,4 +1,4 @@
-import { useEffect, useEffectEvent } from 'react';
+import { useEffect, useEffectEvent, type RefObject } from 'react';
 import { shortcutFor, type ShortcutAction } from '../panels/editor-shortcuts';
 
 function isTextBox(target: EventTarget | null): boolean {
@@ -17,7 +17,11 @@ function isTextBox(target: EventTarget | null): boolean {
  * Routes key presses to editor actions while the editor is on the page and no dialog is
  * open. Escape leaves a text box first, so the next key is a command again.
  */
-export function useEditorKeys(onAction: (action: ShortcutAction, event: KeyboardEvent) => void, enabled = true): void {
+export function useEditorKeys(
+  onAction: (action: ShortcutAction, event: KeyboardEvent) => void,
+  options: { enabled?: boolean; scope?: RefObject<HTMLElement | null> } = {},
+): void {
+  const { enabled = true, scope } = options;
   const handle = useEffectEvent(onAction);
   useEffect(() => {
     if (!enabled) return;
@@ -31,10 +35,12 @@ export function useEditorKeys(onAction: (action: ShortcutAction, event: Keyboard
       }
       const action = shortcutFor(event, inBox);
       if (!action) return;
+      // Arrows and +/- scroll and zoom the page elsewhere: they move the camera only with the editor focused.
+      if (/^(orbit|zoom)-/.test(action) && !(scope?.current && event.target instanceof Node && scope.current.contains(event.target))) return;
       event.preventDefault();
       handle(action, event);
     };
     window.addEventListener('keydown', onKeyDown);
     return () => window.removeEventListener('keydown', onKeyDown);
-  }, [enabled]);
+  }, [enabled, scope]);
 }

@@ -156,6 +156,11 @@ export class EditorModel {
     this.setView({ preset, presetNonce: this.view.presetNonce + 1 });
   }
 
+  /** Turns the camera from the keyboard: degrees about plant up, degrees of tilt, zoom factor (< 1 closer). */
+  stepCamera(azimuthDeg: number, elevationDeg: number, zoom = 1): void {
+    this.setView({ cameraStep: { azimuthDeg, elevationDeg, zoom, nonce: this.view.cameraStep.nonce + 1 } });
+  }
+
   /**
    * Replaces the design from outside (loaded from the server, imported from a file,
    * "take theirs" after a conflict). With `undoable` the previous design stays on the

@@ -18,6 +18,8 @@ export type ViewPrefs = {
   preset: ViewPreset;
   /** Bumped when the same preset is asked for again, so the camera snaps back. */
   presetNonce: number;
+  /** The last keyboard camera step (orbit and zoom); `nonce` makes each press count. */
+  cameraStep: { azimuthDeg: number; elevationDeg: number; zoom: number; nonce: number };
 };
 
 /** Defaults: every label on, isometric. */
@@ -26,4 +28,5 @@ export const DEFAULT_VIEW_PREFS: ViewPrefs = {
   showCentreOfGravity: true,
   preset: 'iso',
   presetNonce: 0,
+  cameraStep: { azimuthDeg: 0, elevationDeg: 0, zoom: 1, nonce: 0 },
 };

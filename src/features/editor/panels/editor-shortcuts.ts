@@ -22,6 +22,12 @@ export type ShortcutAction =
   | 'view-elev-north'
   | 'view-elev-east'
   | 'toggle-labels'
+  | 'orbit-left'
+  | 'orbit-right'
+  | 'orbit-up'
+  | 'orbit-down'
+  | 'zoom-in'
+  | 'zoom-out'
   | 'help';
 
 /** The key map, shown in the keys dialog and on button titles. */
@@ -48,6 +54,12 @@ export const SHORTCUTS: { action: ShortcutAction; keys: string; label: string }[
   { action: 'view-elev-north', keys: '3', label: 'Elevation looking north' },
   { action: 'view-elev-east', keys: '4', label: 'Elevation looking east' },
   { action: 'toggle-labels', keys: 'L', label: 'Dimension labels on or off' },
+  { action: 'orbit-left', keys: 'ArrowLeft', label: 'Turn the view 15° (click the model first, so the page does not scroll)' },
+  { action: 'orbit-right', keys: 'ArrowRight', label: 'Turn the view 15° the other way' },
+  { action: 'orbit-up', keys: 'ArrowUp', label: 'Look from higher (also ArrowDown: lower)' },
+  { action: 'orbit-down', keys: 'ArrowDown', label: 'Look from lower' },
+  { action: 'zoom-in', keys: '+', label: 'Zoom in (- zooms out)' },
+  { action: 'zoom-out', keys: '-', label: 'Zoom out' },
   { action: 'help', keys: 'Shift+?', label: 'Show these keys' },
 ];
 
@@ -73,6 +85,13 @@ const SINGLE: Record<string, ShortcutAction> = {
   '3': 'view-elev-north',
   '4': 'view-elev-east',
   l: 'toggle-labels',
+  arrowleft: 'orbit-left',
+  arrowright: 'orbit-right',
+  arrowup: 'orbit-up',
+  arrowdown: 'orbit-down',
+  '+': 'zoom-in',
+  '=': 'zoom-in',
+  '-': 'zoom-out',
   '?': 'help',
 };
 

@@ -1,8 +1,11 @@
 import { useEffect, useEffectEvent, useRef } from 'react';
 import { useThree } from '@react-three/fiber';
 import { Vector3 } from 'three';
-import type { ViewPreset } from '../model/view-prefs';
+import type { ViewPrefs, ViewPreset } from '../model/view-prefs';
 import type { SceneBounds } from './scene-bounds';
+
+/** Plant up, the axis keyboard orbits turn about. */
+const UP = new Vector3(0, 0, 1);
 
 /** Where the camera looks from, per preset (plant axes, z up). */
 const PRESET_DIRECTIONS: Record<ViewPreset, [number, number, number]> = {
@@ -23,7 +26,19 @@ type Controls = { target: Vector3; update: () => void };
  * (again) and the first time there is a model. It does not follow edits, so a user who
  * zoomed in to work keeps their view while typing dimensions.
  */
-export function CameraRig({ preset, nonce, bounds, hasModel }: { preset: ViewPreset; nonce: number; bounds: SceneBounds; hasModel: boolean }) {
+export function CameraRig({
+  preset,
+  nonce,
+  bounds,
+  hasModel,
+  step,
+}: {
+  preset: ViewPreset;
+  nonce: number;
+  bounds: SceneBounds;
+  hasModel: boolean;
+  step: ViewPrefs['cameraStep'];
+}) {
   const get = useThree((s) => s.get);
   const controls = useThree((s) => s.controls) as unknown as Controls | null;
   const framedOnce = useRef(false);
@@ -51,6 +66,25 @@ export function CameraRig({ preset, nonce, bounds, hasModel }: { preset: ViewPre
 
   // Re-frame on a preset request or when the first model arrives, not on every bounds change.
   useEffect(() => frame(), [preset, nonce, hasModel, controls]);
+
+  // A keyboard step: orbit about plant up through the target, tilt, zoom.
+  const applyStep = useEffectEvent(() => {
+    const { camera, invalidate } = get();
+    if (!controls || step.nonce === 0) return;
+    const offset = camera.position.clone().sub(controls.target);
+    offset.applyAxisAngle(UP, (step.azimuthDeg * Math.PI) / 180);
+    if (step.elevationDeg !== 0) {
+      const side = new Vector3().crossVectors(UP, offset).normalize();
+      const tilted = offset.clone().applyAxisAngle(side, (-step.elevationDeg * Math.PI) / 180);
+      // Stop short of straight up or down, where "up" on the screen is undefined.
+      if (Math.abs(tilted.clone().normalize().dot(UP)) < 0.995) offset.copy(tilted);
+    }
+    offset.multiplyScalar(step.zoom);
+    camera.position.copy(controls.target).add(offset);
+    controls.update();
+    invalidate();
+  });
+  useEffect(() => applyStep(), [step.nonce]);
 
   return null;
 }

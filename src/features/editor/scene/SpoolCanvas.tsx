@@ -62,7 +62,13 @@ export default function SpoolCanvas({
       <directionalLight position={[5, -8, 10]} intensity={1.6} />
       <directionalLight position={[-6, 4, 3]} intensity={0.5} />
       <OrbitControls makeDefault enableDamping={false} onStart={() => setOrbiting(true)} onEnd={() => setOrbiting(false)} />
-      <CameraRig preset={view.preset} nonce={view.presetNonce} bounds={bounds} hasModel={!!result && result.components.length > 0} />
+      <CameraRig
+        preset={view.preset}
+        nonce={view.presetNonce}
+        step={view.cameraStep}
+        bounds={bounds}
+        hasModel={!!result && result.components.length > 0}
+      />
       <PlantGround bounds={bounds} />
       {result ? (
         <group ref={modelRef} name="spool-model">
