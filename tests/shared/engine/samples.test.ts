@@ -13,6 +13,25 @@ describe('samples', () => {
     expect(r.weights.emptyKg).toBeGreaterThan(0);
   });
 
+  it('never mutates the design it is given (a deep-frozen design computes the same)', () => {
+    const deepFreeze = (v: unknown): unknown => {
+      if (v && typeof v === 'object') {
+        for (const x of Object.values(v)) deepFreeze(x);
+        Object.freeze(v);
+      }
+      return v;
+    };
+    for (const f of SAMPLES) {
+      const plain = computeSpool(load(f));
+      const frozen = computeSpool(deepFreeze(load(f)));
+      expect(frozen).toEqual(plain);
+      expect(frozen.issues.some((i) => i.code === 'internal-error')).toBe(false);
+    }
+    // Trusted designs skip zod's copy, so they are the real test of purity.
+    const d = deepFreeze(load('cw-201-s03-return-14in.json'));
+    expect(computeSpool(d, { trusted: true }).ok).toBe(true);
+  });
+
   it('gives the same numbers unrounded, to within the rounding', () => {
     const d = load('cw-305-s01-rolling-offset-10in.json');
     const a = computeSpool(d);
