@@ -58,7 +58,8 @@ export type ComponentEnd = {
   odMm: number | null;
   joint: JointKind;
   /**
-   * Distance from the component's work point to where the pipe end sits, along the run
+   * Distance from the component's port (its work point, or for returns and eccentric
+   * reducers the offset point where the run's centreline meets it) to where the pipe end sits, along the run
    * (centre-to-end for butt welds, to the pipe end for sockets and slip-ons), mm.
    * null when the standards table has no data.
    */
