@@ -11,6 +11,7 @@ import type { EditorModel } from './model/editor-model';
 import { extendTarget } from './model/extend-target';
 import { IdAllocator } from './model/id-allocator';
 import { PLANT_AXES, directionFromOffsets, type PlantAxis } from './model/plant-directions';
+import { angleBetweenDeg, scale } from './model/vector';
 import { useEditorKeys } from './hooks/use-editor-keys';
 import { useEditorResult, useEditorSnapshot } from './hooks/use-editor-snapshot';
 import { BuildBar, type BuildDraft } from './panels/BuildBar';
@@ -90,6 +91,22 @@ export function EditorWorkspace({
     const len = Math.hypot(d.x, d.y, d.z);
     return (v.x * d.x + v.y * d.y + v.z * d.z) / len < -0.9999 ? d : null;
   }, [design, from, draft.axis]);
+
+  // The arrow in the model showing where the next run goes.
+  const nextRun = useMemo(() => {
+    if (readOnly || !begun || !from || !result) return null;
+    const end = result.openEnds.find((o) => o.nodeId === from);
+    const at = end?.facePoint ?? result.workPoints.find((w) => w.nodeId === from)?.position;
+    const direction = draft.axis === 'offset' ? directionFromOffsets(draft.offset.east, draft.offset.north, draft.offset.up) : PLANT_AXES[draft.axis].vector;
+    if (!at || !direction || !design) return null;
+    // Red when no single fitting makes that turn (in line, or over 90° without a return).
+    const feeding = incomingRun(design, from);
+    const out = design.runs.filter((r) => r.from === from);
+    const ref = feeding?.direction ?? (out.length === 1 ? scale(out[0]!.direction, -1) : null);
+    const turn = ref ? angleBetweenDeg(ref, direction) : 45;
+    const valid = turn > 0.01 && (turn <= 90.01 || (turn > 179.99 && !!feeding && !!draft.returnSide));
+    return { from: at, direction, lengthMm: draft.lengthMm, valid };
+  }, [readOnly, begun, from, result, draft, design]);
 
   const addRun = useCallback(() => {
     if (!from || draft.lengthMm === null) return;
@@ -272,7 +289,7 @@ export function EditorWorkspace({
       </p>
       <div className="grid gap-2 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="relative h-[32rem] overflow-hidden rounded-md border border-steel-200 bg-steel-100">
-          <SpoolCanvas result={result} design={design} selection={selection} view={view} units={units} onSelect={onSelect} modelRef={modelGroup} />
+          <SpoolCanvas result={result} design={design} selection={selection} view={view} units={units} onSelect={onSelect} modelRef={modelGroup} nextRun={nextRun} />
           <div className="absolute left-2 top-2">
             <ViewBar view={view} onPreset={(p) => model.showPreset(p)} onLabels={(labels) => model.setView({ labels })} onCog={(on) => model.setView({ showCentreOfGravity: on })} />
           </div>

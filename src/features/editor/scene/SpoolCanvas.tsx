@@ -16,6 +16,8 @@ import { largestOd } from './scene-lookups';
 import { SCENE_COLOURS } from './scene-palette';
 import { SCENE_STATS_ENABLED, SceneStats } from './SceneStats';
 import { SpoolModel } from './SpoolModel';
+import { NextRunPreview } from './NextRunPreview';
+import type { Vec3 } from '../../../../shared/schemas/spool-design-primitives.schema';
 
 /**
  * The 3D view: renders only when something changes (`frameloop="demand"`), orbit, pan
@@ -30,6 +32,7 @@ export default function SpoolCanvas({
   units,
   onSelect,
   modelRef,
+  nextRun,
 }: {
   result: SpoolResult | null;
   design: SpoolDesign | null;
@@ -38,6 +41,8 @@ export default function SpoolCanvas({
   units: LengthUnits;
   onSelect: (selection: Selection) => void;
   modelRef?: RefObject<Group | null>;
+  /** The run the build bar would add: drawn as an arrow from its open end. */
+  nextRun?: { from: Vec3; direction: Vec3; lengthMm: number | null; valid: boolean } | null;
 }) {
   // The panels (cut list) update in the same moment as the keystroke; the scene follows in
   // a deferred render so a large model never holds the numbers back.
@@ -79,6 +84,7 @@ export default function SpoolCanvas({
       {result && cog && view.showCentreOfGravity && !orbiting ? (
         <CentreOfGravityMarker position={cog} emptyKg={result.weights.emptyKg} sizeMm={cogMm} />
       ) : null}
+      {nextRun ? <NextRunPreview from={nextRun.from} direction={nextRun.direction} lengthMm={nextRun.lengthMm} valid={nextRun.valid} /> : null}
       {SCENE_STATS_ENABLED ? <SceneStats /> : null}
     </Canvas>
   );
