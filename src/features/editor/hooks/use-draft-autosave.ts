@@ -70,8 +70,11 @@ export function useDraftAutosave({
         savedRevisionRef.current = revisionAtSend;
         queryClient.setQueryData(spoolKeys.revision(spoolId, outcome.revision.id), outcome.revision);
         void queryClient.invalidateQueries({ queryKey: spoolKeys.detail(spoolId), exact: true });
-        const stillDirty = model.getSnapshot().designRevision !== revisionAtSend;
-        if (!stillDirty) clearLocalDrafts(spoolId, draftId);
+        const now = model.getSnapshot();
+        const stillDirty = now.designRevision !== revisionAtSend;
+        // Edits made while this save was in flight sit on top of the new version now.
+        if (stillDirty && now.design) keepLocalDraft(spoolId, draftId, versionRef.current, now.design);
+        else clearLocalDrafts(spoolId, draftId);
         setError(null);
         setStatus(stillDirty ? 'unsaved' : 'saved');
         return true;
