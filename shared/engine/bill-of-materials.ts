@@ -74,6 +74,6 @@ export function buildBillOfMaterials(
     (x, y) =>
       ORDER[x.category] - ORDER[y.category] ||
       compareNps(y.nps, x.nps) ||
-      x.description.localeCompare(y.description),
+      (x.description < y.description ? -1 : x.description > y.description ? 1 : 0),
   );
 }
