@@ -16,6 +16,7 @@ import { largestOd } from './scene-lookups';
 import { SCENE_COLOURS } from './scene-palette';
 import { SCENE_STATS_ENABLED, SceneStats } from './SceneStats';
 import { SpoolModel } from './SpoolModel';
+import { isSoftwareWebGl } from './gl-capabilities';
 import { NextRunPreview } from './NextRunPreview';
 import type { Vec3 } from '../../../../shared/schemas/spool-design-primitives.schema';
 
@@ -51,15 +52,16 @@ export default function SpoolCanvas({
   // Html labels follow the camera every frame: hide them while the user orbits.
   const [orbiting, setOrbiting] = useState(false);
   const bounds = useMemo(() => sceneBounds(result), [result]);
+  const softwareGl = useMemo(() => isSoftwareWebGl(), []);
   const cogMm = useMemo(() => (result ? Math.max(30, largestOd(result) * 0.35) : 30), [result]);
   const cog = result?.weights.centreOfGravity ?? null;
   return (
     <Canvas
       frameloop="demand"
-      dpr={[1, 2]}
+      dpr={softwareGl ? 1 : [1, 2]}
       camera={{ fov: 35, up: [0, 0, 1], position: [4, -4, 3], near: 0.01, far: 500 }}
       onPointerMissed={() => onSelect(null)}
-      gl={{ antialias: true, preserveDrawingBuffer: true }}
+      gl={{ antialias: !softwareGl }}
       aria-label="3D model of the spool"
     >
       <color attach="background" args={[SCENE_COLOURS.background]} />
