@@ -5,11 +5,7 @@ cd "$(dirname "$0")/.."
 source scripts/pg.sh
 source scripts/deps.sh
 
-PG_PORT="${TACKLINE_PG_PORT:-54717}"
-PG_BASE="${TACKLINE_PG_DIR:-$PWD/.data/postgres}"
-export TACKLINE_PORT="${TACKLINE_PORT:-4717}"
-export PORT="$TACKLINE_PORT"
-export DATABASE_URL="${DATABASE_URL:-postgres://postgres@127.0.0.1:$PG_PORT/tackline}"
+source scripts/app-env.sh
 export NODE_ENV=development
 
 ensure_node_modules
@@ -22,9 +18,7 @@ shutdown() {
   pg_stop "$PG_BASE"
 }
 trap shutdown INT TERM EXIT
-pg_ensure_db "$PG_PORT" tackline
-npx tsx server/db/run-migrations.ts
-npx tsx server/db/seed/run-seed.ts
+prepare_database
 node_modules/.bin/tsx watch server/index.ts & pids+=($!)
 node_modules/.bin/vite & pids+=($!)
 wait -n "${pids[@]}" || true

@@ -5,11 +5,7 @@ cd "$(dirname "$0")/.."
 source scripts/pg.sh
 source scripts/deps.sh
 
-PG_PORT="${TACKLINE_PG_PORT:-54717}"
-PG_BASE="${TACKLINE_PG_DIR:-$PWD/.data/postgres}"
-export TACKLINE_PORT="${TACKLINE_PORT:-4717}"
-export PORT="$TACKLINE_PORT"
-export DATABASE_URL="${DATABASE_URL:-postgres://postgres@127.0.0.1:$PG_PORT/tackline}"
+source scripts/app-env.sh
 export NODE_ENV="${NODE_ENV:-production}"
 # A production server needs a session secret: keep one per installation beside the data.
 if [ -z "${SESSION_SECRET:-}" ]; then
@@ -34,14 +30,19 @@ shutdown() {
 }
 trap shutdown INT TERM EXIT
 
-pg_ensure_db "$PG_PORT" tackline
-pg_log "running migrations"
-npx tsx server/db/run-migrations.ts
-pg_log "loading demo data (idempotent)"
-npx tsx server/db/seed/run-seed.ts
+prepare_database
 pg_log "building the client"
 npx vite build --logLevel warn
 
 node_modules/.bin/tsx server/index.ts &
 server_pid=$!
+# Say where to go once the server answers (the demo sign-ins were printed by the seed above).
+for _ in $(seq 1 60); do
+  if node -e "fetch('http://127.0.0.1:$TACKLINE_PORT/api/health').then(r=>process.exit(r.ok?0:1),()=>process.exit(1))" 2>/dev/null; then
+    pg_log "Tackline is up: http://127.0.0.1:$TACKLINE_PORT  (e.g. detailer@kestrel.example / tackline-demo; Ctrl-C stops it)"
+    break
+  fi
+  kill -0 "$server_pid" 2>/dev/null || break
+  sleep 0.5
+done
 wait "$server_pid" || true
