@@ -25,35 +25,39 @@ function stats(values: number[]): string {
   return `median ${q(0.5).toFixed(1)} ms, p90 ${q(0.9).toFixed(1)} ms, max ${s.at(-1)!.toFixed(1)} ms (n=${s.length})`;
 }
 
-/** Types a length into the selected run's box and times Enter → cut list text → next frame. */
+/**
+ * Types the last character of a length into the selected run's box (lengths apply as
+ * they are typed) and times that keystroke → cut list text → next rendered frame.
+ */
 async function timeEdit(page: Page, mm: number): Promise<{ cutList: number; frame: number }> {
   const box = page.getByTestId('run-properties').getByRole('textbox', { name: 'Length', exact: true });
-  await box.fill(`${mm}`);
+  const text = String(mm);
+  await box.fill(text.slice(0, -1));
+  await page.waitForTimeout(150);
   return box.evaluate(
-    (input, expected) =>
+    (input, value) =>
       new Promise<{ cutList: number; frame: number }>((resolve) => {
         const stats = window.__tacklineSceneStats!;
         const framesBefore = stats.frames;
-        const cell = document.querySelector('[data-testid="cut-list"] tbody tr[data-piece="P1"] [data-cut-mm]') as HTMLElement;
-        const before = cell.dataset.cutMm;
+        const cellNow = () => document.querySelector('[data-testid="cut-list"] tbody tr[data-piece="P1"] [data-cut-mm]') as HTMLElement;
+        const before = cellNow().dataset.cutMm;
         const t0 = performance.now();
         let cutAt = 0;
-        input.dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', bubbles: true, cancelable: true }));
+        // What a keystroke does to a React-controlled input: the value, then an input event.
+        const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value')!.set!;
+        setter.call(input, value);
+        input.dispatchEvent(new Event('input', { bubbles: true }));
+        if (cellNow().dataset.cutMm !== before) cutAt = performance.now();
         const poll = () => {
           const now = performance.now();
-          const c = document.querySelector('[data-testid="cut-list"] tbody tr[data-piece="P1"] [data-cut-mm]') as HTMLElement;
-          if (!cutAt && c.dataset.cutMm !== before) cutAt = now;
+          if (!cutAt && cellNow().dataset.cutMm !== before) cutAt = now;
           if (cutAt && stats.frames > framesBefore) resolve({ cutList: cutAt - t0, frame: stats.lastFrameAt - t0 });
-          else if (now - t0 > 10_000) resolve({ cutList: NaN, frame: NaN });
+          else if (now - t0 > 10_000) resolve({ cutList: Number.NaN, frame: Number.NaN });
           else requestAnimationFrame(poll);
         };
-        // The commit is synchronous for a key event: check at once, then per frame.
-        const c = document.querySelector('[data-testid="cut-list"] tbody tr[data-piece="P1"] [data-cut-mm]') as HTMLElement;
-        if (c.dataset.cutMm !== before) cutAt = performance.now();
-        void expected;
         requestAnimationFrame(poll);
       }),
-    mm,
+    text,
   );
 }
 

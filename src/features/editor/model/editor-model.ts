@@ -31,6 +31,9 @@ export type EditorSnapshot = {
   designRevision: number;
 };
 
+/** How a command joins the history. */
+export type CommandOptions = { coalesce?: string };
+
 /** What a command call tells its caller. */
 export type CommandOutcome = { ok: true; label: string; removedIds: string[] } | { ok: false; error: string };
 
@@ -49,6 +52,8 @@ export class EditorModel {
   private readonly undoStack: HistoryEntry[] = [];
   private readonly redoStack: HistoryEntry[] = [];
   private lastError: string | null = null;
+  /** Coalesce key of the last successful command (null: none). */
+  private lastCoalesce: string | null = null;
   private lastMessage: string | null = null;
   private designRevision = 0;
   private idFloor: IdFloor;
@@ -90,8 +95,10 @@ export class EditorModel {
   /**
    * Runs a command against the current design. On success the old design goes on the
    * undo stack and the redo stack is cleared; on failure nothing changes but the error.
+   * Commands with the same `coalesce` key in a row (a length typed keystroke by keystroke)
+   * make one undo step: undo goes back to before the first of them.
    */
-  apply(command: (design: SpoolDesign | null, ctx: CommandContext) => CommandResult): CommandOutcome {
+  apply(command: (design: SpoolDesign | null, ctx: CommandContext) => CommandResult, options: CommandOptions = {}): CommandOutcome {
     if (this.readOnly) return this.refuse('This spool is read-only for your role');
     const ids = new IdAllocator(this.design, this.idFloor);
     let result: CommandResult;
@@ -102,7 +109,10 @@ export class EditorModel {
       return this.refuse(cause instanceof Error ? cause.message : 'The change could not be made');
     }
     if (!result.ok) return this.refuse(result.error);
-    this.push(this.undoStack, { design: this.design, selection: this.selection, label: result.label });
+    const joins = options.coalesce !== undefined && options.coalesce === this.lastCoalesce && this.undoStack.length > 0;
+    if (joins) this.undoStack[this.undoStack.length - 1]!.label = result.label;
+    else this.push(this.undoStack, { design: this.design, selection: this.selection, label: result.label });
+    this.lastCoalesce = options.coalesce ?? null;
     this.redoStack.length = 0;
     this.idFloor = ids.floor();
     this.design = result.design;
@@ -115,8 +125,8 @@ export class EditorModel {
   }
 
   /** Runs a command that needs a design (all but starting one). */
-  edit(command: (design: SpoolDesign, ctx: CommandContext) => CommandResult): CommandOutcome {
-    return this.apply((design, ctx) => (design ? command(design, ctx) : { ok: false, error: 'Start a spool first' }));
+  edit(command: (design: SpoolDesign, ctx: CommandContext) => CommandResult, options: CommandOptions = {}): CommandOutcome {
+    return this.apply((design, ctx) => (design ? command(design, ctx) : { ok: false, error: 'Start a spool first' }), options);
   }
 
   /** Steps back one change. */
@@ -141,6 +151,7 @@ export class EditorModel {
   select(selection: Selection): void {
     const next = this.validSelection(selection);
     if (sameSelection(next, this.selection)) return;
+    this.lastCoalesce = null;
     this.selection = next;
     this.emit();
   }
@@ -174,6 +185,7 @@ export class EditorModel {
       this.undoStack.length = 0;
       this.redoStack.length = 0;
     }
+    this.lastCoalesce = null;
     const floor = idFloorOf(design);
     this.idFloor = { n: Math.max(floor.n, this.idFloor.n), r: Math.max(floor.r, this.idFloor.r) };
     this.design = design;
@@ -213,6 +225,7 @@ export class EditorModel {
   }
 
   private restore(entry: HistoryEntry, message: string): void {
+    this.lastCoalesce = null;
     this.design = entry.design;
     this.selection = this.validSelection(entry.selection);
     this.lastError = null;

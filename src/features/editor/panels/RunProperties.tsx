@@ -55,9 +55,12 @@ export function RunProperties({
     setKind(run.length.kind);
     setHeat(run.heat ?? '');
   }
-  const apply = (k: RunLengthKind = kind) => {
-    if (lengthMm === null) return;
-    model.edit((d) => setRunLength(d, { runId: run.id, lengthMm, lengthKind: k }));
+  // Every keystroke that reads as a length is applied at once (one undo step per run),
+  // so the cut list and the model follow the typing.
+  const apply = (mm: number | null = lengthMm, k: RunLengthKind = kind) => {
+    if (mm === null) return;
+    if (mm === run.length.mm && k === run.length.kind) return;
+    model.edit((d) => setRunLength(d, { runId: run.id, lengthMm: mm, lengthKind: k }), { coalesce: `length:${run.id}` });
   };
   const fmt = (mm: number | null | undefined) => (mm === null || mm === undefined ? '—' : formatLength(mm, units));
 
@@ -77,7 +80,17 @@ export function RunProperties({
           NPS {nps ?? '?'} · {placed?.schedule ?? ''} · {describeDirection(run.direction)}
         </p>
         <div className="grid grid-cols-[1fr_auto] items-start gap-2">
-          <LengthInput label="Length" units={units} valueMm={lengthMm} onChange={setLengthMm} onEnter={() => apply()} disabled={readOnly} name="selected-run-length" />
+          <LengthInput
+            label="Length"
+            units={units}
+            valueMm={lengthMm}
+            onChange={(mm) => {
+              setLengthMm(mm);
+              apply(mm);
+            }}
+            disabled={readOnly}
+            name="selected-run-length"
+          />
           <SmallSelect
             label="Measured"
             value={kind}
@@ -85,16 +98,12 @@ export function RunProperties({
             onChange={(e) => {
               const k = e.target.value as RunLengthKind;
               setKind(k);
-              apply(k);
+              apply(lengthMm, k);
             }}
             options={KIND_OPTIONS}
           />
         </div>
-        {!readOnly ? (
-          <PanelButton tone="primary" onClick={() => apply()} disabled={lengthMm === null}>
-            Apply length
-          </PanelButton>
-        ) : null}
+        {!readOnly ? <p className="text-xs text-steel-600">Lengths apply as you type; one undo step puts the run back.</p> : null}
         <AxisPicker
           label="Direction"
           value={axisOf(run.direction)}

@@ -28,6 +28,26 @@ describe('EditorModel', () => {
     expect(m.getSnapshot().design).toBeNull();
   });
 
+  it('joins keystroke-by-keystroke length edits of one run into one undo step', () => {
+    const m = newModel();
+    startWithFlange(m);
+    extend(m, 'east', 1000);
+    const before = m.getSnapshot().design;
+    const run = before!.runs[0]!.id;
+    for (const mm of [1, 15, 150, 1500]) m.edit((d) => setRunLength(d, { runId: run, lengthMm: mm }), { coalesce: `length:${run}` });
+    expect(m.getSnapshot().design!.runs[0]!.length.mm).toBe(1500);
+    m.undo();
+    expect(m.getSnapshot().design).toBe(before);
+    m.redo();
+    expect(m.getSnapshot().design!.runs[0]!.length.mm).toBe(1500);
+    // A different command in between starts a new step.
+    m.edit((d) => setRunLength(d, { runId: run, lengthMm: 1600 }), { coalesce: `length:${run}` });
+    extend(m, 'north', 500);
+    m.edit((d) => setRunLength(d, { runId: run, lengthMm: 1700 }), { coalesce: `length:${run}` });
+    m.undo();
+    expect(m.getSnapshot().design!.runs[0]!.length.mm).toBe(1600);
+  });
+
   it('never hands a deleted id to a different component, even after undo', () => {
     const m = newModel();
     startWithFlange(m);
