@@ -6,10 +6,13 @@ import type { ResolvedSpec } from './compute-result';
 import type { SpoolGraph } from './build-graph';
 import type { NodeRole } from './classify-nodes';
 import { cachedPipeDimensions } from './standards-cache';
+import type { PipeDimensions } from '../standards/pipe-schedules';
 import { addError, type IssueSink } from './issues';
 import type { NodeAnalysis, NodeContext, RunPipe } from './node-analysis';
 import type { RunSizes } from './resolve-sizes';
 import { applySpec } from './resolve-spec';
+import { cachedScheduleLabel } from './standards-cache';
+import { mmText, noteUnconfirmed, unconfirmedSink, type UnconfirmedSink } from './unconfirmed-data';
 import { analyseElbow, analyseReturn } from './take-offs-bends';
 import { analyseSetOn, analyseSmallBore } from './take-offs-branches';
 import { analyseEnd } from './take-offs-ends';
@@ -23,6 +26,7 @@ export function runPipes(
   sizes: RunSizes,
   designSpec: ResolvedSpec,
   issues: IssueSink,
+  unconfirmed: UnconfirmedSink = unconfirmedSink(),
 ): Map<string, RunPipe> {
   const out = new Map<string, RunPipe>();
   for (const run of graph.runOrder) {
@@ -31,8 +35,11 @@ export function runPipes(
     let dims = null;
     if (nps) {
       const look = cachedPipeDimensions(nps, spec.schedule);
-      if (look.ok) dims = look.value;
-      else addError(issues, 'standard-data-missing', look.missing, run.id);
+      if (look.ok) {
+        dims = look.value;
+        if (dims.status === 'M')
+          noteUnconfirmed(unconfirmed, 'M', pipeWhat(nps, spec.schedule, dims), 'ASME B36.10M', run.id);
+      } else addError(issues, 'standard-data-missing', look.missing, run.id);
     }
     out.set(run.id, {
       nps,
@@ -54,6 +61,7 @@ export function analyseNodes(
   designSpec: ResolvedSpec,
   angleToleranceDeg: number,
   issues: IssueSink,
+  unconfirmed: UnconfirmedSink = unconfirmedSink(),
 ): Map<string, NodeAnalysis> {
   const out = new Map<string, NodeAnalysis>();
   for (const nodeId of graph.nodeOrder) {
@@ -64,6 +72,7 @@ export function analyseNodes(
       node,
       role,
       issues,
+      unconfirmed,
       angleToleranceDeg,
       pipe: (runId) => pipes.get(runId)!,
       specAt: (runId) => applySpec(runId ? (pipes.get(runId)?.spec ?? designSpec) : designSpec, node.spec),
@@ -72,6 +81,17 @@ export function analyseNodes(
     if (a) out.set(nodeId, a);
   }
   return out;
+}
+
+function pipeWhat(
+  nps: string,
+  schedule: Parameters<typeof cachedScheduleLabel>[0],
+  d: PipeDimensions,
+): string {
+  const label = cachedScheduleLabel(schedule);
+  return d.wallStatus === 'M'
+    ? `NPS ${nps} ${label} pipe wall = ${mmText(d.wallMm)} mm`
+    : `NPS ${nps} pipe outside diameter = ${mmText(d.odMm)} mm`;
 }
 
 function analyseOne(ctx: NodeContext): NodeAnalysis | null {

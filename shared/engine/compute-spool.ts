@@ -21,6 +21,7 @@ import { resolveSpec, BUILT_IN_SPEC } from './resolve-spec';
 import { roundResult } from './round-result';
 import { WEIGHT_CAUTION, computeWeights } from './weights';
 import { buildWeldList } from './weld-list';
+import { reportUnconfirmed, unconfirmedSink } from './unconfirmed-data';
 
 /** Geometric tolerances. */
 export type EngineTolerances = {
@@ -99,8 +100,10 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
     );
   }
   const sizes = resolveSizes(graph, roles, spec.nps, issues);
-  const pipes = runPipes(graph, sizes, spec, issues);
-  const analyses = analyseNodes(graph, roles, pipes, spec, angleDeg, issues);
+  const unconfirmed = unconfirmedSink();
+  const pipes = runPipes(graph, sizes, spec, issues, unconfirmed);
+  const analyses = analyseNodes(graph, roles, pipes, spec, angleDeg, issues, unconfirmed);
+  reportUnconfirmed(unconfirmed, issues);
   const { runs: placed, positions } = placeRuns(
     graph,
     analyses,

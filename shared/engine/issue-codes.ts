@@ -26,6 +26,7 @@ export const ISSUE_CODES = [
   'weight-incomplete',
   'orientation-missing',
   'internal-error',
+  'standard-data-unconfirmed',
 ] as const;
 
 /** One issue code. */

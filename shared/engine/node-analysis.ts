@@ -9,6 +9,7 @@ import type { PipeDimensions, Schedule } from '../standards/pipe-schedules';
 import type { BomItem, JointKind, ResolvedSpec, WeldType } from './compute-result';
 import type { Connection, NodeRole } from './classify-nodes';
 import type { IssueSink } from './issues';
+import type { UnconfirmedSink } from './unconfirmed-data';
 
 /** The pipe of one run: size, schedule, material and B36.10M dimensions (null if unknown). */
 export type RunPipe = {
@@ -126,6 +127,8 @@ export type NodeContext = {
   node: SpoolNode;
   role: NodeRole;
   issues: IssueSink;
+  /** Standards values from memory that this node's take-offs used. */
+  unconfirmed: UnconfirmedSink;
   angleToleranceDeg: number;
   /** Pipe of a run (by id). */
   pipe(runId: string): RunPipe;

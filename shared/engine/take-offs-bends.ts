@@ -8,6 +8,7 @@ import type { Connection } from './classify-nodes';
 import { cachedElbowDimensions, cachedScheduleLabel } from './standards-cache';
 import { addError, addWarning } from './issues';
 import { buttEnd } from './node-end-builders';
+import { mmText, noteUnconfirmed } from './unconfirmed-data';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
 import { cross, normalise, rejectFrom, scale } from './vec3-math';
 
@@ -77,6 +78,17 @@ export function analyseElbow(
   const is90 = Math.abs(angleDeg - 90) <= tol;
   const is45 = Math.abs(angleDeg - 45) <= tol;
   const base90 = cachedElbowDimensions(nps, radius === 'long' ? 'LR90' : 'SR90');
+  const kind90 = `${radius === 'long' ? 'long' : 'short'}-radius 90° elbow`;
+  const note90 = (what: string) => {
+    if (base90.ok)
+      noteUnconfirmed(
+        ctx.unconfirmed,
+        base90.value.status,
+        `NPS ${nps} ${kind90} ${what} = ${mmText(base90.value.centreToEndMm)} mm`,
+        'ASME B16.9',
+        node.id,
+      );
+  };
 
   if (mitre) {
     const welds = node.mitreWelds ?? 2;
@@ -87,6 +99,7 @@ export function analyseElbow(
     const takeOff = cutElbowTakeOffMm(R, angleDeg) - tHalf;
     const g = spec.rootGapMm;
     const segment = welds > 1 ? 2 * tHalf - g : null;
+    note90('radius (A)');
     if (segment !== null && segment <= 0) {
       addError(
         ctx.issues,
@@ -140,6 +153,7 @@ export function analyseElbow(
   if (is90) {
     if (!base90.ok) addError(ctx.issues, 'standard-data-missing', base90.missing, node.id);
     else ({ centreToEndMm: takeOff, source } = base90.value);
+    note90('A');
     what = `Elbow 90° ${rr}`;
   } else if (is45 && radius === 'long') {
     const e45 = cachedElbowDimensions(nps, 'LR45');
@@ -147,6 +161,13 @@ export function analyseElbow(
     else {
       ({ centreToEndMm: takeOff, source } = e45.value);
       R = e45.value.bendRadiusMm;
+      noteUnconfirmed(
+        ctx.unconfirmed,
+        e45.value.status,
+        `NPS ${nps} long-radius 45° elbow B = ${mmText(e45.value.centreToEndMm)} mm`,
+        'ASME B16.9',
+        node.id,
+      );
     }
     what = `Elbow 45° ${rr}`;
   } else {
@@ -154,6 +175,7 @@ export function analyseElbow(
     else {
       takeOff = cutElbowTakeOffMm(base90.value.bendRadiusMm, angleDeg);
       source = `${base90.value.source}; cut to ${round(angleDeg)}°, take-off R·tan(θ/2)`;
+      note90('radius (A)');
     }
     what = `Elbow ${rr} cut to ${round(angleDeg)}° (from 90°)`;
     addWarning(
@@ -211,6 +233,14 @@ export function analyseReturn(
   const look = nps ? cachedElbowDimensions(nps, radius === 'long' ? 'LR180' : 'SR180') : null;
   if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
   const O = look?.ok ? look.value.centreToEndMm : null;
+  if (look?.ok)
+    noteUnconfirmed(
+      ctx.unconfirmed,
+      look.value.status,
+      `NPS ${nps} ${radius === 'long' ? 'long' : 'short'}-radius 180° return O = ${mmText(look.value.centreToEndMm)} mm, K = ${mmText(look.value.backToFaceMm ?? 0)} mm`,
+      'ASME B16.9',
+      node.id,
+    );
   const half = O !== null && u ? scale(u, O / 2) : { x: 0, y: 0, z: 0 };
   const takeOff = O !== null && u ? 0 : null;
   const endA = buttEnd(a, nps, takeOff, ctx.specAt(a.run.id).rootGapMm);

@@ -10,6 +10,8 @@ import type { Connection } from './classify-nodes';
 import { cachedScheduleLabel, cachedFlangeDimensions } from './standards-cache';
 import { addError } from './issues';
 import { buttEnd, openEnd, socketEnd } from './node-end-builders';
+import { mmText, noteUnconfirmed } from './unconfirmed-data';
+import type { FlangeDimensions } from '../standards/flanges';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
 
 type EndNode = Extract<SpoolNode, { kind: 'end' }>;
@@ -33,6 +35,7 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
         : null;
       if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
       const d = look?.ok ? look.value : null;
+      if (d) noteFlange(ctx, node.id, `NPS ${nps} Class ${cls} ${wn ? 'weld-neck' : 'slip-on'} flange`, d);
       const takeOff = d ? (wn ? d.hubLengthMm + d.raisedFaceMm : (d.slipOnSetbackMm ?? null)) : null;
       if (d && !wn && d.slipOnSetbackMm === undefined) {
         addError(ctx.issues, 'standard-data-missing', `No slip-on setback for NPS ${nps}`, node.id);
@@ -82,6 +85,14 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
       const look = nps && pipe.dims ? capDimensions(nps, pipe.dims.wallMm) : null;
       if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
       const len = look?.ok ? look.value.lengthMm : null;
+      if (look?.ok)
+        noteUnconfirmed(
+          ctx.unconfirmed,
+          look.value.status,
+          `NPS ${nps} cap limiting wall = ${mmText(look.value.limitingWallMm)} mm (it picks the cap length ${mmText(look.value.lengthMm)} mm for this ${mmText(pipe.dims!.wallMm)} mm wall)`,
+          'ASME B16.9',
+          node.id,
+        );
       return {
         node,
         role,
@@ -151,4 +162,17 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
         detail: { type: 'open-end', endType: 'plain', fieldWeld: false, fieldFitAllowanceMm: 0 },
       };
   }
+}
+
+/** Notes each group of a flange's values that is from memory (drilling, hub length, body). */
+function noteFlange(ctx: NodeContext, nodeId: string, what: string, d: FlangeDimensions): void {
+  const p = d.partStatus;
+  const note = (status: typeof p.drilling, values: string) =>
+    noteUnconfirmed(ctx.unconfirmed, status, `${what} ${values}`, 'ASME B16.5', nodeId);
+  note(
+    p.drilling,
+    `drilling (OD ${mmText(d.odMm)} mm, bolt circle ${mmText(d.boltCircleMm)} mm, ${d.boltCount} holes ${d.boltHoleDiaIn} in)`,
+  );
+  note(p.hubLength, `length through hub Y = ${mmText(d.hubLengthMm)} mm`);
+  note(p.body, `thickness tf = ${mmText(d.thicknessMm)} mm`);
 }

@@ -10,6 +10,7 @@ import { cachedPipeDimensions, cachedScheduleLabel } from './standards-cache';
 import { addError } from './issues';
 import { buttEnd } from './node-end-builders';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
+import { mmText, noteUnconfirmed } from './unconfirmed-data';
 import { normalise, rejectFrom, scale, UP, ZERO } from './vec3-math';
 
 type ReducerNode = Extract<SpoolNode, { kind: 'reducer' }>;
@@ -59,6 +60,14 @@ export function analyseReducer(
   const look = reducerDimensions(largeNps, smallNps);
   if (!look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
   const H = look.ok ? look.value.lengthMm : null;
+  if (look.ok)
+    noteUnconfirmed(
+      ctx.unconfirmed,
+      look.value.status,
+      `NPS ${largeNps} reducer length H = ${mmText(look.value.lengthMm)} mm`,
+      'ASME B16.9',
+      node.id,
+    );
   const half = H !== null ? H / 2 : null;
 
   let smallOffset = ZERO;

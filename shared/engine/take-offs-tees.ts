@@ -9,6 +9,7 @@ import { cachedScheduleLabel } from './standards-cache';
 import { addError } from './issues';
 import { buttEnd } from './node-end-builders';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
+import { mmText, noteUnconfirmed } from './unconfirmed-data';
 
 type TeeNode = Extract<SpoolNode, { kind: 'tee' }>;
 
@@ -38,6 +39,16 @@ export function analyseTee(
   if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
   const C = look?.ok ? look.value.runCentreToEndMm : null;
   const M = look?.ok ? look.value.branchCentreToEndMm : null;
+  if (look?.ok) {
+    const size = runNps === branchNps ? `NPS ${runNps} tee` : `NPS ${runNps} × ${branchNps} reducing tee`;
+    noteUnconfirmed(
+      ctx.unconfirmed,
+      look.value.status,
+      `${size} C = ${mmText(look.value.runCentreToEndMm)} mm, M = ${mmText(look.value.branchCentreToEndMm)} mm`,
+      'ASME B16.9',
+      node.id,
+    );
+  }
   const sched = cachedScheduleLabel(pa.schedule);
   const size = runNps === branchNps ? `NPS ${runNps ?? '?'}` : `NPS ${runNps} × ${branchNps}`;
   const kind = runNps === branchNps ? 'equal' : 'reducing';

@@ -68,6 +68,12 @@ export type FlangeDimensions = {
   slipOnSetbackMm?: number;
   /** Weakest status of the values returned. */
   status: DataStatus;
+  /**
+   * Status of each group of values: drilling (OD, bolt circle, count, hole and bolt size),
+   * hub length (the Y returned as `hubLengthMm`; for a blind, its thickness) and body
+   * (tf, X, R).
+   */
+  partStatus: { drilling: DataStatus; hubLength: DataStatus; body: DataStatus };
   source: string;
 };
 
@@ -118,6 +124,7 @@ export function flangeDimensions(
         hubLengthMm: row.yWeldNeckMm,
         hubDiaAtBaseMm: row.hubBaseMm,
         status: weakestStatus(row.drillingStatus, row.yWeldNeckStatus, row.bodyStatus),
+        partStatus: { drilling: row.drillingStatus, hubLength: row.yWeldNeckStatus, body: row.bodyStatus },
       });
     case 'slip-on': {
       const wall = options.pipeWallMm ?? stdWall(nps);
@@ -132,6 +139,7 @@ export function flangeDimensions(
         hubDiaAtBaseMm: row.hubBaseMm,
         slipOnSetbackMm: slipOnSetbackMm(wall),
         status: weakestStatus(row.drillingStatus, row.bodyStatus),
+        partStatus: { drilling: row.drillingStatus, hubLength: row.bodyStatus, body: row.bodyStatus },
       });
     }
     case 'blind':
@@ -139,6 +147,7 @@ export function flangeDimensions(
         ...base,
         hubLengthMm: row.tfMm,
         status: weakestStatus(row.drillingStatus, row.bodyStatus),
+        partStatus: { drilling: row.drillingStatus, hubLength: row.bodyStatus, body: row.bodyStatus },
       });
   }
 }

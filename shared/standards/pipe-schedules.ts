@@ -37,6 +37,8 @@ export type PipeDimensions = {
   massKgPerM: number;
   /** Weakest of the OD and wall statuses. */
   status: DataStatus;
+  /** Status of the wall alone (the OD's is `status` when the wall is stronger). */
+  wallStatus: DataStatus;
   source: string;
 };
 
@@ -62,6 +64,7 @@ export function pipeDimensions(nps: Nps, schedule: Schedule): Lookup<PipeDimensi
     idMm: round(d - 2 * wallMm, 2),
     massKgPerM: round(B3610_MASS_CONSTANT * (d - wallMm) * wallMm, 2),
     status: weakestStatus(row.odStatus, wallStatus),
+    wallStatus,
     source: row.source,
   });
 }
