@@ -244,6 +244,11 @@ describe('spool editor in the browser', () => {
         const [glb] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'glTF' }).click()]);
         const bytes = await streamBytes(await glb.createReadStream());
         expect(bytes.subarray(0, 4).toString('latin1')).toBe('glTF');
+        // The JSON chunk: plain meshes (no instancing extension) for every piece, weld and fitting.
+        const gltf = JSON.parse(bytes.subarray(20, 20 + bytes.readUInt32LE(12)).toString('utf8')) as { nodes: unknown[]; extensionsUsed?: string[] };
+        expect(gltf.extensionsUsed ?? []).not.toContain('EXT_mesh_gpu_instancing');
+        // 3 pipe pieces + 7 weld beads + 6 work-point markers at least, besides the fittings.
+        expect(gltf.nodes.length).toBeGreaterThan(16);
         expect(glb.suggestedFilename()).toBe('CW-990-S01.glb');
         // On a tablet held upright the same screen still works.
         await page.setViewportSize({ width: 820, height: 1180 });

@@ -5,14 +5,16 @@ import { ComponentMesh } from './ComponentMesh';
 import { colourFor } from './component-colour';
 import { InstancedSpheres, type SphereInstance } from './InstancedSpheres';
 import { InstancedWeldRings, type WeldRingInstance } from './InstancedWeldRings';
-import { PipeSegment, pickHandler } from './PipeSegment';
+import { pickHandler } from './PipeSegment';
+import { InstancedPipes, type PipeInstance } from './InstancedPipes';
 import { SCENE_COLOURS } from './scene-palette';
 import { flangesById, largestOd, nearestRun, severityById } from './scene-lookups';
 import { SCENE_UNITS_PER_MM } from './scene-units';
 
 /**
  * The spool, true size, from the engine result: pipe pieces, fittings, flanges with bolt
- * holes, work-point markers and weld beads (the last two instanced: one draw call each).
+ * holes, work-point markers and weld beads (pipes, markers and beads instanced: one draw
+ * call each).
  * Pure view: clicks go out through `onSelect`.
  */
 export const SpoolModel = memo(function SpoolModel({
@@ -28,6 +30,18 @@ export const SpoolModel = memo(function SpoolModel({
   const flanges = useMemo(() => flangesById(result), [result]);
   const markerMm = useMemo(() => Math.max(12, largestOd(result) * 0.12), [result]);
   const selectedId = selection?.id ?? null;
+
+  // Pieces the engine could size; indices of `pipes` and `pieces` match.
+  const pieces = useMemo(() => result.pieces.filter((p) => p.odMm), [result]);
+  const pipes = useMemo<PipeInstance[]>(
+    () =>
+      pieces.map((piece) => {
+        const selected = selectedId !== null && piece.runIds.includes(selectedId);
+        const sev = piece.runIds.map((id) => severity.get(id)).find(Boolean) ?? null;
+        return { from: piece.start, to: piece.end, odMm: piece.odMm!, colour: colourFor({ selected, severity: sev }, SCENE_COLOURS.pipe) };
+      }),
+    [pieces, selectedId, severity],
+  );
 
   const markers = useMemo<SphereInstance[]>(
     () =>
@@ -57,27 +71,16 @@ export const SpoolModel = memo(function SpoolModel({
 
   return (
     <group name="spool">
-      {result.pieces.map((piece) => {
-        if (!piece.odMm) return null;
-        const selected = selectedId !== null && piece.runIds.includes(selectedId);
-        const sev = piece.runIds.map((id) => severity.get(id)).find(Boolean) ?? null;
-        return (
-          <PipeSegment
-            key={piece.mark}
-            name={`piece-${piece.mark}`}
-            from={piece.start}
-            to={piece.end}
-            odMm={piece.odMm}
-            colour={colourFor({ selected, severity: sev }, SCENE_COLOURS.pipe)}
-            onClick={pickHandler((e) => {
-              const p = e.point;
-              const mm = { x: p.x / SCENE_UNITS_PER_MM, y: p.y / SCENE_UNITS_PER_MM, z: p.z / SCENE_UNITS_PER_MM };
-              const runId = nearestRun(result, piece.runIds, mm);
-              if (runId) onSelect({ type: 'run', id: runId });
-            })}
-          />
-        );
-      })}
+      <InstancedPipes
+        items={pipes}
+        onPick={(i, p) => {
+          const piece = pieces[i];
+          if (!piece) return;
+          const mm = { x: p.x / SCENE_UNITS_PER_MM, y: p.y / SCENE_UNITS_PER_MM, z: p.z / SCENE_UNITS_PER_MM };
+          const runId = nearestRun(result, piece.runIds, mm);
+          if (runId) onSelect({ type: 'run', id: runId });
+        }}
+      />
       {result.components.map((c) => {
         const state = { selected: selectedId === c.nodeId, severity: severity.get(c.nodeId) ?? null };
         const base = c.shape.type === 'flange' ? SCENE_COLOURS.flange : SCENE_COLOURS.fitting;
