@@ -1,4 +1,4 @@
-import { useDeferredValue, useMemo, useState, type RefObject } from 'react';
+import { useDeferredValue, useMemo, useRef, useState, type RefObject } from 'react';
 import { Canvas } from '@react-three/fiber';
 import { OrbitControls } from '@react-three/drei';
 import type { Group } from 'three';
@@ -49,8 +49,10 @@ export default function SpoolCanvas({
   // a deferred render so a large model never holds the numbers back.
   const result = useDeferredValue(liveResult);
   const design = useDeferredValue(liveDesign);
-  // Html labels follow the camera every frame: hide them while the user orbits.
+  // Html labels follow the camera every frame: hide them while the user orbits (only
+  // once the camera really moves, so a click to select does not make them blink).
   const [orbiting, setOrbiting] = useState(false);
+  const pointerDown = useRef(false);
   const bounds = useMemo(() => sceneBounds(result), [result]);
   const softwareGl = useMemo(() => isSoftwareWebGl(), []);
   const cogMm = useMemo(() => (result ? Math.max(30, largestOd(result) * 0.35) : 30), [result]);
@@ -68,7 +70,20 @@ export default function SpoolCanvas({
       <hemisphereLight args={['#ffffff', '#8d9aa7', 1.1]} />
       <directionalLight position={[5, -8, 10]} intensity={1.6} />
       <directionalLight position={[-6, 4, 3]} intensity={0.5} />
-      <OrbitControls makeDefault enableDamping={false} onStart={() => setOrbiting(true)} onEnd={() => setOrbiting(false)} />
+      <OrbitControls
+        makeDefault
+        enableDamping={false}
+        onStart={() => {
+          pointerDown.current = true;
+        }}
+        onChange={() => {
+          if (pointerDown.current && !orbiting) setOrbiting(true);
+        }}
+        onEnd={() => {
+          pointerDown.current = false;
+          if (orbiting) setOrbiting(false);
+        }}
+      />
       <CameraRig
         preset={view.preset}
         nonce={view.presetNonce}
