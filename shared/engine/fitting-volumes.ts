@@ -79,3 +79,22 @@ export function flangeVolumes(f: FlangeShape): { steel: number; water: number } 
   const bore = QUARTER_PI * f.boreMm * f.boreMm * length;
   return { steel: Math.max(0, disc - holes + rf + hub - bore), water: f.weldEndOdMm !== null ? bore : 0 };
 }
+
+/**
+ * One arm of a socket-weld fitting as a plain tube: outside `outsideMm` (socket bore B +
+ * 2 × socket wall C), a socket of bore B and depth J, then the fitting bore D for
+ * `beyondMm` (towards the fitting centre), mm³. An estimate: forged bodies carry more
+ * metal at the corners than tubes do. Water fills only the bore D (the pipe fills the socket).
+ */
+export function socketArmVolumes(
+  outsideMm: number,
+  socketBoreMm: number,
+  socketDepthMm: number,
+  boreMm: number,
+  beyondMm: number,
+): { steel: number; water: number } {
+  const outer = QUARTER_PI * outsideMm * outsideMm * (socketDepthMm + beyondMm);
+  const socket = QUARTER_PI * socketBoreMm * socketBoreMm * socketDepthMm;
+  const bore = QUARTER_PI * boreMm * boreMm * beyondMm;
+  return { steel: Math.max(0, outer - socket - bore), water: bore };
+}

@@ -6,7 +6,15 @@
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import type { PipePiece, WeightItem, WeightResult } from './compute-result';
 import type { SpoolGraph } from './build-graph';
-import { bendVolumes, capVolumes, flangeVolumes, frustumVolumes, tubeVolumes } from './fitting-volumes';
+import {
+  bendVolumes,
+  capVolumes,
+  flangeVolumes,
+  frustumVolumes,
+  socketArmVolumes,
+  tubeVolumes,
+} from './fitting-volumes';
+import { socketWeldDimensions, type SocketWeldDimensions } from '../standards/socket-weld-fittings';
 import { cachedPipeDimensions } from './standards-cache';
 import { addWarning, type IssueSink } from './issues';
 import type { NodeAnalysis, RunPipe } from './node-analysis';
@@ -148,9 +156,55 @@ export function componentMass(
         centroid: addScaled(wp, end0.conn.outward, d.lengthMm / 2),
       };
     }
+    case 'socket-fitting': {
+      if (!d.fitting || !a.nps) return null;
+      const look = socketWeldDimensions(a.nps, d.fitting);
+      if (!look.ok) return null;
+      const sw = look.value;
+      if (d.fitting === 'coupling') {
+        // Two sockets back to back with the laying length E between them, centred on the node.
+        const arm = volume(socketArm(sw, (sw.lengthMm ?? 0) / 2));
+        return { mass: { steel: 2 * arm.steel, water: 2 * arm.water }, centroid: wp };
+      }
+      // Elbows and tees: one arm per end, from the centre out to the socket face (A + J).
+      let steel = 0;
+      let water = 0;
+      let c = { x: 0, y: 0, z: 0 };
+      const arm = volume(socketArm(sw, sw.centreToBottomMm));
+      const armLen = sw.centreToBottomMm + sw.socketDepthMm;
+      for (const e of a.ends) {
+        steel += arm.steel;
+        water += arm.water;
+        c = add(c, addScaled(wp, e.conn.outward, armLen / 2));
+      }
+      return { mass: { steel, water }, centroid: scale(c, 1 / a.ends.length) };
+    }
+    case 'branch': {
+      // Half coupling: a socket on the header's outside, its axis along the branch.
+      if (a.node.kind !== 'half-coupling' || !d.branchNps || !d.branchAxis || !dims) return null;
+      const look = socketWeldDimensions(d.branchNps, 'half-coupling');
+      if (!look.ok || look.value.lengthMm === undefined) return null;
+      const sw = look.value;
+      const L = sw.lengthMm!;
+      return {
+        mass: volume(socketArm(sw, Math.max(0, L - sw.socketDepthMm))),
+        centroid: addScaled(wp, d.branchAxis, dims.odMm / 2 + L / 2),
+      };
+    }
     default:
       return null;
   }
+}
+
+/** One socket-weld arm of `sw`'s size with `beyondMm` of bore past the socket bottom, mm³. */
+function socketArm(sw: SocketWeldDimensions, beyondMm: number): Mass {
+  return socketArmVolumes(
+    sw.socketBoreMm + 2 * sw.socketWallMm,
+    sw.socketBoreMm,
+    sw.socketDepthMm,
+    sw.fittingBoreMm,
+    beyondMm,
+  );
 }
 
 /** Weighs the pieces and components and finds the centres of gravity. */

@@ -124,4 +124,18 @@ describe('socketWeldDimensions (ASME B16.11 Class 3000)', () => {
     // C–C 500 mm between two 1" Class 3000 elbows: 500 − (22.5 + 1.6) × 2 = 451.8 mm.
     expect(500 - 2 * (e.centreToBottomMm + SOCKET_EXPANSION_GAP_MM)).toBeCloseTo(451.8, 6);
   });
+
+  // vaibhavfitting B16.11-2016 Class 3000 cross table: socket wall C (average) and bore D.
+  const walls: Array<[Nps, number, number]> = [
+    ['1/2', 4.67, 15.8],
+    ['1', 5.69, 26.7],
+    ['2', 6.93, 52.5],
+    ['4', 10.69, 102.3],
+  ];
+  it.each(walls)('NPS %s: socket wall C %f mm, fitting bore D %f mm (for weight estimates)', (nps, c, d) => {
+    const v = value(socketWeldDimensions(nps, 'tee'));
+    expect(v.socketWallMm).toBe(c);
+    expect(v.fittingBoreMm).toBe(d);
+    expect(v.fittingBoreMm).toBeLessThan(v.socketBoreMm);
+  });
 });
