@@ -164,6 +164,15 @@ describe('spool editor in the browser', () => {
     await page.goto(`${app.baseUrl}/spools/${spoolId}`);
     await page.locator('[data-testid="cut-list"] tbody tr').nth(2).waitFor();
 
+    // The keys are listed where anyone can find them.
+    await page.locator('body').click({ position: { x: 5, y: 5 } });
+    await page.keyboard.press('?');
+    const keys = page.getByRole('dialog', { name: 'Editor keys' });
+    await keys.getByText('Insert a set-on branch on the selected run').waitFor();
+    await saveScreenshot(page, 'editor-09-keys');
+    await page.keyboard.press('Escape');
+    await keys.waitFor({ state: 'hidden' });
+
     // The server cannot be reached for the save: the change stays in this browser across a reload.
     await page.route('**/api/spools/*/draft', (route) => (route.request().method() === 'PUT' ? route.abort() : route.continue()));
     await page.locator('[data-testid="cut-list"] tbody tr[data-piece="P2"]').click();
