@@ -7,7 +7,7 @@ import type { BomItem, PipePiece } from './compute-result';
 import type { SpoolGraph } from './build-graph';
 import type { NodeAnalysis } from './node-analysis';
 import { compareNps } from '../standards/nps';
-import { scheduleLabel } from '../standards/pipe-schedules';
+import { cachedScheduleLabel } from './standards-cache';
 
 const ORDER: Record<BomItem['category'], number> = {
   pipe: 0,
@@ -25,8 +25,16 @@ export function buildBillOfMaterials(
   kerfMm: (piece: PipePiece) => number,
 ): BomItem[] {
   const items = new Map<string, BomItem>();
+  // One description per schedule and material: most spools have one or two.
+  let lastSchedule: PipePiece['schedule'] | null = null;
+  let lastMaterial: string | null = null;
+  let description = '';
   for (const p of pieces) {
-    const description = `Pipe ${scheduleLabel(p.schedule)}, ${p.material}, ASME B36.10M`;
+    if (p.schedule !== lastSchedule || p.material !== lastMaterial) {
+      lastSchedule = p.schedule;
+      lastMaterial = p.material;
+      description = `Pipe ${cachedScheduleLabel(p.schedule)}, ${p.material}, ASME B36.10M`;
+    }
     const key = `pipe|${p.nps}|${description}`;
     const it = items.get(key) ?? {
       category: 'pipe' as const,
@@ -40,7 +48,7 @@ export function buildBillOfMaterials(
     it.totalCutMm = it.totalCutMm === null || p.cutLengthMm === null ? null : it.totalCutMm + p.cutLengthMm;
     it.totalStockMm =
       it.totalStockMm === null || p.cutLengthMm === null ? null : it.totalStockMm + p.cutLengthMm + kerfMm(p);
-    items.set(key, it);
+    if (it.count === 1) items.set(key, it);
   }
   const count = (category: BomItem['category'], description: string, nps: BomItem['nps']) => {
     const key = `${category}|${nps}|${description}`;
@@ -53,7 +61,7 @@ export function buildBillOfMaterials(
       totalStockMm: null,
     };
     it.count += 1;
-    items.set(key, it);
+    if (it.count === 1) items.set(key, it);
   };
   for (const id of graph.nodeOrder) {
     const a = analyses.get(id);

@@ -115,7 +115,8 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
   const { pieces, marks } = buildCutList(graph, analyses, placed, pipes, positions, issues);
   const { welds, diameterInches } = buildWeldList(graph, analyses, placed, positions, marks);
   const weights = computeWeights(graph, pieces, analyses, positions, pipes, issues);
-  const massByNode = new Map(weights.items.map((i) => [i.ref, i.massKg]));
+  const massByNode = new Map<string, number>();
+  for (const i of weights.items) massByNode.set(i.ref, i.massKg);
   const components = componentResults(graph, analyses, positions, (id) => massByNode.get(id) ?? null);
   const flanges = flangeOrientations(
     graph,

@@ -36,8 +36,7 @@ export function buildWeldList(
   const name = (nodeId: string) => {
     const n = graph.nodes.get(nodeId);
     if (!n) return nodeId;
-    const kind = n.kind === 'end' ? n.end.type.replace(/-/g, ' ') : n.kind.replace(/-/g, ' ');
-    return `${kind} ${nodeId}`;
+    return `${spaced(n.kind === 'end' ? n.end.type : n.kind)} ${nodeId}`;
   };
   const internals = (nodeId: string) => {
     const a = analyses.get(nodeId);
@@ -146,4 +145,13 @@ export function buildWeldList(
   }
   const diameterInches = Math.round(welds.reduce((s, w) => s + w.diameterInches, 0) * 1000) / 1000;
   return { welds, diameterInches };
+}
+
+const SPACED = new Map<string, string>();
+
+/** "weld neck flange" from "weld-neck-flange", memoised (a handful of kinds, many welds). */
+function spaced(kind: string): string {
+  let hit = SPACED.get(kind);
+  if (hit === undefined) SPACED.set(kind, (hit = kind.replace(/-/g, ' ')));
+  return hit;
 }
