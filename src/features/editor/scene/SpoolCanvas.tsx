@@ -9,8 +9,8 @@ import type { Selection } from '../model/editor-selection';
 import type { ViewPrefs } from '../model/view-prefs';
 import { CameraRig } from './CameraRig';
 import { CentreOfGravityMarker } from './CentreOfGravityMarker';
-import { DimensionLabels } from './DimensionLabels';
-import { PlantGround } from './PlantGround';
+import { buildLabelItems, LabelOverlay, LabelProjector } from './DimensionLabels';
+import { groundLabelItems, PlantGround } from './PlantGround';
 import { sceneBounds } from './scene-bounds';
 import { largestOd } from './scene-lookups';
 import { SCENE_COLOURS } from './scene-palette';
@@ -18,6 +18,7 @@ import { SCENE_STATS_ENABLED, SceneStats } from './SceneStats';
 import { SpoolModel } from './SpoolModel';
 import { isSoftwareWebGl } from './gl-capabilities';
 import { NextRunPreview } from './NextRunPreview';
+import { toScene } from './scene-units';
 import type { Vec3 } from '../../../../shared/schemas/spool-design-primitives.schema';
 
 /**
@@ -57,52 +58,86 @@ export default function SpoolCanvas({
   const softwareGl = useMemo(() => isSoftwareWebGl(), []);
   const cogMm = useMemo(() => (result ? Math.max(30, largestOd(result) * 0.35) : 30), [result]);
   const cog = result?.weights.centreOfGravity ?? null;
+  const overlayRef = useRef<HTMLDivElement | null>(null);
+  const labelItems = useMemo(
+    () => [
+      ...groundLabelItems(bounds),
+      ...(result && design
+        ? buildLabelItems({
+            result,
+            design,
+            labels: view.labels,
+            units,
+            selection,
+            cog:
+              cog && view.showCentreOfGravity
+                ? {
+                    at: toScene({ x: cog.x, y: cog.y, z: cog.z + cogMm * 2.2 }),
+                    emptyKg: result.weights.emptyKg,
+                  }
+                : null,
+          })
+        : []),
+    ],
+    [bounds, result, design, view.labels, view.showCentreOfGravity, units, selection, cog, cogMm],
+  );
   return (
-    <Canvas
-      frameloop="demand"
-      dpr={softwareGl ? 1 : [1, 2]}
-      camera={{ fov: 35, up: [0, 0, 1], position: [4, -4, 3], near: 0.01, far: 500 }}
-      onPointerMissed={() => onSelect(null)}
-      gl={{ antialias: !softwareGl }}
-      aria-label="3D model of the spool"
-    >
-      <color attach="background" args={[SCENE_COLOURS.background]} />
-      <hemisphereLight args={['#ffffff', '#8d9aa7', 1.1]} />
-      <directionalLight position={[5, -8, 10]} intensity={1.6} />
-      <directionalLight position={[-6, 4, 3]} intensity={0.5} />
-      <OrbitControls
-        makeDefault
-        enableDamping={false}
-        onStart={() => {
-          pointerDown.current = true;
-        }}
-        onChange={() => {
-          if (pointerDown.current && !orbiting) setOrbiting(true);
-        }}
-        onEnd={() => {
-          pointerDown.current = false;
-          if (orbiting) setOrbiting(false);
-        }}
-      />
-      <CameraRig
-        preset={view.preset}
-        nonce={view.presetNonce}
-        step={view.cameraStep}
-        bounds={bounds}
-        hasModel={!!result && result.components.length > 0}
-      />
-      <PlantGround bounds={bounds} />
-      {result ? (
-        <group ref={modelRef} name="spool-model">
-          <SpoolModel result={result} selection={selection} onSelect={onSelect} />
-        </group>
-      ) : null}
-      {result && design && !orbiting ? <DimensionLabels result={result} design={design} labels={view.labels} units={units} selection={selection} /> : null}
-      {result && cog && view.showCentreOfGravity && !orbiting ? (
-        <CentreOfGravityMarker position={cog} emptyKg={result.weights.emptyKg} sizeMm={cogMm} />
-      ) : null}
-      {nextRun ? <NextRunPreview from={nextRun.from} direction={nextRun.direction} lengthMm={nextRun.lengthMm} valid={nextRun.valid} /> : null}
-      {SCENE_STATS_ENABLED ? <SceneStats /> : null}
-    </Canvas>
+    <>
+      <Canvas
+        frameloop="demand"
+        dpr={softwareGl ? 1 : [1, 2]}
+        camera={{ fov: 35, up: [0, 0, 1], position: [4, -4, 3], near: 0.01, far: 500 }}
+        onPointerMissed={() => onSelect(null)}
+        gl={{ antialias: !softwareGl }}
+        aria-label="3D model of the spool"
+      >
+        <color attach="background" args={[SCENE_COLOURS.background]} />
+        <hemisphereLight args={['#ffffff', '#8d9aa7', 1.1]} />
+        <directionalLight position={[5, -8, 10]} intensity={1.6} />
+        <directionalLight position={[-6, 4, 3]} intensity={0.5} />
+        <OrbitControls
+          makeDefault
+          enableDamping={false}
+          onStart={() => {
+            pointerDown.current = true;
+          }}
+          onChange={() => {
+            if (pointerDown.current && !orbiting) setOrbiting(true);
+          }}
+          onEnd={() => {
+            pointerDown.current = false;
+            if (orbiting) setOrbiting(false);
+          }}
+        />
+        <CameraRig
+          preset={view.preset}
+          nonce={view.presetNonce}
+          step={view.cameraStep}
+          bounds={bounds}
+          hasModel={!!result && result.components.length > 0}
+        />
+        <PlantGround bounds={bounds} />
+        {result ? (
+          <group ref={modelRef} name="spool-model">
+            <SpoolModel result={result} selection={selection} onSelect={onSelect} />
+          </group>
+        ) : null}
+        <LabelProjector items={labelItems} overlayRef={overlayRef} />
+        {result && cog && view.showCentreOfGravity ? (
+          <CentreOfGravityMarker position={cog} sizeMm={cogMm} />
+        ) : null}
+        {nextRun ? (
+          <NextRunPreview
+            from={nextRun.from}
+            direction={nextRun.direction}
+            lengthMm={nextRun.lengthMm}
+            valid={nextRun.valid}
+          />
+        ) : null}
+        {SCENE_STATS_ENABLED ? <SceneStats /> : null}
+      </Canvas>
+      {/* Html labels follow the camera every frame: hidden (not unmounted) while the user orbits. */}
+      <LabelOverlay items={labelItems} hidden={orbiting} overlayRef={overlayRef} />
+    </>
   );
 }
