@@ -72,15 +72,23 @@ export function flangePairChecks(
     const a = analyses.get(f.nodeId);
     if (a?.role.kind === 'end') runOfFlange.set(f.nodeId, a.role.conn.run.id);
   }
+  // Per flange, once: its run's frame, and its first hole carried back to the root frame.
+  const frameOf: (Mat3 | undefined)[] = [];
+  const holeAtRoot: (Vec3 | null)[] = [];
+  for (const f of flanges) {
+    const fr = frames.get(runOfFlange.get(f.nodeId) ?? '');
+    frameOf.push(fr);
+    holeAtRoot.push(fr ? applyTransposed(fr, f.firstHoleDirection) : null);
+  }
   for (let i = 0; i < flanges.length; i++) {
     for (let j = i + 1; j < flanges.length; j++) {
       const A = flanges[i]!;
       const B = flanges[j]!;
       if (!A.boltCount || A.boltCount !== B.boltCount) continue;
-      const parallelFaces = Math.abs(dot(A.outward, B.outward)) > Math.cos((0.1 * Math.PI) / 180);
-      const fa = frames.get(runOfFlange.get(A.nodeId) ?? '');
-      const fb = frames.get(runOfFlange.get(B.nodeId) ?? '');
-      const carried = fa && fb ? apply(fb, applyTransposed(fa, A.firstHoleDirection)) : null;
+      const parallelFaces = Math.abs(dot(A.outward, B.outward)) > PARALLEL_COS;
+      const fb = frameOf[j];
+      const local = holeAtRoot[i];
+      const carried = local && fb ? apply(fb, local) : null;
       if (!carried) {
         out.push({
           a: A.nodeId,
@@ -143,6 +151,9 @@ export function flangePairChecks(
   }
   return out;
 }
+
+/** Faces within 0.1° of parallel (cosine). */
+const PARALLEL_COS = Math.cos((0.1 * Math.PI) / 180);
 
 function r(x: number): number {
   return Math.round(x * 100) / 100;
