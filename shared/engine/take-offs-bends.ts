@@ -78,13 +78,13 @@ export function analyseElbow(
   const is90 = Math.abs(angleDeg - 90) <= tol;
   const is45 = Math.abs(angleDeg - 45) <= tol;
   const base90 = cachedElbowDimensions(nps, radius === 'long' ? 'LR90' : 'SR90');
-  const kind90 = `${radius === 'long' ? 'long' : 'short'}-radius 90° elbow`;
+  // Messages are built only for from-memory values: this runs on every keystroke.
   const note90 = (what: string) => {
-    if (base90.ok)
+    if (base90.ok && base90.value.status === 'M')
       noteUnconfirmed(
         ctx.unconfirmed,
-        base90.value.status,
-        `NPS ${nps} ${kind90} ${what} = ${mmText(base90.value.centreToEndMm)} mm`,
+        'M',
+        `NPS ${nps} ${radius === 'long' ? 'long' : 'short'}-radius 90° elbow ${what} = ${mmText(base90.value.centreToEndMm)} mm`,
         'ASME B16.9',
         node.id,
       );
@@ -161,13 +161,14 @@ export function analyseElbow(
     else {
       ({ centreToEndMm: takeOff, source } = e45.value);
       R = e45.value.bendRadiusMm;
-      noteUnconfirmed(
-        ctx.unconfirmed,
-        e45.value.status,
-        `NPS ${nps} long-radius 45° elbow B = ${mmText(e45.value.centreToEndMm)} mm`,
-        'ASME B16.9',
-        node.id,
-      );
+      if (e45.value.status === 'M')
+        noteUnconfirmed(
+          ctx.unconfirmed,
+          e45.value.status,
+          `NPS ${nps} long-radius 45° elbow B = ${mmText(e45.value.centreToEndMm)} mm`,
+          'ASME B16.9',
+          node.id,
+        );
     }
     what = `Elbow 45° ${rr}`;
   } else {
@@ -233,10 +234,10 @@ export function analyseReturn(
   const look = nps ? cachedElbowDimensions(nps, radius === 'long' ? 'LR180' : 'SR180') : null;
   if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
   const O = look?.ok ? look.value.centreToEndMm : null;
-  if (look?.ok)
+  if (look?.ok && look.value.status === 'M')
     noteUnconfirmed(
       ctx.unconfirmed,
-      look.value.status,
+      'M',
       `NPS ${nps} ${radius === 'long' ? 'long' : 'short'}-radius 180° return O = ${mmText(look.value.centreToEndMm)} mm, K = ${mmText(look.value.backToFaceMm ?? 0)} mm`,
       'ASME B16.9',
       node.id,

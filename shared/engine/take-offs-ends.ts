@@ -35,7 +35,8 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
         : null;
       if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
       const d = look?.ok ? look.value : null;
-      if (d) noteFlange(ctx, node.id, `NPS ${nps} Class ${cls} ${wn ? 'weld-neck' : 'slip-on'} flange`, d);
+      if (d && d.status === 'M')
+        noteFlange(ctx, node.id, `NPS ${nps} Class ${cls} ${wn ? 'weld-neck' : 'slip-on'} flange`, d);
       const takeOff = d ? (wn ? d.hubLengthMm + d.raisedFaceMm : (d.slipOnSetbackMm ?? null)) : null;
       if (d && !wn && d.slipOnSetbackMm === undefined) {
         addError(ctx.issues, 'standard-data-missing', `No slip-on setback for NPS ${nps}`, node.id);
@@ -85,10 +86,10 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
       const look = nps && pipe.dims ? capDimensions(nps, pipe.dims.wallMm) : null;
       if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
       const len = look?.ok ? look.value.lengthMm : null;
-      if (look?.ok)
+      if (look?.ok && look.value.status === 'M')
         noteUnconfirmed(
           ctx.unconfirmed,
-          look.value.status,
+          'M',
           `NPS ${nps} cap limiting wall = ${mmText(look.value.limitingWallMm)} mm (it picks the cap length ${mmText(look.value.lengthMm)} mm for this ${mmText(pipe.dims!.wallMm)} mm wall)`,
           'ASME B16.9',
           node.id,
@@ -167,12 +168,12 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
 /** Notes each group of a flange's values that is from memory (drilling, hub length, body). */
 function noteFlange(ctx: NodeContext, nodeId: string, what: string, d: FlangeDimensions): void {
   const p = d.partStatus;
-  const note = (status: typeof p.drilling, values: string) =>
-    noteUnconfirmed(ctx.unconfirmed, status, `${what} ${values}`, 'ASME B16.5', nodeId);
-  note(
-    p.drilling,
-    `drilling (OD ${mmText(d.odMm)} mm, bolt circle ${mmText(d.boltCircleMm)} mm, ${d.boltCount} holes ${d.boltHoleDiaIn} in)`,
-  );
-  note(p.hubLength, `length through hub Y = ${mmText(d.hubLengthMm)} mm`);
-  note(p.body, `thickness tf = ${mmText(d.thicknessMm)} mm`);
+  const note = (values: string) =>
+    noteUnconfirmed(ctx.unconfirmed, 'M', `${what} ${values}`, 'ASME B16.5', nodeId);
+  if (p.drilling === 'M')
+    note(
+      `drilling (OD ${mmText(d.odMm)} mm, bolt circle ${mmText(d.boltCircleMm)} mm, ${d.boltCount} holes ${d.boltHoleDiaIn} in)`,
+    );
+  if (p.hubLength === 'M') note(`length through hub Y = ${mmText(d.hubLengthMm)} mm`);
+  if (p.body === 'M') note(`thickness tf = ${mmText(d.thicknessMm)} mm`);
 }

@@ -60,10 +60,10 @@ export function analyseReducer(
   const look = reducerDimensions(largeNps, smallNps);
   if (!look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
   const H = look.ok ? look.value.lengthMm : null;
-  if (look.ok)
+  if (look.ok && look.value.status === 'M')
     noteUnconfirmed(
       ctx.unconfirmed,
-      look.value.status,
+      'M',
       `NPS ${largeNps} reducer length H = ${mmText(look.value.lengthMm)} mm`,
       'ASME B16.9',
       node.id,

@@ -39,7 +39,7 @@ export function analyseTee(
   if (look && !look.ok) addError(ctx.issues, 'standard-data-missing', look.missing, node.id);
   const C = look?.ok ? look.value.runCentreToEndMm : null;
   const M = look?.ok ? look.value.branchCentreToEndMm : null;
-  if (look?.ok) {
+  if (look?.ok && look.value.status === 'M') {
     const size = runNps === branchNps ? `NPS ${runNps} tee` : `NPS ${runNps} × ${branchNps} reducing tee`;
     noteUnconfirmed(
       ctx.unconfirmed,
