@@ -24,7 +24,16 @@ export function buildBillOfMaterials(
   pieces: PipePiece[],
   kerfMm: (piece: PipePiece) => number,
 ): BomItem[] {
-  const items = new Map<string, BomItem>();
+  // Keyed category → size → description, so no joined key string is built and hashed per
+  // item (the descriptions are fresh strings; hashing them twice was the cost here).
+  const items = new Map<string, Map<string, Map<string, BomItem>>>();
+  const slot = (category: string, nps: string): Map<string, BomItem> => {
+    let bySize = items.get(category);
+    if (!bySize) items.set(category, (bySize = new Map()));
+    let byText = bySize.get(nps);
+    if (!byText) bySize.set(nps, (byText = new Map()));
+    return byText;
+  };
   // One description per schedule and material: most spools have one or two.
   let lastSchedule: PipePiece['schedule'] | null = null;
   let lastMaterial: string | null = null;
@@ -35,8 +44,8 @@ export function buildBillOfMaterials(
       lastMaterial = p.material;
       description = `Pipe ${cachedScheduleLabel(p.schedule)}, ${p.material}, ASME B36.10M`;
     }
-    const key = `pipe|${p.nps}|${description}`;
-    const it = items.get(key) ?? {
+    const byText = slot('pipe', p.nps);
+    const it = byText.get(description) ?? {
       category: 'pipe' as const,
       description,
       nps: p.nps,
@@ -48,11 +57,11 @@ export function buildBillOfMaterials(
     it.totalCutMm = it.totalCutMm === null || p.cutLengthMm === null ? null : it.totalCutMm + p.cutLengthMm;
     it.totalStockMm =
       it.totalStockMm === null || p.cutLengthMm === null ? null : it.totalStockMm + p.cutLengthMm + kerfMm(p);
-    if (it.count === 1) items.set(key, it);
+    if (it.count === 1) byText.set(description, it);
   }
   const count = (category: BomItem['category'], description: string, nps: BomItem['nps']) => {
-    const key = `${category}|${nps}|${description}`;
-    const it = items.get(key) ?? {
+    const byText = slot(category, nps);
+    const it = byText.get(description) ?? {
       category,
       description,
       nps,
@@ -61,7 +70,7 @@ export function buildBillOfMaterials(
       totalStockMm: null,
     };
     it.count += 1;
-    if (it.count === 1) items.set(key, it);
+    if (it.count === 1) byText.set(description, it);
   };
   for (const id of graph.nodeOrder) {
     const a = analyses.get(id);
@@ -78,7 +87,10 @@ export function buildBillOfMaterials(
       );
     }
   }
-  return [...items.values()].sort(
+  const all: BomItem[] = [];
+  for (const bySize of items.values())
+    for (const byText of bySize.values()) for (const it of byText.values()) all.push(it);
+  return all.sort(
     (x, y) =>
       ORDER[x.category] - ORDER[y.category] ||
       compareNps(y.nps, x.nps) ||
