@@ -14,6 +14,7 @@ import type { NodeAnalysis, NodeEnd, RunPipe } from './node-analysis';
 import type { PlacedRun } from './place-runs';
 import { addScaled } from './vec3-math';
 import { mitreSegmentPieces } from './mitre-segments';
+import { pieceMark } from './mark-text';
 
 /** Where the pipe itself ends at a run end, mm plant (port + take-off + gap along the run). */
 function pipeEndPoint(placed: PlacedRun, atFrom: boolean): Vec3 {
@@ -84,7 +85,7 @@ export function buildCutList(
     const [t0, t1] = [terminals[0], terminals[terminals.length - 1]];
     if (!t0 || !t1) continue;
     const allowance = terminals.reduce((s, t) => s + t.allowance, 0);
-    const mark = `P${pieces.length + 1}`;
+    const mark = pieceMark(pieces.length + 1);
     const wall = first.dims?.wallMm ?? null;
     const branchHeader = (t: typeof t0) => {
       const a = analyses.get(t.nodeId);

@@ -8,6 +8,7 @@ import type { SpoolGraph } from './build-graph';
 import { endPrepFor } from './end-prep';
 import type { NodeAnalysis, RunPipe } from './node-analysis';
 import { add, addScaled, cross, dot, normalise, rotateAbout, scale, sub } from './vec3-math';
+import { pieceMark } from './mark-text';
 
 /** Pieces for the middle segments of every mitred bend, marked after `firstMark` pieces. */
 export function mitreSegmentPieces(
@@ -38,7 +39,7 @@ export function mitreSegmentPieces(
       const dir = normalise(sub(v1, v0)) ?? ea.conn.outward;
       const cut = seg;
       out.push({
-        mark: `P${firstMark + out.length + 1}`,
+        mark: pieceMark(firstMark + out.length + 1),
         runIds: [],
         nodeId,
         nps: a.nps,

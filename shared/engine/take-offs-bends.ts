@@ -11,11 +11,17 @@ import { buttEnd } from './node-end-builders';
 import { mmText, noteUnconfirmed } from './unconfirmed-data';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
 import { cross, normalise, rejectFrom, scale } from './vec3-math';
+import { TextMemo } from './text-memo';
 
 type ElbowNode = Extract<SpoolNode, { kind: 'elbow' }>;
 type ReturnNode = Extract<SpoolNode, { kind: 'return' }>;
 
 const DEG = Math.PI / 180;
+
+const ELBOW_DESCRIPTION = new TextMemo((what, nps, sched) => `${what}, NPS ${nps} ${sched}, ASME B16.9`);
+const ELBOW_BOM = new TextMemo((what, sched, material) => `${what} ${sched}, ${material}, ASME B16.9`);
+const ELBOW_90 = { LR: 'Elbow 90° LR', SR: 'Elbow 90° SR' } as const;
+const ELBOW_45 = { LR: 'Elbow 45° LR', SR: 'Elbow 45° SR' } as const;
 
 /** Largest deflection one elbow or mitred bend makes, degrees. */
 export const MAX_BEND_DEG = 90;
@@ -154,7 +160,7 @@ export function analyseElbow(
     if (!base90.ok) addError(ctx.issues, 'standard-data-missing', base90.missing, node.id);
     else ({ centreToEndMm: takeOff, source } = base90.value);
     note90('A');
-    what = `Elbow 90° ${rr}`;
+    what = ELBOW_90[rr];
   } else if (is45 && radius === 'long') {
     const e45 = cachedElbowDimensions(nps, 'LR45');
     if (!e45.ok) addError(ctx.issues, 'standard-data-missing', e45.missing, node.id);
@@ -170,7 +176,7 @@ export function analyseElbow(
           node.id,
         );
     }
-    what = `Elbow 45° ${rr}`;
+    what = ELBOW_45[rr];
   } else {
     if (!base90.ok) addError(ctx.issues, 'standard-data-missing', base90.missing, node.id);
     else {
@@ -191,8 +197,8 @@ export function analyseElbow(
     role: ctx.role,
     nps,
     ends: [buttEnd(a, nps, takeOff, gA), buttEnd(b, nps, takeOff, gB)],
-    description: `${what}, NPS ${nps} ${sched}, ASME B16.9`,
-    bom: { category: 'fitting', description: `${what} ${sched}, ${spec.fittingMaterial}, ASME B16.9`, nps },
+    description: ELBOW_DESCRIPTION.text(what, nps, sched),
+    bom: { category: 'fitting', description: ELBOW_BOM.text(what, sched, spec.fittingMaterial), nps },
     source,
     internalWelds: [],
     detail: {

@@ -13,8 +13,22 @@ import { buttEnd, openEnd, socketEnd } from './node-end-builders';
 import { mmText, noteUnconfirmed } from './unconfirmed-data';
 import type { FlangeDimensions } from '../standards/flanges';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
+import { TextMemo } from './text-memo';
 
 type EndNode = Extract<SpoolNode, { kind: 'end' }>;
+
+// Parts: 'weld neck' | 'slip-on', class, NPS (or '?'), schedule label ('' for a slip-on).
+const flangeText =
+  (blind: boolean) =>
+  (kind: string, cls: string, nps: string, sched: string): string =>
+    `Flange ${kind} RF Class ${cls}, NPS ${nps}${sched ? ` ${sched} bore` : ''}, ASME B16.5${blind ? ', with blind flange' : ''}`;
+const FLANGE_DESCRIPTION = new TextMemo(flangeText(false));
+const BLIND_FLANGE_DESCRIPTION = new TextMemo(flangeText(true));
+// Parts: kind, class, schedule label ('' for a slip-on), material.
+const FLANGE_BOM = new TextMemo(
+  (kind, cls, sched, material) =>
+    `Flange ${kind} RF Class ${cls}${sched ? ` ${sched} bore` : ''}, ${material}, ASME B16.5`,
+);
 
 /** Analyses an end node with its one connection. */
 export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): NodeAnalysis {
@@ -49,7 +63,14 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
       }
       const kind = wn ? 'weld neck' : 'slip-on';
       const blind = end.blind === true;
-      const description = `Flange ${kind} RF Class ${cls}, NPS ${nps ?? '?'}${wn ? ` ${sched} bore` : ''}, ASME B16.5${blind ? ', with blind flange' : ''}`;
+      const clsText = String(cls);
+      const bore = wn ? sched : '';
+      const description = (blind ? BLIND_FLANGE_DESCRIPTION : FLANGE_DESCRIPTION).text(
+        kind,
+        clsText,
+        nps ?? '?',
+        bore,
+      );
       return {
         node,
         role,
@@ -60,7 +81,7 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
         bom: nps
           ? {
               category: 'flange',
-              description: `Flange ${kind} RF Class ${cls}${wn ? ` ${sched} bore` : ''}, ${spec.flangeMaterial}, ASME B16.5`,
+              description: FLANGE_BOM.text(kind, clsText, bore, spec.flangeMaterial),
               nps,
             }
           : null,

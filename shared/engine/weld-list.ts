@@ -10,6 +10,7 @@ import type { NodeAnalysis, NodeEnd } from './node-analysis';
 import type { PlacedRun } from './place-runs';
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import { addScaled } from './vec3-math';
+import { weldMark } from './mark-text';
 
 /** Builds the weld list and the diameter-inch total. */
 export function buildWeldList(
@@ -22,7 +23,7 @@ export function buildWeldList(
   const welds: WeldResult[] = [];
   const push = (w: Omit<WeldResult, 'mark' | 'diameterInches'>) => {
     welds.push({
-      mark: `W${welds.length + 1}`,
+      mark: weldMark(welds.length + 1),
       type: w.type,
       nps: w.nps,
       diameterInches: npsInches(w.nps),
