@@ -20,9 +20,15 @@ import {
   type Schedule,
 } from '../standards/pipe-schedules';
 
-const pipes = new Map<string, Lookup<PipeDimensions>>();
-const flanges = new Map<string, Lookup<FlangeDimensions>>();
-const elbows = new Map<string, Lookup<ElbowDimensions>>();
+// Nested maps keyed by each argument: a joined key string would be a fresh string to
+// build and hash on every call.
+const pipes = new Map<Nps, Map<Schedule, Lookup<PipeDimensions>>>();
+const flanges = new Map<
+  Nps,
+  Map<FlangeClass, Map<FlangeType, Map<number | undefined, Lookup<FlangeDimensions>>>>
+>();
+let flangeEntries = 0;
+const elbows = new Map<Nps, Map<ElbowKind, Lookup<ElbowDimensions>>>();
 const labels = new Map<Schedule, string>();
 const ods = new Map<Nps, number | null>();
 
@@ -38,9 +44,10 @@ export function cachedPipeOdMm(nps: Nps): number | null {
 
 /** {@link elbowDimensions}, memoised. */
 export function cachedElbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensions> {
-  const key = `${nps}|${kind}`;
-  let hit = elbows.get(key);
-  if (!hit) elbows.set(key, (hit = elbowDimensions(nps, kind)));
+  let byKind = elbows.get(nps);
+  if (!byKind) elbows.set(nps, (byKind = new Map()));
+  let hit = byKind.get(kind);
+  if (!hit) byKind.set(kind, (hit = elbowDimensions(nps, kind)));
   return hit;
 }
 
@@ -53,9 +60,10 @@ export function cachedScheduleLabel(schedule: Schedule): string {
 
 /** {@link pipeDimensions}, memoised. */
 export function cachedPipeDimensions(nps: Nps, schedule: Schedule): Lookup<PipeDimensions> {
-  const key = `${nps}|${schedule}`;
-  let hit = pipes.get(key);
-  if (!hit) pipes.set(key, (hit = pipeDimensions(nps, schedule)));
+  let bySchedule = pipes.get(nps);
+  if (!bySchedule) pipes.set(nps, (bySchedule = new Map()));
+  let hit = bySchedule.get(schedule);
+  if (!hit) bySchedule.set(schedule, (hit = pipeDimensions(nps, schedule)));
   return hit;
 }
 
@@ -66,12 +74,20 @@ export function cachedFlangeDimensions(
   type: FlangeType,
   pipeWallMm: number | undefined,
 ): Lookup<FlangeDimensions> {
-  const key = `${nps}|${cls}|${type}|${pipeWallMm ?? ''}`;
-  let hit = flanges.get(key);
+  let byClass = flanges.get(nps);
+  if (!byClass) flanges.set(nps, (byClass = new Map()));
+  let byType = byClass.get(cls);
+  if (!byType) byClass.set(cls, (byType = new Map()));
+  let byWall = byType.get(type);
+  if (!byWall) byType.set(type, (byWall = new Map()));
+  let hit = byWall.get(pipeWallMm);
   if (!hit) {
     hit = flangeDimensions(nps, cls, type, pipeWallMm === undefined ? {} : { pipeWallMm });
     // Walls come from the pipe tables, so keys stay few; cap anyway.
-    if (flanges.size < 5000) flanges.set(key, hit);
+    if (flangeEntries < 5000) {
+      byWall.set(pipeWallMm, hit);
+      flangeEntries++;
+    }
   }
   return hit;
 }
