@@ -319,6 +319,8 @@ export type BillOfMaterials = { items: BomItem[] };
 
 /** A weighed item. */
 export type WeightItem = {
+  /** What `ref` names: a pipe piece mark or a node id (a node may be called "P3" too). */
+  kind: 'pipe' | 'component';
   ref: string;
   description: string;
   massKg: number;

@@ -116,7 +116,7 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
   const { welds, diameterInches } = buildWeldList(graph, analyses, placed, positions, marks);
   const weights = computeWeights(graph, pieces, analyses, positions, pipes, issues);
   const massByNode = new Map<string, number>();
-  for (const i of weights.items) massByNode.set(i.ref, i.massKg);
+  for (const i of weights.items) if (i.kind === 'component') massByNode.set(i.ref, i.massKg);
   const components = componentResults(graph, analyses, positions, (id) => massByNode.get(id) ?? null);
   const flanges = flangeOrientations(
     graph,

@@ -227,6 +227,7 @@ export function computeWeights(
     piece.massKg = round(m.steel, 2);
     const centroid = scale(add(piece.start, piece.end), 0.5);
     items.push({
+      kind: 'pipe',
       ref: piece.mark,
       description: `Pipe ${piece.mark} NPS ${piece.nps}`,
       massKg: m.steel,
@@ -251,6 +252,7 @@ export function computeWeights(
       continue;
     }
     items.push({
+      kind: 'component',
       ref: nodeId,
       description: a.description,
       massKg: m.mass.steel,

@@ -77,3 +77,26 @@ describe('fitting weights', () => {
     expect(v90.water * WATER_KG_PER_MM3).toBeGreaterThan(390);
   });
 });
+
+describe('component masses', () => {
+  // Regression: node masses were looked up in one map keyed by piece marks and node ids
+  // together, so a node named like a piece ("P1") took that pipe's mass.
+  it('never gives a node the mass of a pipe piece that shares its name', () => {
+    const r = computeSpool(
+      design(
+        [plain('P1'), elbow('e1'), plain('b')],
+        [run('r1', 'P1', 'e1', EAST, 1000), run('r2', 'e1', 'b', NORTH, 1000)],
+        {
+          nps: '6',
+        },
+      ),
+    );
+    const piece = r.pieces.find((p) => p.mark === 'P1');
+    expect(piece?.massKg).toBeGreaterThan(0);
+    const end = r.components.find((c) => c.nodeId === 'P1');
+    expect(end).toBeDefined();
+    expect(end!.massKg).toBeNull();
+    const bend = r.components.find((c) => c.nodeId === 'e1');
+    expect(bend!.massKg).toBeGreaterThan(0);
+  });
+});
