@@ -90,16 +90,7 @@ export function flangePairChecks(
       const local = holeAtRoot[i];
       const carried = local && fb ? apply(fb, local) : null;
       if (!carried) {
-        out.push({
-          a: A.nodeId,
-          b: B.nodeId,
-          parallelFaces,
-          errorDeg: null,
-          errorMm: null,
-          toleranceMm,
-          withinTolerance: null,
-          correction: null,
-        });
+        out.push(uncheckedPair(A.nodeId, B.nodeId, parallelFaces, toleranceMm));
         continue;
       }
       const view = negate(B.outward);
@@ -110,16 +101,7 @@ export function flangePairChecks(
         z: carried.z - B.outward.z * dot(carried, B.outward),
       });
       if (!carriedInPlane || angleBetweenDeg(carried, carriedInPlane) > 1) {
-        out.push({
-          a: A.nodeId,
-          b: B.nodeId,
-          parallelFaces,
-          errorDeg: null,
-          errorMm: null,
-          toleranceMm,
-          withinTolerance: null,
-          correction: null,
-        });
+        out.push(uncheckedPair(A.nodeId, B.nodeId, parallelFaces, toleranceMm));
         continue;
       }
       const pitch = 360 / B.boltCount!;
@@ -157,4 +139,18 @@ const PARALLEL_COS = Math.cos((0.1 * Math.PI) / 180);
 
 function r(x: number): number {
   return Math.round(x * 100) / 100;
+}
+
+/** A pair whose holes cannot be compared (no frame to carry a hole across, or faces not square to it). */
+function uncheckedPair(a: string, b: string, parallelFaces: boolean, toleranceMm: number): FlangePairCheck {
+  return {
+    a,
+    b,
+    parallelFaces,
+    errorDeg: null,
+    errorMm: null,
+    toleranceMm,
+    withinTolerance: null,
+    correction: null,
+  };
 }
