@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # PostgreSQL on loopback for `npm start` and `npm test`: finds (or installs) Debian's
-# server binaries, creates a cluster in a folder of the repo and starts/stops it.
-# The server refuses to run as root, so as root every command runs as `postgres`.
+# server binaries, creates a cluster in a given folder and starts/stops it.
+# The server refuses to run as root, so as root every command runs as `postgres`, and the
+# cluster folder must be one that `postgres` can reach (see pg_dir_usable).
 # Source this file; it defines functions only.
 
 pg_log() { printf '\033[36m[tackline]\033[0m %s\n' "$*" >&2; }
@@ -26,6 +27,14 @@ pg_find_bin() {
 # Runs a command as the database OS user (postgres when we are root, else ourselves).
 pg_as_owner() {
   if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
+}
+
+# pg_dir_usable DIR: creates DIR and succeeds when the database's OS user can enter it. As root
+# that user is `postgres`, which cannot pass a parent folder of mode 700 (a checkout under /root
+# or in a `mktemp -d` folder): then the cluster has to live somewhere else.
+pg_dir_usable() {
+  mkdir -p "$1" || return 1
+  [ "$(id -u)" -ne 0 ] || runuser -u postgres -- test -x "$1" 2>/dev/null
 }
 
 # pg_start BASE PORT [throwaway]: create the cluster in BASE/data when missing, start it on

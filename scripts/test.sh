@@ -7,7 +7,6 @@ source scripts/pg.sh
 source scripts/deps.sh
 
 PG_PORT="${TACKLINE_TEST_PG_PORT:-54718}"
-PG_BASE="$PWD/.tmp/pg-test-$PG_PORT"
 
 ensure_node_modules
 # Debian packages the browser and PDF tests need: Chromium, and pdftoppm (poppler-utils).
@@ -24,11 +23,26 @@ if [ ${#need[@]} -gt 0 ]; then
   fi
 fi
 
-pg_stop "$PG_BASE" 2>/dev/null || true
-rm -rf "$PG_BASE"
-mkdir -p "$PG_BASE"
-cleanup() { pg_stop "$PG_BASE"; rm -rf "$PG_BASE"; }
+# The throwaway cluster: in .tmp/ when the database's OS user can enter the checkout, else (as
+# root in a checkout under a mode-700 folder) in /tmp/tackline-pg-test-<port>, owned by postgres.
+PG_BIN=$(pg_find_bin)
+for candidate in "$PWD/.tmp/pg-test-$PG_PORT" "/tmp/tackline-pg-test-$PG_PORT"; do
+  PG_BASE="$candidate"
+  # A cluster left by an interrupted run on this port: stop it, start afresh.
+  pg_stop "$PG_BASE" 2>/dev/null || true
+  rm -rf "$PG_BASE"
+  if pg_dir_usable "$PG_BASE"; then break; fi
+  rm -rf "$PG_BASE"
+done
+pg_dir_usable "$PG_BASE" || { pg_log "no folder the postgres user can enter for the test cluster"; exit 1; }
+cleanup() {
+  trap '' INT TERM
+  pg_stop "$PG_BASE"
+  rm -rf "$PG_BASE"
+}
 trap cleanup EXIT
+trap 'exit 130' INT
+trap 'exit 143' TERM
 pg_start "$PG_BASE" "$PG_PORT" throwaway
 export TEST_DATABASE_ADMIN_URL="postgres://postgres@127.0.0.1:$PG_PORT/postgres"
 export NODE_ENV=test
@@ -38,6 +52,6 @@ npm run -s typecheck
 pg_log "linting"
 npm run -s lint
 pg_log "building the client for the browser tests"
-npx vite build --logLevel warn
+node_modules/.bin/vite build --logLevel warn
 pg_log "running the tests"
-npx vitest run "$@"
+node_modules/.bin/vitest run "$@"
