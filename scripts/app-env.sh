@@ -27,7 +27,7 @@ resolve_pg_base() {
   if pg_dir_usable "$PG_BASE"; then return 0; fi
   rmdir "$PG_BASE" 2>/dev/null || true
   local name
-  name=$(basename "$PWD" | tr -c 'A-Za-z0-9._-\n' '_')
+  name=$(basename "$PWD" | tr -c 'A-Za-z0-9._\n-' '_')
   mkdir -p "$PG_OUTSIDE_ROOT"
   chmod 755 "$PG_OUTSIDE_ROOT"
   PG_BASE=$(mktemp -d "$PG_OUTSIDE_ROOT/$name-XXXXXXXX")
