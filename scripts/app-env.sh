@@ -31,6 +31,7 @@ resolve_pg_base() {
   mkdir -p "$PG_OUTSIDE_ROOT"
   chmod 755 "$PG_OUTSIDE_ROOT"
   PG_BASE=$(mktemp -d "$PG_OUTSIDE_ROOT/$name-XXXXXXXX")
+  chown postgres:postgres "$PG_BASE"
   # Says which checkout a folder belongs to, for whoever tidies /var/lib/tackline.
   printf '%s\n' "$PWD" >"$PG_BASE/checkout"
   pg_dir_usable "$PG_BASE" || { pg_log "the postgres user cannot enter $PG_BASE either"; return 1; }
