@@ -18,7 +18,10 @@ PG_OUTSIDE_ROOT="${TACKLINE_PG_OUTSIDE_ROOT:-/var/lib/tackline}"
 resolve_pg_base() {
   # As root the check below needs the postgres user, which Debian's package creates.
   PG_BIN=$(pg_find_bin) || return 1
-  if [ -n "${TACKLINE_PG_DIR:-}" ]; then PG_BASE="$TACKLINE_PG_DIR"; return 0; fi
+  if [ -n "${TACKLINE_PG_DIR:-}" ]; then
+    case "$TACKLINE_PG_DIR" in /*) PG_BASE="$TACKLINE_PG_DIR" ;; *) PG_BASE="$PWD/$TACKLINE_PG_DIR" ;; esac
+    return 0
+  fi
   if [ -s "$PG_LOCATION_FILE" ]; then
     PG_BASE="$(cat "$PG_LOCATION_FILE")"
     return 0

@@ -24,9 +24,10 @@ pg_find_bin() {
   printf '%s\n' "$dir"
 }
 
-# Runs a command as the database OS user (postgres when we are root, else ourselves).
+# Runs a command as the database OS user (postgres when we are root, else ourselves). As root
+# it runs from / because postgres may not be able to enter the current folder (paths are absolute).
 pg_as_owner() {
-  if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
+  if [ "$(id -u)" -eq 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi
 }
 
 # pg_dir_usable DIR: creates DIR and succeeds when the database's OS user can enter it. As root
@@ -34,7 +35,7 @@ pg_as_owner() {
 # or in a `mktemp -d` folder): then the cluster has to live somewhere else.
 pg_dir_usable() {
   mkdir -p "$1" || return 1
-  [ "$(id -u)" -ne 0 ] || runuser -u postgres -- test -x "$1" 2>/dev/null
+  [ "$(id -u)" -ne 0 ] || pg_as_owner test -x "$1" 2>/dev/null
 }
 
 # pg_start BASE PORT [throwaway]: create the cluster in BASE/data when missing, start it on
