@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Settings shared by `npm start` and `npm run dev`: where the database lives and which ports.
-# Source it from the repo root after pg.sh; every value can be overridden from the environment.
+# Source it from the repo root after pg.sh, then call resolve_pg_base; every value can be
+# overridden from the environment.
 PG_PORT="${TACKLINE_PG_PORT:-54717}"
 export TACKLINE_PORT="${TACKLINE_PORT:-4717}"
 export PORT="$TACKLINE_PORT"
@@ -42,7 +43,6 @@ resolve_pg_base() {
   printf '%s\n' "$PG_BASE" >"$PG_LOCATION_FILE"
   pg_log "the postgres user cannot enter this checkout's folders, so the database lives in $PG_BASE (recorded in $PG_LOCATION_FILE)"
 }
-resolve_pg_base
 
 # The address the scripts probe: the server's HOST, or loopback when it listens on every address.
 app_probe_url() {

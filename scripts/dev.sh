@@ -7,6 +7,7 @@ source scripts/deps.sh
 
 ensure_node_modules
 source scripts/app-env.sh
+resolve_pg_base
 export NODE_ENV=development
 
 pg_start "$PG_BASE" "$PG_PORT"

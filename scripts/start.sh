@@ -11,6 +11,7 @@ source scripts/deps.sh
 ensure_node_modules
 
 source scripts/app-env.sh
+resolve_pg_base
 export NODE_ENV="${NODE_ENV:-production}"
 # A production server needs a session secret: keep one per installation beside the data.
 if [ -z "${SESSION_SECRET:-}" ]; then
