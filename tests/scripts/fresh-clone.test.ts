@@ -213,6 +213,9 @@ describe('npm start on a fresh clone in a mode-700 folder', () => {
     // First start: npm ci (devDependencies included), a new cluster, the client build.
     const first = start();
     await waitFor('/api/health', health, 400_000, first);
+    // The script announces the address (and the hint) just after the first health answer.
+    const announced = () => (first.output.includes('QR codes on the sheets') ? true : undefined);
+    await waitFor('the start announcement', announced, 60_000, first);
     expect(first.output).toContain('installing npm dependencies');
     expect(first.output).toContain('creating database cluster');
     // The loopback QR-code address comes with the way to set the LAN one.
