@@ -24,6 +24,8 @@ export interface RevisionDifference {
   text: string;
   /** The earliest shop stage the change undoes. */
   undoes: ShopStageUndone;
+  /** The design element it concerns (for highlighting; never shown to users). */
+  ref?: { nodeId?: string; runId?: string };
 }
 
 /** Names a node for users: its shop mark (never the design's internal id). */
@@ -230,6 +232,7 @@ function compareNodes(
         change: 'added',
         text: `${mark} added: ${nodeName(node)}.`,
         undoes: 'cut',
+        ref: { nodeId: id },
       });
       continue;
     }
@@ -264,7 +267,14 @@ function compareNodes(
       }
     }
     if (what.length > 0)
-      out.push({ subject: 'component', item: mark, change: 'changed', text: `${mark}: ${what.join('; ')}.`, undoes });
+      out.push({
+        subject: 'component',
+        item: mark,
+        change: 'changed',
+        text: `${mark}: ${what.join('; ')}.`,
+        undoes,
+        ref: { nodeId: id },
+      });
     compareSpecObjects(`${mark} spec: `, was.spec, node.spec, length, out);
   }
   for (const [id, node] of old)
@@ -299,7 +309,14 @@ function compareRuns(
     const name = runName(run, after);
     const was = old.get(run.id);
     if (!was) {
-      out.push({ subject: 'run', item: name, change: 'added', text: `${cap(name)} added.`, undoes: 'cut' });
+      out.push({
+        subject: 'run',
+        item: name,
+        change: 'added',
+        text: `${cap(name)} added.`,
+        undoes: 'cut',
+        ref: { runId: run.id },
+      });
       continue;
     }
     const what: string[] = [];
@@ -326,7 +343,14 @@ function compareRuns(
       what.push(`dimensioned ${was.length.kind.replace(/-/g, ' ')}, now ${run.length.kind.replace(/-/g, ' ')}`);
     if ((was.heat ?? '') !== (run.heat ?? '')) what.push(`heat was ${was.heat ?? 'not set'}, now ${run.heat ?? 'not set'}`);
     if (what.length > 0)
-      out.push({ subject: 'run', item: name, change: 'changed', text: `${cap(name)}: ${what.join('; ')}.`, undoes });
+      out.push({
+        subject: 'run',
+        item: name,
+        change: 'changed',
+        text: `${cap(name)}: ${what.join('; ')}.`,
+        undoes,
+        ref: { runId: run.id },
+      });
     compareSpecObjects(`${cap(name)} spec: `, was.spec, run.spec, length, out);
   }
   const now = new Set(after.design.runs.map((r) => r.id));
@@ -389,6 +413,7 @@ function compareFlanges(before: RevisionSide, after: RevisionSide, out: Revision
         change: 'changed',
         text: `${mark} bolt holes: ${what.join('; ')}.`,
         undoes: was.flangeClass !== f.flangeClass ? 'cut' : 'fit',
+        ref: { nodeId: f.nodeId },
       });
   }
 }

@@ -13,7 +13,7 @@ import type { JobService } from '../jobs/job.service';
 import type { RevisionService } from '../revisions/revision.service';
 import { SpoolEntity } from '../spools/spool.entity';
 import type { SpoolService } from '../spools/spool.service';
-import { revisionChanges, type RevisionChanges } from './pdf/revision-changes';
+import { revisionChanges, type PrintedRevision, type RevisionChanges } from './pdf/revision-changes';
 import { renderSawList } from './pdf/saw-list';
 import type { SawListSpool } from './pdf/saw-list-groups';
 import type { RevisionHistoryEntry, SheetHeader } from './pdf/sheet-header';
@@ -95,7 +95,7 @@ export class SheetsService {
       spoolUrl: `${this.publicUrl.replace(/\/+$/, '')}/spools/${spool.id}`,
       printedAt: this.now(),
     };
-    const changes = await this.changesSincePrevious(actor, spool.id, history, revision, result, job);
+    const changes = await this.changesSincePrevious(actor, spool.id, history, revision, { design, result }, job);
     const out = await renderSpoolSheet({
       header,
       design,
@@ -159,7 +159,7 @@ export class SheetsService {
     spoolId: string,
     history: RevisionSummary[],
     printed: Revision,
-    result: SpoolResult,
+    current: PrintedRevision,
     job: Job,
   ): Promise<RevisionChanges | null> {
     const at = history.findIndex((r) => r.id === printed.id);
@@ -169,7 +169,13 @@ export class SheetsService {
     const parsed = spoolDesignSchema.safeParse(older.design);
     if (!parsed.success) return null;
     const before = computeSpool(parsed.data, { jobSpec: jobSpecOverrides(job), trusted: true });
-    return revisionChanges(before, result, job.units, previous.letter, printed.letter);
+    return revisionChanges(
+      { design: parsed.data, result: before },
+      current,
+      job.units,
+      previous.letter,
+      printed.letter,
+    );
   }
 
   private compute(revision: Revision, job: Job): { design: SpoolDesign; result: SpoolResult } {

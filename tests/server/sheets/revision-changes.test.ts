@@ -16,16 +16,16 @@ describe('revisionChanges', () => {
   const b = computeSpool(designB);
 
   it('names the runs whose dimensions changed, with old and new engine values, and nothing else', () => {
-    const changes = revisionChanges(a, b, 'mm', 'A', 'B');
+    const changes = revisionChanges({ design: designA, result: a }, { design: designB, result: b }, 'mm', 'A', 'B');
     expect([...changes.changedRuns].sort()).toEqual(['R1', 'R2']);
     for (const id of ['R1', 'R2']) {
       const before = a.runs.find((r) => r.runId === id)!.workPointDistanceMm;
       const after = b.runs.find((r) => r.runId === id)!.workPointDistanceMm;
+      // Runs are named by their piece and end marks, never by the design's run ids.
       expect(
-        changes.lines.some(
-          (l) => l.startsWith(`Run ${id}`) && l.includes(`was ${formatMm(before)}, now ${formatMm(after)}`),
-        ),
+        changes.lines.some((l) => l.includes(`work-point length was ${formatMm(before)}, now ${formatMm(after)}`)),
       ).toBe(true);
+      expect(changes.lines.some((l) => l.includes(id))).toBe(false);
     }
     // The header pipe runs through the branch unbroken: its cut length is unchanged, so no piece is flagged.
     for (const p of b.pieces) {
@@ -38,7 +38,7 @@ describe('revisionChanges', () => {
     const longer = structuredClone(designA);
     longer.runs.find((r) => r.id === 'R4')!.length.mm += 100;
     const c = computeSpool(longer);
-    const changes = revisionChanges(a, c, 'ft-in', 'A', 'B');
+    const changes = revisionChanges({ design: designA, result: a }, { design: longer, result: c }, 'ft-in', 'A', 'B');
     const piece = c.pieces.find(
       (p) => p.cutLengthMm !== a.pieces.find((q) => q.mark === p.mark)!.cutLengthMm,
     )!;
@@ -50,7 +50,7 @@ describe('revisionChanges', () => {
   });
 
   it('says so when nothing the bay works to has changed', async () => {
-    const changes = revisionChanges(a, computeSpool(designA), 'mm', 'A', 'B');
+    const changes = revisionChanges({ design: designA, result: a }, { design: designA, result: computeSpool(designA) }, 'mm', 'A', 'B');
     expect(changes.lines).toEqual([]);
     const out = await renderSpoolSheet({
       header: testHeader('CW-201-S03'),
@@ -62,11 +62,11 @@ describe('revisionChanges', () => {
     });
     const text = (await readPdfText(out.pdf)).map((p) => p.text).join(' ');
     expect(text).toContain('CHANGED SINCE REVISION A');
-    expect(text).toContain('No change to any cut length, run, flange or weld count.');
+    expect(text).toContain('No change to any component, run, cut length, flange, weld or spec value.');
   });
 
   it('prints the changes on the sheet', async () => {
-    const changes = revisionChanges(a, b, 'mm', 'A', 'B');
+    const changes = revisionChanges({ design: designA, result: a }, { design: designB, result: b }, 'mm', 'A', 'B');
     const out = await renderSpoolSheet({
       header: testHeader('CW-201-S03'),
       design: designB,

@@ -157,7 +157,7 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
         paragraphs:
           changes.lines.length > 0
             ? changes.lines
-            : ['No change to any cut length, run, flange or weld count.'],
+            : ['No change to any component, run, cut length, flange, weld or spec value.'],
         size: sizes.body,
         list: 'bullet',
       }),
