@@ -105,7 +105,7 @@ describe('GET /api/spools/:id/sheet.pdf', () => {
     // B is compared with A, the issued revision before it (same design here: nothing changed).
     const draftText = (await readPdfText(draft.body as Buffer)).map((p) => p.text).join(' ');
     expect(draftText).toContain('CHANGED SINCE REVISION A');
-    expect(draftText).toContain('No change to any cut length');
+    expect(draftText).toContain('No change to any component, run, cut length');
   });
 
   it('marks a superseded revision, asked for by id, with the revision that replaced it', async () => {
