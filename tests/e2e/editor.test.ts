@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { computeSpool } from '../../shared/engine/compute-spool';
 import { formatLength } from '../../shared/units/length-format';
-import { jobSpecOverrides } from '../../src/features/editor/api/job-spec-overrides';
+import { jobSpecOverrides } from '../../shared/engine/job-spec-overrides';
 import type { Job } from '../../shared/schemas/job.schema';
 import type { Spool } from '../../shared/schemas/spool.schema';
 import type { Revision } from '../../shared/schemas/revision.schema';

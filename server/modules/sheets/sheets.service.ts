@@ -1,3 +1,4 @@
+import { jobSpecOverrides } from '../../../shared/engine/job-spec-overrides';
 import { IsNull, type DataSource } from 'typeorm';
 import { computeSpool } from '../../../shared/engine/compute-spool';
 import type { SpoolResult } from '../../../shared/engine/compute-result';
@@ -24,20 +25,6 @@ import { MAX_SAW_LIST_SPOOLS, type SawListQuery, type SpoolSheetQuery } from '..
 export interface RenderedPdf {
   pdf: Buffer;
   filename: string;
-}
-
-/** The job's defaults as engine spec overrides (only the values the engine's tables carry). */
-export function jobSpecOverrides(job: Pick<Job, 'spec'>): SpecOverrides {
-  const out: SpecOverrides = {
-    material: job.spec.material,
-    rootGapMm: job.spec.rootGapMm,
-    sawKerfMm: job.spec.sawKerfMm,
-    minPieceLengthMm: job.spec.minPieceLengthMm,
-  };
-  const schedule = scheduleSchema.safeParse(job.spec.schedule);
-  if (schedule.success) out.schedule = schedule.data;
-  if (job.spec.flangeClass === 150 || job.spec.flangeClass === 300) out.flangeClass = job.spec.flangeClass;
-  return out;
 }
 
 /**
@@ -168,7 +155,7 @@ export class SheetsService {
     const older = await this.revisions.get(actor, spoolId, previous.id);
     const parsed = spoolDesignSchema.safeParse(older.design);
     if (!parsed.success) return null;
-    const before = computeSpool(parsed.data, { jobSpec: jobSpecOverrides(job), trusted: true });
+    const before = computeSpool(parsed.data, { jobSpec: jobSpecOverrides(job.spec), trusted: true });
     return revisionChanges(
       { design: parsed.data, result: before },
       current,
@@ -191,7 +178,7 @@ export class SheetsService {
     }
     return {
       design: parsed.data,
-      result: computeSpool(parsed.data, { jobSpec: jobSpecOverrides(job), trusted: true }),
+      result: computeSpool(parsed.data, { jobSpec: jobSpecOverrides(job.spec), trusted: true }),
     };
   }
 

@@ -10,7 +10,7 @@ import { useCreateDraft } from '../spools/api/create-draft';
 import { useSpool } from '../spools/api/get-spool';
 import { useSpoolRevision } from '../spools/api/get-spool-revision';
 import { useIssueDraft } from '../spools/api/issue-draft';
-import { jobSpecOverrides } from './api/job-spec-overrides';
+import { jobSpecOverrides } from '../../../shared/engine/job-spec-overrides';
 import { readLocalDraft, type LocalDraft } from './api/local-draft-store';
 import { EditorWorkspace } from './EditorWorkspace';
 import { useDraftAutosave, type SaveStatus } from './hooks/use-draft-autosave';

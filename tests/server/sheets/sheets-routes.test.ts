@@ -3,7 +3,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { formatMm } from '../../../shared/units/length-format';
 import { computeSpool } from '../../../shared/engine/compute-spool';
-import { jobSpecOverrides } from '../../../server/modules/sheets/sheets.service';
+import { jobSpecOverrides } from '../../../shared/engine/job-spec-overrides';
 import { SpoolRevisionEntity } from '../../../server/modules/revisions/spool-revision.entity';
 import { SpoolEntity } from '../../../server/modules/spools/spool.entity';
 import { createJob, createShop, createSpool, PASSWORD, ROLES, type Shop } from '../helpers/fixtures';
@@ -70,7 +70,7 @@ function expectJsonError(res: request.Response, status: number, code: string) {
 describe('GET /api/spools/:id/sheet.pdf', () => {
   it('gives every role the PDF, with the engine cut lengths in it', async () => {
     const { spool, design, job } = await sampleSpool(shop);
-    const result = computeSpool(design, { jobSpec: jobSpecOverrides({ spec: job.spec as never }) });
+    const result = computeSpool(design, { jobSpec: jobSpecOverrides(job.spec as never) });
     for (const role of ROLES) {
       const agent = await signedIn(app, shop.email(role), PASSWORD);
       const res = await agent.get(`/api/spools/${spool.id}/sheet.pdf`).buffer(true).parse(binary);
@@ -191,7 +191,7 @@ describe('GET /api/jobs/:id/saw-list.pdf', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const text = (await readPdfText(res.body as Buffer)).map((p) => p.text).join(' ');
-    const result = computeSpool(a.design, { jobSpec: jobSpecOverrides({ spec: a.job.spec as never }) });
+    const result = computeSpool(a.design, { jobSpec: jobSpecOverrides(a.job.spec as never) });
     for (const piece of result.pieces) expect(text).toContain(formatMm(piece.cutLengthMm!));
     const b = await sampleSpool(shop);
     expectJsonError(

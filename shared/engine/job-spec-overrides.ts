@@ -1,11 +1,12 @@
-import type { Job } from '../../../../shared/schemas/job.schema';
-import type { SpecOverrides } from '../../../../shared/schemas/spool-design-spec.schema';
-import { scheduleSchema } from '../../../../shared/standards/pipe-schedules';
+import type { Job } from '../schemas/job.schema';
+import type { SpecOverrides } from '../schemas/spool-design-spec.schema';
+import { scheduleSchema } from '../standards/pipe-schedules';
 
 /**
- * The job's default spec as engine overrides. Values the spool design tables do not
- * carry (a schedule or class without data) are left to the design and built-in defaults,
- * so the engine never sees an unknown value.
+ * A job's default spec as engine overrides: the one translation the editor, the sheets and
+ * the revision service all use. Values the design tables do not carry (a schedule or class
+ * without data) are left to the design and built-in defaults, so the engine never sees an
+ * unknown value.
  */
 export function jobSpecOverrides(spec: Job['spec'] | undefined): SpecOverrides {
   if (!spec) return {};
