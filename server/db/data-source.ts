@@ -7,6 +7,7 @@ import { SpoolRevisionEntity } from '../modules/revisions/spool-revision.entity'
 import { SpoolEntity } from '../modules/spools/spool.entity';
 import { UserEntity } from '../modules/users/user.entity';
 import { InitialSchema1764626400000 } from './migrations/1764626400000-initial-schema';
+import { SpoolRework1764800000000 } from './migrations/1764800000000-spool-rework';
 
 /** Every entity, listed (not globbed) so tsx and the bundler both find them. */
 export const ENTITIES = [
@@ -18,7 +19,7 @@ export const ENTITIES = [
   AuditEventEntity,
 ];
 /** Every migration in order. Add new ones at the end. */
-export const MIGRATIONS = [InitialSchema1764626400000];
+export const MIGRATIONS = [InitialSchema1764626400000, SpoolRework1764800000000];
 
 /** A DataSource on `url`. Schema changes only through migrations, never synchronize. */
 export function createDataSource(url: string, options: { poolSize?: number } = {}): DataSource {

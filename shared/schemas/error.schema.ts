@@ -8,6 +8,7 @@ export const errorCodeSchema = z.enum([
   'not_found',
   'duplicate',
   'stale_version',
+  'rework_confirmation_required',
   'payload_too_large',
   'unprocessable',
   'too_many_attempts',

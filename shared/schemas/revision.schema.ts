@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { idSchema, timestampSchema } from './id.schema';
+import { spoolStatusSchema } from './spool-status.schema';
 
 /** A revision's life: one working draft per spool; issued ones never change; superseded when the next is issued. */
 export const revisionStateSchema = z.enum(['draft', 'issued', 'superseded']);
@@ -50,11 +51,16 @@ export const draftSaveSchema = z
 /** Parsed draft save body. */
 export type DraftSave = z.infer<typeof draftSaveSchema>;
 
-/** `POST /api/spools/:id/draft/issue` body. `version`, when sent, must match the draft's. */
+/**
+ * `POST /api/spools/:id/draft/issue` body. `version`, when sent, must match the draft's.
+ * Issuing over work the bay has done sends the spool back a stage: the server answers 409
+ * `rework_confirmation_required` naming that stage until `confirmReworkTo` names it too.
+ */
 export const draftIssueSchema = z
   .object({
     note: revisionNoteSchema.optional(),
     version: z.number().int().min(1).optional(),
+    confirmReworkTo: spoolStatusSchema.optional(),
   })
   .strict();
 /** Parsed draft issue body. */

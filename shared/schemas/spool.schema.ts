@@ -14,6 +14,22 @@ export const spoolMarkSchema = z
 /** Line number from the client's isometric, e.g. `CW-201`. */
 export const lineNumberSchema = z.string().trim().min(1).max(80);
 
+/**
+ * A spool flagged for rework: a revision was issued over work the bay had already done.
+ * `fromStatus` is where the spool stood, `toStatus` where the issue sent it back.
+ */
+export const spoolReworkSchema = z.object({
+  letter: z.string(),
+  sinceLetter: z.string(),
+  fromStatus: spoolStatusSchema,
+  toStatus: spoolStatusSchema,
+  /** What changed, one line per difference, in shop marks. */
+  changes: z.array(z.string()),
+  flaggedAt: timestampSchema,
+});
+/** A spool's rework flag. */
+export type SpoolRework = z.infer<typeof spoolReworkSchema>;
+
 /** A spool as the API returns it. */
 export const spoolSchema = z.object({
   id: idSchema,
@@ -25,6 +41,8 @@ export const spoolSchema = z.object({
   draft: z
     .object({ id: idSchema, letter: z.string(), version: z.number().int(), updatedAt: timestampSchema })
     .nullable(),
+  /** Set while the bay must rework the spool to a newer revision; null otherwise. */
+  rework: spoolReworkSchema.nullable(),
   archivedAt: timestampSchema.nullable(),
   createdAt: timestampSchema,
   updatedAt: timestampSchema,
@@ -55,6 +73,14 @@ export const spoolStatusChangeSchema = z
   .strict();
 /** Parsed status change body. */
 export type SpoolStatusChange = z.infer<typeof spoolStatusChangeSchema>;
+
+/** `POST /api/spools/:id/rework/done` body: the bay has reworked the spool to its current revision. */
+export const reworkDoneSchema = z.object({ version: z.number().int().min(1) }).strict();
+/** Parsed rework-done body. */
+export type ReworkDone = z.infer<typeof reworkDoneSchema>;
+
+/** Roles that may say a spool's rework is done: the bay and admins. */
+export const REWORK_DONE_ROLES = ['admin', 'fabricator'] as const;
 
 /** Route params of the job's spool collection, `/api/jobs/:jobId/spools`. */
 export const jobSpoolsParamsSchema = z.object({ jobId: idSchema }).strict();

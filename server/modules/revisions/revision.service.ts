@@ -6,15 +6,18 @@ import type {
   Revision,
   RevisionSummary,
 } from '../../../shared/schemas/revision.schema';
-import { notFound, staleVersion } from '../../common/app-error';
+import { AppError, notFound, staleVersion } from '../../common/app-error';
 import type { SessionActor } from '../../common/session-actor';
 import type { AuditWriter } from '../audit/audit.service';
-import { SpoolEntity } from '../spools/spool.entity';
+import type { SpoolRework } from '../../../shared/schemas/spool.schema';
+import { JobEntity } from '../jobs/job.entity';
+import { SpoolEntity, type SpoolRow } from '../spools/spool.entity';
 import { assertNotArchived, type SpoolService } from '../spools/spool.service';
 import { UserEntity } from '../users/user.entity';
 import { assertValidDesign } from './design-validation';
 import { toRevisionDto, toRevisionSummary, type RevisionWithAuthor } from './revision.mapper';
 import { nextRevisionLetter } from './revision-letter';
+import { reworkNeed } from './rework-check';
 import { SpoolRevisionEntity, type SpoolRevisionRow } from './spool-revision.entity';
 import { starterDesign } from './starter-design';
 
@@ -135,6 +138,7 @@ export class RevisionService {
         throw staleVersion(toRevisionDto(draft));
       assertNotArchived(spool);
       assertValidDesign(draft.design);
+      const rework = await this.reworkOnIssue(m, actor, spool, draft, input);
       const now = new Date();
       const superseded = await m.update(
         SpoolRevisionEntity,
@@ -157,7 +161,8 @@ export class RevisionService {
         { id: spool.id, organisationId: actor.organisationId },
         {
           currentRevisionId: draft.id,
-          status: spool.status === 'drafting' ? 'issued' : spool.status,
+          status: rework ? rework.toStatus : spool.status === 'drafting' ? 'issued' : spool.status,
+          ...(rework ? { rework } : {}),
           version: spool.version + 1,
           updatedAt: now,
         },
@@ -168,10 +173,60 @@ export class RevisionService {
         action: 'revision.issue',
         entityType: 'spool_revision',
         entityId: draft.id,
-        details: { spoolId: spool.id, letter: draft.letter, supersededCount: superseded.affected ?? 0 },
+        details: {
+          spoolId: spool.id,
+          letter: draft.letter,
+          supersededCount: superseded.affected ?? 0,
+          ...(rework
+            ? { rework: { from: rework.fromStatus, to: rework.toStatus, changes: rework.changes.length } }
+            : {}),
+        },
       });
       return toRevisionDto((await this.findOne(m, actor, { id: draft.id }))!);
     });
+  }
+
+  /**
+   * The rework flag a draft issued over work in progress sets, or null. Issuing over work
+   * the bay has done needs the issuer to confirm the stage the spool goes back to:
+   * 409 `rework_confirmation_required` names it (with the changes) until they do.
+   */
+  private async reworkOnIssue(
+    m: EntityManager,
+    actor: SessionActor,
+    spool: SpoolRow,
+    draft: RevisionWithAuthor,
+    input: DraftIssue,
+  ): Promise<SpoolRework | null> {
+    if (!spool.currentRevisionId || spool.status === 'drafting' || spool.status === 'issued') return null;
+    const issued = await m.getRepository(SpoolRevisionEntity).findOneBy({
+      id: spool.currentRevisionId,
+      organisationId: actor.organisationId,
+    });
+    const job = await m.getRepository(JobEntity).findOneBy({ id: spool.jobId, organisationId: actor.organisationId });
+    if (!issued || !job) return null;
+    const need = reworkNeed(spool.status, issued.design, draft.design, job);
+    if (!need) return null;
+    if (input.confirmReworkTo !== need.toStatus) {
+      const back =
+        need.toStatus === spool.status
+          ? `stays ${spool.status} and is flagged for rework`
+          : `goes back from ${spool.status} to ${need.toStatus}`;
+      throw new AppError(
+        409,
+        'rework_confirmation_required',
+        `Spool ${spool.mark} is ${spool.status}. Issuing revision ${draft.letter} changes work the bay has done: the spool ${back}. Confirm to issue.`,
+        { from: spool.status, to: need.toStatus, letter: draft.letter, sinceLetter: issued.letter, changes: need.changes },
+      );
+    }
+    return {
+      letter: draft.letter,
+      sinceLetter: issued.letter,
+      fromStatus: spool.status,
+      toStatus: need.toStatus,
+      changes: need.changes,
+      flaggedAt: new Date().toISOString(),
+    };
   }
 
   private async lockDraft(

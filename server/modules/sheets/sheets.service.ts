@@ -5,9 +5,7 @@ import type { SpoolResult } from '../../../shared/engine/compute-result';
 import type { Job } from '../../../shared/schemas/job.schema';
 import type { Revision, RevisionSummary } from '../../../shared/schemas/revision.schema';
 import { spoolDesignSchema, type SpoolDesign } from '../../../shared/schemas/spool-design.schema';
-import type { SpecOverrides } from '../../../shared/schemas/spool-design-spec.schema';
 import type { Spool } from '../../../shared/schemas/spool.schema';
-import { scheduleSchema } from '../../../shared/standards/pipe-schedules';
 import { notFound, unprocessable } from '../../common/app-error';
 import type { SessionActor } from '../../common/session-actor';
 import type { JobService } from '../jobs/job.service';
@@ -82,7 +80,12 @@ export class SheetsService {
       spoolUrl: `${this.publicUrl.replace(/\/+$/, '')}/spools/${spool.id}`,
       printedAt: this.now(),
     };
-    const changes = await this.changesSincePrevious(actor, spool.id, history, revision, { design, result }, job);
+    const compared = await this.changesSincePrevious(actor, spool.id, history, revision, { design, result }, job);
+    // The revision that flagged the spool for rework says so on its sheet.
+    const changes =
+      compared && spool.rework && spool.rework.letter === revision.letter
+        ? { ...compared, rework: { fromStatus: spool.rework.fromStatus, toStatus: spool.rework.toStatus } }
+        : compared;
     const out = await renderSpoolSheet({
       header,
       design,

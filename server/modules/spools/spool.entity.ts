@@ -1,5 +1,6 @@
 import { EntitySchema } from 'typeorm';
 import type { SpoolStatus } from '../../../shared/schemas/spool-status.schema';
+import type { SpoolRework } from '../../../shared/schemas/spool.schema';
 
 /** One shop spool of a job; its designs live in spool revisions. */
 export interface SpoolRow {
@@ -11,6 +12,8 @@ export interface SpoolRow {
   status: SpoolStatus;
   /** The latest issued revision, the one the bay builds from. */
   currentRevisionId: string | null;
+  /** Set while the bay must rework the spool to a newer revision. */
+  rework: SpoolRework | null;
   archivedAt: Date | null;
   createdAt: Date;
   updatedAt: Date;
@@ -28,6 +31,7 @@ export const SpoolEntity = new EntitySchema<SpoolRow>({
     lineNumber: { name: 'line_number', type: 'text' },
     status: { type: 'text', default: 'drafting' },
     currentRevisionId: { name: 'current_revision_id', type: 'uuid', nullable: true },
+    rework: { type: 'jsonb', nullable: true },
     archivedAt: { name: 'archived_at', type: 'timestamptz', nullable: true },
     createdAt: { name: 'created_at', type: 'timestamptz', default: () => 'now()' },
     updatedAt: { name: 'updated_at', type: 'timestamptz', default: () => 'now()' },

@@ -26,6 +26,7 @@ export function toSpoolDto(
           updatedAt: draft.updatedAt.toISOString(),
         }
       : null,
+    rework: row.rework ?? null,
     archivedAt: row.archivedAt ? row.archivedAt.toISOString() : null,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),

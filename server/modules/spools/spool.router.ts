@@ -4,6 +4,8 @@ import { archiveSchema } from '../../../shared/schemas/job.schema';
 import { SPOOL_STATUS_ROLES } from '../../../shared/schemas/spool-status.schema';
 import {
   jobSpoolsParamsSchema,
+  REWORK_DONE_ROLES,
+  reworkDoneSchema,
   spoolCreateSchema,
   spoolListQuerySchema,
   spoolStatusChangeSchema,
@@ -20,6 +22,7 @@ const one = { params: idParamsSchema };
 const update = { params: idParamsSchema, body: spoolUpdateSchema };
 const status = { params: idParamsSchema, body: spoolStatusChangeSchema };
 const archive = { params: idParamsSchema, body: archiveSchema };
+const reworkDone = { params: idParamsSchema, body: reworkDoneSchema };
 
 /** /api/jobs/:jobId/spools: a job's spools. Everyone reads; admins and detailers add. */
 export function jobSpoolRouter(spools: SpoolService): Router {
@@ -50,6 +53,10 @@ export function spoolRouter(spools: SpoolService): Router {
   router.post('/:id/status', requireRole(...SPOOL_STATUS_ROLES), validate(status), async (req, res) => {
     const { params, body } = inputOf(res, status);
     res.json(await spools.changeStatus(actorOf(req), params.id, body));
+  });
+  router.post('/:id/rework/done', requireRole(...REWORK_DONE_ROLES), validate(reworkDone), async (req, res) => {
+    const { params, body } = inputOf(res, reworkDone);
+    res.json(await spools.reworkDone(actorOf(req), params.id, body));
   });
   router.post('/:id/archive', write, validate(archive), async (req, res) => {
     const { params, body } = inputOf(res, archive);

@@ -3,6 +3,7 @@ import type { Archive } from '../../../shared/schemas/job.schema';
 import type { Page } from '../../../shared/schemas/list-query.schema';
 import { allowedSpoolStatusTargets } from '../../../shared/schemas/spool-status.schema';
 import type {
+  ReworkDone,
   Spool,
   SpoolCreate,
   SpoolListQuery,
@@ -118,6 +119,24 @@ export class SpoolService {
       await this.write(m, actor, row, { status: input.status }, 'spool.status', {
         from: row.status,
         to: input.status,
+      });
+      return this.dto(m, await this.find(m, actor, row.id));
+    });
+  }
+
+  /**
+   * Clears the rework flag once the bay has reworked the spool to its current revision.
+   * Stale version: 409; no flag: 422 (nothing to clear).
+   */
+  async reworkDone(actor: SessionActor, id: string, input: ReworkDone): Promise<Spool> {
+    return this.ds.transaction(async (m) => {
+      const row = await this.find(m, actor, id, true);
+      if (input.version !== row.version) throw staleVersion(await this.dto(m, row));
+      assertNotArchived(row);
+      if (!row.rework) throw unprocessable(`Spool ${row.mark} is not flagged for rework`);
+      await this.write(m, actor, row, { rework: null }, 'spool.rework-done', {
+        letter: row.rework.letter,
+        status: row.status,
       });
       return this.dto(m, await this.find(m, actor, row.id));
     });

@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { Role } from '../../../shared/schemas/role.schema';
 import type { SpoolStatus } from '../../../shared/schemas/spool-status.schema';
+import { SpoolEntity } from '../../../server/modules/spools/spool.entity';
 import { createJob, createSpool, createUser, SPEC, type Shop } from './fixtures';
 
 /** One API route, with what a call needs: its records (fresh per call) and its body. */
@@ -162,6 +163,28 @@ export const ROUTES: RouteCase[] = [
       const [from, to] = STATUS_MOVE[role] ?? ['issued', 'cut'];
       const { spool } = await jobAndSpool(ds, shop, from);
       return { path: `/api/spools/${spool.id}/status`, body: { status: to, version: 1 } };
+    },
+  },
+  {
+    name: 'POST /api/spools/:id/rework/done',
+    method: 'post',
+    allowed: ['admin', 'fabricator'],
+    prepare: async (ds, shop) => {
+      const { spool } = await jobAndSpool(ds, shop, 'issued');
+      await ds.getRepository(SpoolEntity).update(
+        { id: spool.id },
+        {
+          rework: {
+            letter: 'B',
+            sinceLetter: 'A',
+            fromStatus: 'welded',
+            toStatus: 'issued',
+            changes: ['P1: cut length was 100.0 mm, now 200.0 mm.'],
+            flaggedAt: new Date().toISOString(),
+          },
+        },
+      );
+      return { path: `/api/spools/${spool.id}/rework/done`, body: { version: 1 } };
     },
   },
   {

@@ -20,6 +20,8 @@ export interface RevisionChanges {
   changedPieces: Set<string>;
   changedRuns: Set<string>;
   changedFlanges: Set<string>;
+  /** Set when this revision sent the spool back for rework: where it stood, where it went. */
+  rework?: { fromStatus: string; toStatus: string };
 }
 
 /** One revision as the sheet compares it. */

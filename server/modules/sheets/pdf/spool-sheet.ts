@@ -154,10 +154,16 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
     blocks.push(
       paragraphBlock({
         title: `Changed since revision ${changes.sinceLetter}`,
-        paragraphs:
-          changes.lines.length > 0
+        paragraphs: [
+          ...(changes.rework
+            ? [
+                `Rework: was ${changes.rework.fromStatus}, back to ${changes.rework.toStatus}. Redo the work these changes undo before the spool moves on.`,
+              ]
+            : []),
+          ...(changes.lines.length > 0
             ? changes.lines
-            : ['No change to any component, run, cut length, flange, weld or spec value.'],
+            : ['No change to any component, run, cut length, flange, weld or spec value.']),
+        ],
         size: sizes.body,
         list: 'bullet',
       }),
