@@ -65,3 +65,17 @@ export const draftIssueSchema = z
   .strict();
 /** Parsed draft issue body. */
 export type DraftIssue = z.infer<typeof draftIssueSchema>;
+
+/**
+ * `details` of the 409 `rework_confirmation_required` answer: the spool's status, the one
+ * issuing would send it back to, the two letters and what changed (one line each).
+ */
+export const reworkConfirmationSchema = z.object({
+  from: spoolStatusSchema,
+  to: spoolStatusSchema,
+  letter: z.string(),
+  sinceLetter: z.string(),
+  changes: z.array(z.string()),
+});
+/** What issuing over work in progress would do, for the confirmation. */
+export type ReworkConfirmation = z.infer<typeof reworkConfirmationSchema>;

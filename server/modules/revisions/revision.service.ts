@@ -3,6 +3,7 @@ import type { QueryDeepPartialEntity } from 'typeorm';
 import type {
   DraftIssue,
   DraftSave,
+  ReworkConfirmation,
   Revision,
   RevisionSummary,
 } from '../../../shared/schemas/revision.schema';
@@ -216,7 +217,13 @@ export class RevisionService {
         409,
         'rework_confirmation_required',
         `Spool ${spool.mark} is ${spool.status}. Issuing revision ${draft.letter} changes work the bay has done: the spool ${back}. Confirm to issue.`,
-        { from: spool.status, to: need.toStatus, letter: draft.letter, sinceLetter: issued.letter, changes: need.changes },
+        {
+          from: spool.status,
+          to: need.toStatus,
+          letter: draft.letter,
+          sinceLetter: issued.letter,
+          changes: need.changes,
+        } satisfies ReworkConfirmation,
       );
     }
     return {

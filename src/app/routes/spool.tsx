@@ -12,6 +12,7 @@ import { EditSpoolDialog } from '../../features/spools/components/EditSpoolDialo
 import { SpoolSheetActions } from '../../features/sheets/components/SpoolSheetActions';
 import { SpoolEditorSlot } from '../../features/spools/components/SpoolEditorSlot';
 import { SpoolRevisionsSection } from '../../features/spools/components/SpoolRevisionsSection';
+import { SpoolReworkNotice } from '../../features/spools/components/SpoolReworkNotice';
 import { SpoolStatusActions } from '../../features/spools/components/SpoolStatusActions';
 import { SpoolStatusBadge } from '../../features/spools/components/SpoolStatusBadge';
 import { allowedSpoolStatusTargets } from '../../../shared/schemas/spool-status.schema';
@@ -88,6 +89,8 @@ export function Component() {
           {s.archivedAt ? <span className="font-semibold text-danger-700">Archived {formatDateTime(s.archivedAt)}</span> : null}
         </div>
       </PageHeader>
+
+      <SpoolReworkNotice spool={s} role={user.role} />
 
       <div className={allowedSpoolStatusTargets(user.role, s.status).length > 0 ? 'grid gap-4 lg:grid-cols-2' : 'grid gap-4'}>
         <section aria-labelledby="spool-sheet" className="flex flex-col gap-2 rounded-lg border border-steel-200 bg-white p-4">

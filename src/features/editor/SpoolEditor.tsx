@@ -168,10 +168,13 @@ export default function SpoolEditor({ spoolId, readOnly }: { spoolId: string; re
         errorCount={errorCount}
         busy={issue.isPending}
         error={issue.error}
-        onIssue={async (note) => {
+        onIssue={async (note, confirmReworkTo) => {
           const saved = await autosave.saveNow();
           if (!saved) return;
-          issue.mutate({ note, version: autosave.version() }, { onSuccess: () => setIssueOpen(false) });
+          issue.mutate(
+            { note, version: autosave.version(), ...(confirmReworkTo ? { confirmReworkTo } : {}) },
+            { onSuccess: () => setIssueOpen(false) },
+          );
         }}
       />
     </>
