@@ -1,6 +1,7 @@
 import type { SpoolDesign } from '../schemas/spool-design.schema';
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
 import type { SpoolRun } from '../schemas/spool-design-run.schema';
+import { clockReference } from './clock-angles';
 import type { SpoolResult } from './compute-result';
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 
@@ -253,7 +254,8 @@ function compareNodes(
         if (JSON.stringify(va) === JSON.stringify(vb)) continue;
         if (typeof va === 'number' && typeof vb === 'number' && Math.abs(va - vb) <= ANGLE_TOLERANCE_DEG) continue;
         const field = NODE_FIELDS[key] ?? { label: key.replace(/\./g, ' '), undoes: 'cut' as const };
-        what.push(`${field.label} was ${fieldText(key, va, length)}, now ${fieldText(key, vb, length)}`);
+        const from = key === 'orientationDeg' ? orientationZero(after.result, id) : '';
+        what.push(`${field.label} was ${fieldText(key, va, length)}${from}, now ${fieldText(key, vb, length)}${from}`);
         raise(field.undoes);
       }
     }
@@ -288,6 +290,20 @@ function compareNodes(
         undoes: 'cut',
       });
     }
+}
+
+/** " from top of pipe" / " from plant north": what 0° is for an outlet on its header. */
+function orientationZero(result: SpoolResult, nodeId: string): string {
+  const shape = result.components.find((c) => c.nodeId === nodeId)?.shape;
+  if (shape?.type !== 'branch-connection') return '';
+  return clockReference(unitVector(shape.headerAxis)).reference === 'plant-north'
+    ? ' from plant north'
+    : ' from top of pipe';
+}
+
+function unitVector(v: Vec3): Vec3 {
+  const l = Math.hypot(v.x, v.y, v.z) || 1;
+  return { x: v.x / l, y: v.y / l, z: v.z / l };
 }
 
 function runName(run: SpoolRun, side: RevisionSide): string {

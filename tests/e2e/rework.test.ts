@@ -78,7 +78,7 @@ describe('rework after a revision issued over work in progress', () => {
     const confirmation = dialog.getByTestId('rework-confirmation');
     await confirmation.waitFor();
     await expect(confirmation.textContent()).resolves.toMatch(/welded.*sends it back to cut \(not fitted\)/);
-    await expect(confirmation.textContent()).resolves.toMatch(/O2: orientation was 90°, now 180°/);
+    await expect(confirmation.textContent()).resolves.toMatch(/O2: orientation was 90° from top of pipe, now 180° from top of pipe/);
     await saveScreenshot(page, 'rework-01-confirm');
     await dialog.getByRole('button', { name: 'Send back to cut (not fitted) and issue' }).click();
     await dialog.waitFor({ state: 'hidden' });

@@ -57,9 +57,20 @@ describe('revisionDifferences', () => {
     const changes = diff(header, turned);
     expect(changes).toHaveLength(1);
     expect(changes[0]).toMatchObject({ subject: 'component', change: 'changed', undoes: 'fit' });
-    expect(changes[0]!.text).toMatch(/orientation was 90°, now 180°/);
+    expect(changes[0]!.text).toMatch(/orientation was 90° from top of pipe, now 180° from top of pipe/);
     // Users read shop marks, never the design's ids: the half couplings are O1–O3.
     expect(changes[0]!.item).toMatch(/^O\d$/);
+  });
+
+  it('states the zero of an outlet angle on a vertical header: plant north', () => {
+    const vertical = edit(header, (d) => {
+      for (const r of d.runs) r.direction = { x: 0, y: 0, z: 1 };
+    });
+    const turned = edit(vertical, (d) => {
+      node(d, 'C2', 'half-coupling').orientationDeg = 180;
+    });
+    const [change] = diff(vertical, turned);
+    expect(change!.text).toMatch(/orientation was 90° from plant north, now 180° from plant north/);
   });
 
   it('lists a changed fitting size and the pieces it changes', () => {
