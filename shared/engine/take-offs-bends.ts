@@ -12,6 +12,7 @@ import { mmText, noteUnconfirmed } from './unconfirmed-data';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
 import { cross, normalise, rejectFrom, scale } from './vec3-math';
 import { TextMemo } from './text-memo';
+import { checkMitre } from './mitre-rules';
 import { componentWords, standardAngleFor, warnPulled } from './fitting-angle';
 
 type ElbowNode = Extract<SpoolNode, { kind: 'elbow' }>;
@@ -124,6 +125,20 @@ export function analyseElbow(
     const g = spec.rootGapMm;
     const segment = welds > 1 ? 2 * tHalf - g : null;
     note90('radius (A)');
+    checkMitre(
+      {
+        words,
+        nodeId: node.id,
+        welds,
+        cutDeg: per / 2,
+        radiusMm: R,
+        segmentMm: segment,
+        minPieceMm: spec.minPieceLengthMm,
+        wallMm: pipe.dims?.wallMm ?? null,
+        odMm: pipe.dims?.odMm ?? null,
+      },
+      ctx.issues,
+    );
     if (segment !== null && segment <= 0) {
       addError(
         ctx.issues,
