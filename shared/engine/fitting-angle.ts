@@ -3,7 +3,6 @@
  * fitting and the difference is pulled at the welds, rather than cutting an elbow to a
  * fraction of a degree.
  */
-import type { SpoolNode } from '../schemas/spool-design-node.schema';
 import { addWarning, type IssueSink } from './issues';
 
 /** The standard angle chosen for a bend, and how far the bend is from it, degrees. */
@@ -25,11 +24,6 @@ export function standardAngleFor(
       best = { angleDeg: s, pulledDeg: d };
   }
   return best;
-}
-
-/** How a component is named in a message: its kind words, with its label when it has one. */
-export function componentWords(what: string, node: SpoolNode): string {
-  return node.label ? `${what} "${node.label}"` : what;
 }
 
 /**

@@ -13,7 +13,8 @@ import type { NodeAnalysis, NodeContext } from './node-analysis';
 import { cross, normalise, rejectFrom, scale } from './vec3-math';
 import { TextMemo } from './text-memo';
 import { checkMitre } from './mitre-rules';
-import { componentWords, standardAngleFor, warnPulled } from './fitting-angle';
+import { standardAngleFor, warnPulled } from './fitting-angle';
+import { componentWords } from './shop-words';
 
 type ElbowNode = Extract<SpoolNode, { kind: 'elbow' }>;
 type ReturnNode = Extract<SpoolNode, { kind: 'return' }>;

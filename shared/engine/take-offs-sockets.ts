@@ -8,7 +8,8 @@ import { socketWeldDimensions, type SocketFittingKind } from '../standards/socke
 import type { Connection, NodeRole } from './classify-nodes';
 import { addError } from './issues';
 import { socketEnd } from './node-end-builders';
-import { componentWords, standardAngleFor, warnPulled } from './fitting-angle';
+import { standardAngleFor, warnPulled } from './fitting-angle';
+import { componentWords } from './shop-words';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
 
 type SocketNode = Extract<SpoolNode, { kind: 'socket-fitting' }>;
