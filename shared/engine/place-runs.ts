@@ -164,6 +164,7 @@ export function runLengths(
         true,
       );
     }
+    if (known) checkPipeNeeded(run, fromEnd, toEnd, stated, 0, issues, words);
     return mk(stated + (tF ?? 0) + (tT ?? 0) + gF + gT, gF + gT, gF, gT, known ? stated : null, false);
   }
 
@@ -184,7 +185,10 @@ export function runLengths(
     return mk(stated, single, openF ? 0 : single / 2, openT ? 0 : single / 2, 0, true);
   }
   const pipe = stated - tF - tT - gF - gT;
-  if (pipe >= 0) return mk(stated, gF + gT, gF, gT, pipe, false);
+  if (pipe >= 0) {
+    checkPipeNeeded(run, fromEnd, toEnd, pipe, stated, issues, words);
+    return mk(stated, gF + gT, gF, gT, pipe, false);
+  }
   if (coupled < 0) {
     addError(
       issues,
@@ -201,6 +205,46 @@ export function runLengths(
     );
   }
   return mk(stated, gF + gT, gF, gT, null, false);
+}
+
+/**
+ * A pipe shorter than its ends need (a slip-on's hub and fillet) is an error naming the
+ * pipe and the run length needed. `stated` is the run's stated distance (0 for a cut length).
+ */
+function checkPipeNeeded(
+  run: SpoolRun,
+  fromEnd: NodeEnd | null,
+  toEnd: NodeEnd | null,
+  pipe: number,
+  stated: number,
+  issues: IssueSink,
+  words: { from: string; to: string } | undefined,
+): void {
+  const nf = fromEnd?.pipeNeeded ?? null;
+  const nt = toEnd?.pipeNeeded ?? null;
+  if (!nf && !nt) return;
+  const need = (nf?.mm ?? 0) + (nt?.mm ?? 0);
+  if (pipe >= need - 1e-6) return;
+  const why = [nf?.why, nt?.why].filter(Boolean).join('; ');
+  // How far the pipe end sits inside the component when only one end has a need.
+  const deepest = Math.max(nf?.insideMm ?? 0, nt?.insideMm ?? 0);
+  const short =
+    nf && nt
+      ? 'the welds cannot be made'
+      : pipe < deepest
+        ? `its end sits ${round(deepest - pipe)} mm inside the hub, so neither weld can be made`
+        : 'the hub fillet runs into the next weld';
+  const where = words ? ` between the ${words.from} and the ${words.to}` : '';
+  const runText =
+    run.length.kind === 'cut'
+      ? `cut the pipe at least ${round(need)} mm`
+      : `make the ${run.length.kind} dimension at least ${round(stated + need - pipe)} mm`;
+  addError(
+    issues,
+    'pipe-inside-hub',
+    `The ${round(pipe)} mm pipe${where} is too short: ${short}. It needs at least ${round(need)} mm: ${why}; ${runText}`,
+    run.id,
+  );
 }
 
 function checkLengthKind(run: SpoolRun, graph: SpoolGraph, issues: IssueSink): void {

@@ -11,8 +11,12 @@ export function componentWords(what: string, node: SpoolNode): string {
   return node.label ? `${what} "${node.label}"` : what;
 }
 
-/** A node's description without the standard it follows ("Elbow 90° LR, NPS 14 STD"), with its label. */
+/**
+ * A node's description for the middle of a sentence: without the standard it follows and
+ * with a lower-case first letter ("elbow 90° LR, NPS 14 STD"), with its label.
+ */
 export function analysisWords(a: NodeAnalysis): string {
   const cut = a.description.indexOf(', ASME');
-  return componentWords(cut > 0 ? a.description.slice(0, cut) : a.description, a.node);
+  const d = cut > 0 ? a.description.slice(0, cut) : a.description;
+  return componentWords(d.charAt(0).toLowerCase() + d.slice(1), a.node);
 }

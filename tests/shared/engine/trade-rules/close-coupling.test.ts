@@ -43,7 +43,7 @@ describe('fittings welded straight together', () => {
     expect(w[0]!.severity).toBe('warning');
     expect(w[0]!.message).toContain('3.8 mm apart');
     expect(w[0]!.message).toContain('root gap is 3 mm');
-    expect(w[0]!.message).toContain('Elbow 90° LR, NPS 14');
+    expect(w[0]!.message).toContain('elbow 90° LR, NPS 14');
     expect(w[0]!.message).not.toMatch(/\be1\b|\be2\b/);
   });
 
