@@ -30,6 +30,14 @@ export type ResolvedSpec = {
   minPieceLengthMm: number;
   socketGapMm: number;
   boltHoleToleranceMm: number;
+  /** A bend this close to 90° or 45° uses that fitting, pulled at the welds, degrees. */
+  fittingAngleToleranceDeg: number;
+  /** Bends below this angle get a warning suggesting a straight joint, degrees. */
+  minBendAngleDeg: number;
+  /** Fitting ends this close to one root gap apart weld together with no pipe, mm. */
+  closeCoupleToleranceMm: number;
+  /** Least clearance between a branch weld's toe and the next girth or branch weld's toe, mm. */
+  minWeldToeClearanceMm: number;
 };
 
 /** One problem found in the design. `componentId` is a node id or a run id. */

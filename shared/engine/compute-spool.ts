@@ -27,7 +27,10 @@ import { reportUnconfirmed, unconfirmedSink } from './unconfirmed-data';
 export type EngineTolerances = {
   /** Angle within which runs count as in line, square, or at a table angle (45°, 90°), degrees. Default 0.1. */
   angleDeg?: number;
-  /** A computed pipe within this of zero with one root gap means fittings weld straight together, mm. Default 0.5. */
+  /**
+   * Overrides the spec's `closeCoupleToleranceMm` everywhere: fitting ends within this of
+   * one root gap apart weld straight together, mm. Default: the spec (built-in 2 mm).
+   */
   closeCoupleMm?: number;
 };
 
@@ -47,8 +50,6 @@ export type ComputeOptions = {
 
 /** Default angle tolerance, degrees. */
 export const DEFAULT_ANGLE_TOLERANCE_DEG = 0.1;
-/** Default close-coupling tolerance, mm. */
-export const DEFAULT_CLOSE_COUPLE_MM = 0.5;
 
 /**
  * Computes a spool: placement of every work point, port and end (mm, plant axes x east,
@@ -88,7 +89,7 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
   const issues: IssueSink = [];
   const spec = resolveSpec(design, options.jobSpec);
   const angleDeg = options.tolerances?.angleDeg ?? DEFAULT_ANGLE_TOLERANCE_DEG;
-  const closeCoupleMm = options.tolerances?.closeCoupleMm ?? DEFAULT_CLOSE_COUPLE_MM;
+  const closeCoupleOverride = options.tolerances?.closeCoupleMm;
 
   const graph = buildGraph(design, issues);
   const directions = runDirections(graph);
@@ -109,7 +110,10 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
     analyses,
     directions,
     design.origin,
-    { closeCoupleMm },
+    (runId) => ({
+      closeCoupleMm:
+        closeCoupleOverride ?? pipes.get(runId)?.spec.closeCoupleToleranceMm ?? spec.closeCoupleToleranceMm,
+    }),
     issues,
   );
   const { pieces, marks } = buildCutList(graph, analyses, placed, pipes, positions, issues);

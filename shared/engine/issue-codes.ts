@@ -27,6 +27,13 @@ export const ISSUE_CODES = [
   'orientation-missing',
   'internal-error',
   'standard-data-unconfirmed',
+  'angle-pulled',
+  'bend-too-small',
+  'mitre-segment-short',
+  'mitre-outside-code',
+  'close-coupled-gap',
+  'pipe-inside-hub',
+  'weld-toes-close',
 ] as const;
 
 /** One issue code. */

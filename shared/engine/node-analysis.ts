@@ -49,6 +49,12 @@ export type NodeEnd = {
   weldCount: number;
   /** Saddle-cut branch: take-off to the crotch (shortest generator), mm. */
   shortPointTakeOffMm: number | null;
+  /**
+   * Least pipe this end needs beyond the pipe end for its welds to be made (slip-on: the
+   * pipe inside the hub plus the hub fillet), mm; `insideMm` of it lies inside the
+   * component; `why` in shop words. null: no need.
+   */
+  pipeNeeded: { mm: number; insideMm: number; why: string } | null;
 };
 
 /** Kind-specific facts for drawing and weighing. */

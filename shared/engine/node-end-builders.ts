@@ -29,6 +29,7 @@ export function buttEnd(
     weldType,
     weldCount: 1,
     shortPointTakeOffMm: null,
+    pipeNeeded: null,
   };
 }
 
@@ -47,6 +48,7 @@ export function socketEnd(conn: Connection, nps: Nps | null, takeOffMm: number |
     weldType: 'socket',
     weldCount: 1,
     shortPointTakeOffMm: null,
+    pipeNeeded: null,
   };
 }
 
@@ -65,6 +67,7 @@ export function openEnd(conn: Connection, nps: Nps | null, prep: 'weld-bevel' | 
     weldType: null,
     weldCount: 0,
     shortPointTakeOffMm: null,
+    pipeNeeded: null,
   };
 }
 
@@ -83,6 +86,7 @@ export function throughEnd(conn: Connection, nps: Nps | null): NodeEnd {
     weldType: null,
     weldCount: 0,
     shortPointTakeOffMm: null,
+    pipeNeeded: null,
   };
 }
 

@@ -10,6 +10,7 @@ import type { SpoolGraph } from './build-graph';
 import { addError, addWarning, type IssueSink } from './issues';
 import type { NodeAnalysis, NodeEnd } from './node-analysis';
 import { add, addScaled, sub, ZERO } from './vec3-math';
+import { analysisWords } from './shop-words';
 
 /** A run's lengths and its placement, mm / plant coordinates. */
 export type PlacedRun = {
@@ -34,9 +35,15 @@ export type PlacedRun = {
 
 /** Distance tolerances, mm. */
 export type LengthTolerance = {
-  /** A computed pipe within this of zero (with one root gap) means the fittings weld straight together. */
+  /**
+   * Fitting ends within this of one root gap apart weld straight together (no pipe), mm:
+   * the fittings' own dimensional tolerance (spec `closeCoupleToleranceMm`).
+   */
   closeCoupleMm: number;
 };
+
+/** Below this a close-coupled gap differs from the root gap only by rounding: no warning, mm. */
+export const CLOSE_COUPLE_QUIET_MM = 0.05;
 
 /** Finds the end of `analysis` that joins `runId`. */
 export function endFor(analysis: NodeAnalysis | undefined, runId: string): NodeEnd | null {
@@ -51,7 +58,7 @@ export function placeRuns(
   analyses: Map<string, NodeAnalysis>,
   directions: Map<string, Vec3>,
   origin: Vec3,
-  tol: LengthTolerance,
+  tolFor: (runId: string) => LengthTolerance,
   issues: IssueSink,
 ): { runs: Map<string, PlacedRun>; positions: Map<string, Vec3> } {
   const positions = new Map<string, Vec3>();
@@ -66,7 +73,10 @@ export function placeRuns(
     const d = directions.get(run.id)!;
     const fromEnd = endFor(analyses.get(run.from), run.id);
     const toEnd = endFor(analyses.get(run.to), run.id);
-    const len = runLengths(run, fromEnd, toEnd, tol, issues);
+    const fa = analyses.get(run.from);
+    const ta = analyses.get(run.to);
+    const words = fa && ta ? { from: analysisWords(fa), to: analysisWords(ta) } : undefined;
+    const len = runLengths(run, fromEnd, toEnd, tolFor(run.id), issues, words);
     const start = add(from, fromEnd?.portOffset ?? ZERO);
     const end = addScaled(start, d, len.workPointDistanceMm);
     positions.set(run.to, sub(end, toEnd?.portOffset ?? ZERO));
@@ -100,6 +110,7 @@ export function runLengths(
   toEnd: NodeEnd | null,
   tol: LengthTolerance,
   issues: IssueSink,
+  words?: { from: string; to: string },
 ): Lengths {
   const tF = fromEnd ? fromEnd.takeOffMm : null;
   const tT = toEnd ? toEnd.takeOffMm : null;
@@ -153,15 +164,30 @@ export function runLengths(
         true,
       );
     }
+    if (known) checkPipeNeeded(run, fromEnd, toEnd, stated, 0, issues, words);
     return mk(stated + (tF ?? 0) + (tT ?? 0) + gF + gT, gF + gT, gF, gT, known ? stated : null, false);
   }
 
   if (!known) return mk(stated, gF + gT, gF, gT, null, false);
-  const pipe = stated - tF - tT - gF - gT;
-  if (pipe >= 0) return mk(stated, gF + gT, gF, gT, pipe, false);
+  // Within the fittings' own tolerance of one root gap apart, fittings weld straight
+  // together: checked before the pipe, so a zero root gap does not leave a 0 mm "pipe".
   const coupled = stated - tF - tT - single;
   if (Math.abs(coupled) <= tol.closeCoupleMm && !cannotCouple && !bothOpen) {
+    if (Math.abs(coupled) > CLOSE_COUPLE_QUIET_MM) {
+      const between = words ? `${words.from} and ${words.to}` : 'fittings';
+      addWarning(
+        issues,
+        'close-coupled-gap',
+        `The ${between} weld straight together with no pipe: their ends are ${round2(coupled + single)} mm apart where the root gap is ${round2(single)} mm (${coupled > 0 ? 'wider' : 'tighter'} by ${round2(Math.abs(coupled))} mm, within the ${round2(tol.closeCoupleMm)} mm fitting tolerance): fit to the gap as found or correct the dimension`,
+        run.id,
+      );
+    }
     return mk(stated, single, openF ? 0 : single / 2, openT ? 0 : single / 2, 0, true);
+  }
+  const pipe = stated - tF - tT - gF - gT;
+  if (pipe >= 0) {
+    checkPipeNeeded(run, fromEnd, toEnd, pipe, stated, issues, words);
+    return mk(stated, gF + gT, gF, gT, pipe, false);
   }
   if (coupled < 0) {
     addError(
@@ -179,6 +205,46 @@ export function runLengths(
     );
   }
   return mk(stated, gF + gT, gF, gT, null, false);
+}
+
+/**
+ * A pipe shorter than its ends need (a slip-on's hub and fillet) is an error naming the
+ * pipe and the run length needed. `stated` is the run's stated distance (0 for a cut length).
+ */
+function checkPipeNeeded(
+  run: SpoolRun,
+  fromEnd: NodeEnd | null,
+  toEnd: NodeEnd | null,
+  pipe: number,
+  stated: number,
+  issues: IssueSink,
+  words: { from: string; to: string } | undefined,
+): void {
+  const nf = fromEnd?.pipeNeeded ?? null;
+  const nt = toEnd?.pipeNeeded ?? null;
+  if (!nf && !nt) return;
+  const need = (nf?.mm ?? 0) + (nt?.mm ?? 0);
+  if (pipe >= need - 1e-6) return;
+  const why = [nf?.why, nt?.why].filter(Boolean).join('; ');
+  // How far the pipe end sits inside the component when only one end has a need.
+  const deepest = Math.max(nf?.insideMm ?? 0, nt?.insideMm ?? 0);
+  const short =
+    nf && nt
+      ? 'the welds cannot be made'
+      : pipe < deepest
+        ? `its end sits ${round(deepest - pipe)} mm inside the hub, so neither weld can be made`
+        : 'the hub fillet runs into the next weld';
+  const where = words ? ` between the ${words.from} and the ${words.to}` : '';
+  const runText =
+    run.length.kind === 'cut'
+      ? `cut the pipe at least ${round(need)} mm`
+      : `make the ${run.length.kind} dimension at least ${round(stated + need - pipe)} mm`;
+  addError(
+    issues,
+    'pipe-inside-hub',
+    `The ${round(pipe)} mm pipe${where} is too short: ${short}. It needs at least ${round(need)} mm: ${why}; ${runText}`,
+    run.id,
+  );
 }
 
 function checkLengthKind(run: SpoolRun, graph: SpoolGraph, issues: IssueSink): void {
@@ -209,4 +275,8 @@ function checkLengthKind(run: SpoolRun, graph: SpoolGraph, issues: IssueSink): v
 
 function round(x: number): number {
   return Math.round(x * 10) / 10;
+}
+
+function round2(x: number): number {
+  return Math.round(x * 100) / 100;
 }

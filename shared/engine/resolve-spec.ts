@@ -10,6 +10,14 @@ import type { ResolvedSpec } from './compute-result';
  * rootGapMm 3: open-root gaps are typically 1.6–3.2 mm (common practice; the WPS rules).
  * sawKerfMm 3, minPieceLengthMm 50: common practice, no source; shops set their own.
  * boltHoleToleranceMm 1.6: bolt-hole rotation at the bolt circle, from memory (PFI ES-3).
+ * fittingAngleToleranceDeg 1: a degree is taken up at the welds of a standard elbow
+ * (common practice, no source).
+ * minBendAngleDeg 3: smaller bends are taken up at a straight butt weld instead of a
+ * sliver of cut elbow (common practice, no source).
+ * closeCoupleToleranceMm 2: ASME B16.9 tolerance table, centre-to-end of elbows and tees
+ * ±2 mm for the common sizes (from memory; the table widens it for the largest sizes).
+ * minWeldToeClearanceMm 50: weld toes kept apart so heat-affected zones do not overlap
+ * (common practice, no source; many client specs ask for 50 mm or 4 × wall).
  */
 export const BUILT_IN_SPEC: ResolvedSpec = Object.freeze({
   nps: null,
@@ -23,6 +31,10 @@ export const BUILT_IN_SPEC: ResolvedSpec = Object.freeze({
   minPieceLengthMm: 50,
   socketGapMm: SOCKET_EXPANSION_GAP_MM,
   boltHoleToleranceMm: 1.6,
+  fittingAngleToleranceDeg: 1,
+  minBendAngleDeg: 3,
+  closeCoupleToleranceMm: 2,
+  minWeldToeClearanceMm: 50,
 });
 
 /** Applies `overrides` (undefined fields ignored) on top of a resolved spec. */

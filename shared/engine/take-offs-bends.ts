@@ -12,6 +12,9 @@ import { mmText, noteUnconfirmed } from './unconfirmed-data';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
 import { cross, normalise, rejectFrom, scale } from './vec3-math';
 import { TextMemo } from './text-memo';
+import { checkMitre } from './mitre-rules';
+import { standardAngleFor, warnPulled } from './fitting-angle';
+import { componentWords } from './shop-words';
 
 type ElbowNode = Extract<SpoolNode, { kind: 'elbow' }>;
 type ReturnNode = Extract<SpoolNode, { kind: 'return' }>;
@@ -70,19 +73,36 @@ export function analyseElbow(
       },
     };
   };
+  // Fittings are pulled up to the shop's tolerance at the welds; mitres are cut to the angle.
+  const pullTol = mitre ? tol : Math.max(tol, spec.fittingAngleToleranceDeg);
+  const words = componentWords(
+    mitre ? `Mitred bend, NPS ${nps ?? '?'}` : `Elbow ${rr}, NPS ${nps ?? '?'}`,
+    node,
+  );
   if (angleDeg < tol)
     return fail(
       `Elbow ${node.id}: its runs are in a straight line (${round(angleDeg)}° of bend); remove the elbow or turn a run`,
     );
-  if (angleDeg > MAX_BEND_DEG + tol) {
+  if (angleDeg > MAX_BEND_DEG + pullTol) {
     return fail(
       `Elbow ${node.id}: a ${round(angleDeg)}° bend is more than one elbow makes (90° at most); use two elbows or a return`,
     );
   }
   if (!nps) return fail(`Elbow ${node.id}: size unknown`);
+  if (angleDeg < spec.minBendAngleDeg) {
+    // Common practice, no source: a bend this small is taken up at a butt weld.
+    addWarning(
+      ctx.issues,
+      'bend-too-small',
+      `${words}: a ${round(angleDeg)}° bend is below the shop's ${round(spec.minBendAngleDeg)}° minimum; a sliver of elbow this thin is hard to fit: consider a straight butt joint with the ${round(angleDeg)}° taken up at the weld`,
+      node.id,
+    );
+  }
 
-  const is90 = Math.abs(angleDeg - 90) <= tol;
-  const is45 = Math.abs(angleDeg - 45) <= tol;
+  const standard = mitre ? null : standardAngleFor(angleDeg, radius === 'long' ? [90, 45] : [90], pullTol);
+  if (standard) warnPulled(ctx.issues, words, node.id, angleDeg, standard, tol);
+  const is90 = standard?.angleDeg === 90;
+  const is45 = standard?.angleDeg === 45;
   const base90 = cachedElbowDimensions(nps, radius === 'long' ? 'LR90' : 'SR90');
   // Messages are built only for from-memory values: this runs on every keystroke.
   const note90 = (what: string) => {
@@ -106,6 +126,20 @@ export function analyseElbow(
     const g = spec.rootGapMm;
     const segment = welds > 1 ? 2 * tHalf - g : null;
     note90('radius (A)');
+    checkMitre(
+      {
+        words,
+        nodeId: node.id,
+        welds,
+        cutDeg: per / 2,
+        radiusMm: R,
+        segmentMm: segment,
+        minPieceMm: spec.minPieceLengthMm,
+        wallMm: pipe.dims?.wallMm ?? null,
+        odMm: pipe.dims?.odMm ?? null,
+      },
+      ctx.issues,
+    );
     if (segment !== null && segment <= 0) {
       addError(
         ctx.issues,

@@ -14,6 +14,7 @@ import { addError, addWarning } from './issues';
 import { buttEnd, socketEnd, throughEnd } from './node-end-builders';
 import type { NodeAnalysis, NodeContext, NodeEnd } from './node-analysis';
 import { setOnBranchReach } from './set-on-branch-geometry';
+import { mmText, noteUnconfirmed } from './unconfirmed-data';
 import { negate } from './vec3-math';
 
 type SetOnNode = Extract<SpoolNode, { kind: 'set-on-branch' }>;
@@ -167,11 +168,20 @@ export function analyseSmallBore(
         `${what} ${node.id}: ${look.missing}; drawn without its length`,
         node.id,
       );
+    const f = look.ok ? (look.value.socketBottomToFaceMm ?? null) : null;
+    if (look.ok && look.value.status === 'M' && f !== null)
+      noteUnconfirmed(
+        ctx.unconfirmed,
+        'M',
+        `NPS ${node.branchNps} half coupling F (socket bottom to the face on the header) = ${mmText(f)} mm`,
+        'ASME B16.11',
+        node.id,
+      );
     if (branch) {
       const gap = ctx.specAt(branch.run.id).socketGapMm;
-      const take =
-        look.ok && heightMm !== null && R !== null ? R + heightMm - look.value.centreToBottomMm + gap : null;
-      if (look.ok && heightMm === null)
+      // Pipe end: header surface (R) + F up to the socket bottom + the expansion gap.
+      const take = f !== null && R !== null ? R + f + gap : null;
+      if (look.ok && f === null)
         addError(
           ctx.issues,
           'standard-data-missing',

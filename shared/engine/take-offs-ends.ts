@@ -60,6 +60,7 @@ export function analyseEnd(ctx: NodeContext, node: EndNode, conn: Connection): N
         e.joint = 'slip-on';
         e.weldType = 'slip-on-fillet';
         e.weldCount = 2;
+        if (d && takeOff !== null) e.pipeNeeded = slipOnPipeNeeded(d, takeOff, pipe.dims);
       }
       const kind = wn ? 'weld neck' : 'slip-on';
       const blind = end.blind === true;
@@ -197,4 +198,28 @@ function noteFlange(ctx: NodeContext, nodeId: string, what: string, d: FlangeDim
     );
   if (p.hubLength === 'M') note(`length through hub Y = ${mmText(d.hubLengthMm)} mm`);
   if (p.body === 'M') note(`thickness tf = ${mmText(d.thicknessMm)} mm`);
+}
+
+/**
+ * Pipe a slip-on flange needs from the pipe end: through the rest of the hub (Y + raised
+ * face − setback) and out past its back by the hub fillet's leg. ASME B31.3 Fig. 328.5.2B
+ * (slip-on flange welds): leg x ≥ the lesser of 1.4 T and the hub thickness (from memory;
+ * the hub thickness is taken at its base, (X − pipe OD) / 2). Without it the pipe ends
+ * inside the hub and neither the hub fillet nor the weld at the pipe's other end can be made.
+ */
+export function slipOnPipeNeeded(
+  d: FlangeDimensions,
+  setbackMm: number,
+  pipe: { odMm: number; wallMm: number } | null,
+): { mm: number; insideMm: number; why: string } | null {
+  if (!pipe) return null;
+  const inHub = d.hubLengthMm + d.raisedFaceMm - setbackMm;
+  const hubWall = d.hubDiaAtBaseMm !== undefined ? (d.hubDiaAtBaseMm - pipe.odMm) / 2 : Infinity;
+  const leg = Math.min(1.4 * pipe.wallMm, hubWall);
+  if (!(inHub > 0) || !(leg > 0)) return null;
+  return {
+    mm: inHub + leg,
+    insideMm: inHub,
+    why: `${mmText(inHub)} mm through the slip-on's hub and ${mmText(leg)} mm for the hub fillet, 1.4 × wall per ASME B31.3 Fig. 328.5.2B`,
+  };
 }

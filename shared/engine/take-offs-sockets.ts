@@ -8,6 +8,8 @@ import { socketWeldDimensions, type SocketFittingKind } from '../standards/socke
 import type { Connection, NodeRole } from './classify-nodes';
 import { addError } from './issues';
 import { socketEnd } from './node-end-builders';
+import { standardAngleFor, warnPulled } from './fitting-angle';
+import { componentWords } from './shop-words';
 import type { NodeAnalysis, NodeContext } from './node-analysis';
 
 type SocketNode = Extract<SpoolNode, { kind: 'socket-fitting' }>;
@@ -32,9 +34,19 @@ export function analyseSocketFitting(ctx: NodeContext, node: SocketNode, role: N
   if (role.kind === 'inline') fitting = 'coupling';
   else if (role.kind === 'tee') fitting = 'tee';
   else if (role.kind === 'bend') {
-    if (Math.abs(role.angleDeg - 90) <= tol) fitting = 'elbow90';
-    else if (Math.abs(role.angleDeg - 45) <= tol) fitting = 'elbow45';
-    else {
+    const pullTol = Math.max(tol, ctx.specAt(role.a.run.id).fittingAngleToleranceDeg);
+    const standard = standardAngleFor(role.angleDeg, [90, 45], pullTol);
+    if (standard) {
+      fitting = standard.angleDeg === 90 ? 'elbow90' : 'elbow45';
+      warnPulled(
+        ctx.issues,
+        componentWords(`${NAMES[fitting]}, NPS ${ctx.pipe(role.a.run.id).nps ?? '?'}`, node),
+        node.id,
+        role.angleDeg,
+        standard,
+        tol,
+      );
+    } else {
       addError(
         ctx.issues,
         'angle-not-made',

@@ -31,6 +31,20 @@ export const specOverridesSchema = z
     socketGapMm: z.number().finite().min(0).max(5).optional(),
     /** Allowed bolt-hole rotation between flanges, mm at the bolt circle. */
     boltHoleToleranceMm: z.number().finite().min(0).max(20).optional(),
+    /**
+     * A bend within this of a standard fitting angle (90°, 45°) uses that fitting, pulled
+     * at the welds, instead of a cut elbow, degrees.
+     */
+    fittingAngleToleranceDeg: z.number().finite().min(0).max(5).optional(),
+    /** Bends below this angle are better taken up at a straight butt weld, degrees. */
+    minBendAngleDeg: z.number().finite().min(0).max(15).optional(),
+    /**
+     * Fittings whose ends are within this of one root gap apart weld straight together
+     * (no pipe piece); covers the fittings' own dimensional tolerance, mm.
+     */
+    closeCoupleToleranceMm: z.number().finite().min(0).max(10).optional(),
+    /** Least clearance between the toes of a branch weld and a nearby girth or branch weld, mm. */
+    minWeldToeClearanceMm: z.number().finite().min(0).max(1000).optional(),
   })
   .strict();
 /** Partial spec values (a design's, a run's or a node's overrides). */

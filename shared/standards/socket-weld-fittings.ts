@@ -35,8 +35,16 @@ export type SocketWeldDimensions = {
    * outside face to the socket bottom (= socket depth J).
    */
   centreToBottomMm: number;
-  /** Coupling: laying length E (socket bottom to socket bottom). Half coupling: overall length. */
+  /**
+   * Coupling: laying length E (socket bottom to socket bottom). Half coupling: overall
+   * length F + J (the face it stands on to the socket face).
+   */
   lengthMm?: number;
+  /**
+   * Half coupling only: F, bottom of the socket to the opposite face (the face welded to
+   * the header), as ASME B16.11 defines it in its socket-welding dimensional tolerances.
+   */
+  socketBottomToFaceMm?: number;
   /** Socket wall C, average, Class 3000 (for weight estimates). */
   socketWallMm: number;
   /** Bore D of the fitting beyond the socket bottom (for weight estimates). */
@@ -57,8 +65,8 @@ type Row = {
   a45: number;
   /** Coupling laying length E, socket bottom to socket bottom. */
   couplingE: number;
-  /** Half coupling overall length (read as overall length: see the source note). */
-  halfCouplingLength: number;
+  /** Half coupling F, bottom of socket to opposite face (see the source note). */
+  halfCouplingF: number;
   /** Socket wall C, average (Class 3000). */
   wall: number;
   /** Bore of the fitting D beyond the socket bottom. */
@@ -68,7 +76,7 @@ type Row = {
 const SOURCE_2016 =
   'ASME B16.11-2016 Class 3000 socket-weld tables (vaibhavfitting reproduction: 90° and 45° elbows, crosses, couplings, with socket wall C and bore D; 45° elbow also creativepiping)';
 const SOURCE_HALF =
-  "half-coupling length from a fitting maker's B16.11 coupling table (mumbadevisteel), read as the overall length; it equals the B16.11 inch values 7/8 in … 1-7/8 in converted";
+  "half-coupling F (bottom of socket to opposite face, the ASME B16.11 definition) from a fitting maker's B16.11 coupling table (mumbadevisteel); unconfirmed against the standard's own table";
 
 /**
  * ASME B16.11-2016 Class 3000 socket-weld dimensions, metric (mm). Older metric editions
@@ -76,15 +84,15 @@ const SOURCE_HALF =
  */
 // prettier-ignore
 const ROWS: readonly Row[] = [
-  { nps: '1/2', bore: 21.8, depth: 9.5, a90: 15.5, a45: 11.0, couplingE: 9.5, halfCouplingLength: 22.5, wall: 4.67, boreD: 15.8 },
-  { nps: '3/4', bore: 27.2, depth: 12.5, a90: 19.0, a45: 13.0, couplingE: 9.5, halfCouplingLength: 24.0, wall: 4.90, boreD: 21.0 },
-  { nps: '1', bore: 33.9, depth: 12.5, a90: 22.5, a45: 14.0, couplingE: 12.5, halfCouplingLength: 28.5, wall: 5.69, boreD: 26.7 },
-  { nps: '1-1/4', bore: 42.7, depth: 12.5, a90: 27.0, a45: 17.5, couplingE: 12.5, halfCouplingLength: 30.0, wall: 6.07, boreD: 35.1 },
-  { nps: '1-1/2', bore: 48.8, depth: 12.5, a90: 32.0, a45: 20.5, couplingE: 12.5, halfCouplingLength: 32.0, wall: 6.35, boreD: 40.9 },
-  { nps: '2', bore: 61.2, depth: 16.0, a90: 38.0, a45: 25.5, couplingE: 19.0, halfCouplingLength: 41.0, wall: 6.93, boreD: 52.5 },
-  { nps: '2-1/2', bore: 73.9, depth: 16.0, a90: 41.0, a45: 28.5, couplingE: 19.0, halfCouplingLength: 43.0, wall: 8.76, boreD: 62.7 },
-  { nps: '3', bore: 89.8, depth: 16.0, a90: 57.0, a45: 32.0, couplingE: 19.0, halfCouplingLength: 44.5, wall: 9.52, boreD: 78.0 },
-  { nps: '4', bore: 115.2, depth: 19.0, a90: 66.5, a45: 41.0, couplingE: 19.0, halfCouplingLength: 48.0, wall: 10.69, boreD: 102.3 },
+  { nps: '1/2', bore: 21.8, depth: 9.5, a90: 15.5, a45: 11.0, couplingE: 9.5, halfCouplingF: 22.5, wall: 4.67, boreD: 15.8 },
+  { nps: '3/4', bore: 27.2, depth: 12.5, a90: 19.0, a45: 13.0, couplingE: 9.5, halfCouplingF: 24.0, wall: 4.90, boreD: 21.0 },
+  { nps: '1', bore: 33.9, depth: 12.5, a90: 22.5, a45: 14.0, couplingE: 12.5, halfCouplingF: 28.5, wall: 5.69, boreD: 26.7 },
+  { nps: '1-1/4', bore: 42.7, depth: 12.5, a90: 27.0, a45: 17.5, couplingE: 12.5, halfCouplingF: 30.0, wall: 6.07, boreD: 35.1 },
+  { nps: '1-1/2', bore: 48.8, depth: 12.5, a90: 32.0, a45: 20.5, couplingE: 12.5, halfCouplingF: 32.0, wall: 6.35, boreD: 40.9 },
+  { nps: '2', bore: 61.2, depth: 16.0, a90: 38.0, a45: 25.5, couplingE: 19.0, halfCouplingF: 41.0, wall: 6.93, boreD: 52.5 },
+  { nps: '2-1/2', bore: 73.9, depth: 16.0, a90: 41.0, a45: 28.5, couplingE: 19.0, halfCouplingF: 43.0, wall: 8.76, boreD: 62.7 },
+  { nps: '3', bore: 89.8, depth: 16.0, a90: 57.0, a45: 32.0, couplingE: 19.0, halfCouplingF: 44.5, wall: 9.52, boreD: 78.0 },
+  { nps: '4', bore: 115.2, depth: 19.0, a90: 66.5, a45: 41.0, couplingE: 19.0, halfCouplingF: 48.0, wall: 10.69, boreD: 102.3 },
 ];
 
 const BY_NPS = new Map<Nps, Row>(ROWS.map((r) => [r.nps, r]));
@@ -114,12 +122,17 @@ export function socketWeldDimensions(nps: Nps, kind: SocketFittingKind): Lookup<
         source: `${SOURCE_2016}; coupling E also in a fitting maker's coupling table (mumbadevisteel)`,
       });
     case 'half-coupling':
-      // The pipe seats in the one socket; centreToBottom is measured from the socket's outside face.
+      // The pipe seats in the one socket; centreToBottom is measured from the socket's outside
+      // face. F runs from the socket bottom to the face on the header (ASME B16.11 dimension F,
+      // "bottom of socket to opposite face"), so the coupling stands F + J proud of the header.
+      // Marked M until F is checked against the standard's table: an earlier reading took the
+      // same numbers as the overall length, which put the pipe end 12.5 mm (NPS 1) too deep.
       return found({
         ...socket,
         centreToBottomMm: row.depth,
-        lengthMm: row.halfCouplingLength,
-        status: weakestStatus('S', 'S~'),
+        lengthMm: row.halfCouplingF + row.depth,
+        socketBottomToFaceMm: row.halfCouplingF,
+        status: weakestStatus('S', 'M'),
         source: `${SOURCE_2016}; ${SOURCE_HALF}`,
       });
     case 'cap':

@@ -19,24 +19,40 @@ const headerWithBranch = () =>
   );
 
 describe('pipe into a half coupling', () => {
-  it('cuts the branch pipe to header radius + coupling length − (socket depth − 1.6 mm gap)', () => {
-    // NPS 6 OD 168.3 mm (B36.10M); NPS 1 Class 3000 socket depth J 12.5 mm (B16.11-2016,
-    // vaibhavfitting tables); half-coupling overall length 28.5 mm (maker's table, status S~);
-    // gap 1.6 mm (B31.3 socket-weld figure, about 1/16 in). Pipe end from the header axis:
-    // 84.15 + 28.5 − (12.5 − 1.6) = 101.75 mm; cut = 300 − 101.75 = 198.25 mm.
+  it('cuts the branch pipe to header radius + F + 1.6 mm gap (F: socket bottom to the face on the header)', () => {
+    // NPS 6 OD 168.3 mm (B36.10M). ASME B16.11 defines the half-coupling dimension F as
+    // "bottom of socket to opposite face" (its socket-welding dimensional tolerances); NPS 1
+    // F = 28.5 mm (maker's B16.11 table, unconfirmed: status M). Gap 1.6 mm (B31.3
+    // socket-weld figure, about 1/16 in). Pipe end from the header axis:
+    // 84.15 + 28.5 + 1.6 = 114.25 mm; cut = 300 − 114.25 = 185.75 mm. Reading F as the
+    // overall length (28.5 − J 12.5) put the pipe end at 101.75: 12.5 mm too long, bottomed.
     const r = computeSpool(headerWithBranch());
     expect(r.issues.filter((i) => i.severity === 'error')).toEqual([]);
     const r3 = r.runs.find((x) => x.runId === 'r3')!;
-    expect(r3.takeOffFromMm).toBeCloseTo(101.75, 6);
-    expect(r3.pipeLengthMm).toBeCloseTo(198.25, 6);
-    expect(r.pieces.find((p) => p.runIds.includes('r3'))!.cutLengthMm).toBeCloseTo(198.25, 6);
+    expect(r3.takeOffFromMm).toBeCloseTo(114.25, 6);
+    expect(r3.pipeLengthMm).toBeCloseTo(185.75, 6);
+    expect(r.pieces.find((p) => p.runIds.includes('r3'))!.cutLengthMm).toBeCloseTo(185.75, 6);
     expect(r.welds.filter((w) => w.type === 'socket' && w.nps === '1')).toHaveLength(1);
+  });
+
+  it('flags the half-coupling F as unconfirmed until it is checked against ASME B16.11', () => {
+    const r = computeSpool(headerWithBranch());
+    const w = r.issues.find((i) => i.code === 'standard-data-unconfirmed' && i.componentId === 'c1');
+    expect(w?.severity).toBe('warning');
+    expect(w?.message).toContain('half coupling F');
+    expect(w?.message).toContain('28.5 mm');
+  });
+
+  it('draws the coupling F + J proud of the header', () => {
+    const r = computeSpool(headerWithBranch());
+    const c = r.components.find((x) => x.nodeId === 'c1')!;
+    expect(c.shape).toMatchObject({ heightMm: 28.5 + 12.5 });
   });
 
   it('a shop gap setting moves the cut length by the difference', () => {
     const d = headerWithBranch();
     const r = computeSpool({ ...d, spec: { ...d.spec, socketGapMm: 3 } });
-    expect(r.runs.find((x) => x.runId === 'r3')!.pipeLengthMm).toBeCloseTo(198.25 - 1.4, 6);
+    expect(r.runs.find((x) => x.runId === 'r3')!.pipeLengthMm).toBeCloseTo(185.75 - 1.4, 6);
   });
 
   it('a half coupling larger than the table (NPS 6 on 10) is a clear missing-data error', () => {
@@ -92,12 +108,12 @@ describe('weights of socket-weld fittings (geometric estimates)', () => {
       ),
     );
     const item = r.weights.items.find((i) => i.ref === 'c1')!;
-    // Overall 28.5 mm: socket 12.5 + 16 mm of bore.
-    expect(item.massKg).toBeCloseTo(kg(arm(16)), 3);
+    // Overall F + J = 28.5 + 12.5 = 41 mm: socket 12.5 + 28.5 mm of bore.
+    expect(item.massKg).toBeCloseTo(kg(arm(28.5)), 3);
     expect(item.massKg).toBeGreaterThan(0.1);
-    expect(item.massKg).toBeLessThan(0.4);
-    // On top of the header (orientation 0 = up): 84.15 + 28.5 / 2 above the axis.
-    expect(item.centroid.z).toBeCloseTo(84.15 + 14.25, 6);
+    expect(item.massKg).toBeLessThan(0.5);
+    // On top of the header (orientation 0 = up): 84.15 + 41 / 2 above the axis.
+    expect(item.centroid.z).toBeCloseTo(84.15 + 20.5, 6);
     expect(r.weights.notIncluded).toEqual([]);
   });
 
