@@ -3,7 +3,7 @@ import type { SpoolRun } from '../../../../shared/schemas/spool-design-run.schem
 import type { EndSpec } from '../../../../shared/schemas/spool-design-node.schema';
 import { NPS_VALUES, compareNps, type Nps } from '../../../../shared/standards/nps';
 import type { LengthUnits } from '../../../../shared/units/length-format';
-import { insertOnRun, type InlineComponent } from '../model/commands/insert-on-run';
+import { describeInline, insertOnRun, type InlineComponent } from '../model/commands/insert-on-run';
 import type { EditorModel } from '../model/editor-model';
 import { PLANT_AXES, type PlantAxis } from '../model/plant-directions';
 import { perpendicular } from '../model/vector';
@@ -97,7 +97,9 @@ export function InsertOnRunForm({
       model.apply(() => ({ ok: false, error: 'Give the branch a direction and a length' }));
       return;
     }
-    model.edit((design, ctx) => insertOnRun(design, { runId: run.id, distanceMm, component, ...(branch ? { branch } : {}) }, ctx));
+    model.edit((design, ctx) => insertOnRun(design, { runId: run.id, distanceMm, component, ...(branch ? { branch } : {}) }, ctx), {
+      fit: { what: `the ${describeInline(component)}` },
+    });
   };
 
   return (

@@ -71,7 +71,7 @@ export function NodeProperties({
               label="End"
               value={node.end.type}
               disabled={readOnly}
-              onChange={(e) => model.edit((d) => setEnd(d, { nodeId: node.id, end: endFromChoice(e.target.value as EndChoice) }))}
+              onChange={(e) => model.edit((d) => setEnd(d, { nodeId: node.id, end: endFromChoice(e.target.value as EndChoice) }), { fit: { what: 'that end' } })}
               options={END_OPTIONS}
             />
             {node.end.type === 'weld-neck-flange' || node.end.type === 'slip-on-flange' ? (
