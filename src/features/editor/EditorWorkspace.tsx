@@ -12,6 +12,7 @@ import { extendTarget } from './model/extend-target';
 import { IdAllocator } from './model/id-allocator';
 import { PLANT_AXES, directionFromOffsets, type PlantAxis } from './model/plant-directions';
 import { angleBetweenDeg, scale } from './model/vector';
+import { MarkText } from './panels/MarkText';
 import { useEditorKeys } from './hooks/use-editor-keys';
 import { useEditorResult, useEditorSnapshot } from './hooks/use-editor-snapshot';
 import { BuildBar, type BuildDraft } from './panels/BuildBar';
@@ -279,7 +280,7 @@ export function EditorWorkspace({
           draft={draft}
           onDraft={setDraft}
           onAdd={addRun}
-          fromLabel={fromNode ? `${fromNode.kind === 'end' ? 'open end' : fromNode.kind} ${fromNode.id}` : null}
+          fromLabel={fromNode ? <MarkText result={result} design={design} id={fromNode.id} /> : null}
           units={units}
           disabled={!from}
           turningBackFrom={turningBackFrom}
@@ -346,7 +347,7 @@ export function EditorWorkspace({
         {pendingDelete ? (
           <div className="flex flex-col gap-3">
             <p className="text-sm">
-              Deleting {pendingDelete.id} also removes {pendingDelete.count - 1} other component{pendingDelete.count === 2 ? '' : 's'} and runs downstream of it (a branch goes with its parent). Undo brings them back.
+              Deleting <MarkText result={result} design={design} id={pendingDelete.id} /> also removes {pendingDelete.count - 1} other component{pendingDelete.count === 2 ? '' : 's'} and runs downstream of it (a branch goes with its parent). Undo brings them back.
             </p>
             <div className="flex justify-end gap-2">
               <PanelButton onClick={() => setPendingDelete(null)}>Keep them</PanelButton>

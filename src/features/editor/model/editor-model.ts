@@ -7,6 +7,7 @@ import type { CommandContext } from './commands/command-context';
 import type { CommandResult } from './commands/command-result';
 import { DEFAULT_VIEW_PREFS, type ViewPrefs } from './view-prefs';
 import { describeMisfits, newMisfits, type Misfit } from './fit-check';
+import { userNames } from './user-names';
 import type { LengthUnits } from '../../../../shared/units/length-format';
 
 /** Computes the engine result of a design (the real engine in the app and tests). */
@@ -125,16 +126,20 @@ export class EditorModel {
     if (this.readOnly) return this.refuse('This spool is read-only for your role');
     const ids = new IdAllocator(this.design, this.idFloor);
     let result: CommandResult;
+    const before = this.getResult();
     try {
-      result = command(this.design, { result: this.getResult(), ids });
+      result = command(this.design, { result: before, ids });
     } catch (cause) {
       // A command bug must not leave a half-edited design; report it as a refusal.
       return this.refuse(cause instanceof Error ? cause.message : 'The change could not be made');
     }
-    if (!result.ok) return this.refuse(result.error);
+    // Commands speak in document ids; users read shop marks (named as before the change).
+    const names = userNames(before, this.design);
+    if (!result.ok) return this.refuse(names.text(result.error));
+    result = { ...result, label: names.text(result.label) };
     if (options.fit && result.design !== this.design) {
       const after = this.compute(result.design);
-      const misfits = newMisfits(this.getResult(), after);
+      const misfits = newMisfits(before, after);
       if (misfits.length > 0 && !options.fit.accept) {
         const message = `${describeMisfits(options.fit.what, misfits, this.units)} Lengthen the run or move the fitting, or insert it anyway.`;
         this.held = { base: this.design, result, after, coalesce: options.coalesce ?? null, ids: ids.floor() };

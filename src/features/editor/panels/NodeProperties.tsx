@@ -4,7 +4,8 @@ import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema
 import type { SpoolNode } from '../../../../shared/schemas/spool-design-node.schema';
 import { NPS_VALUES } from '../../../../shared/standards/nps';
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
-import { setEnd, setFlangeBoltRotation, setNodeProperties } from '../model/commands/edit-node';
+import { endWords, setEnd, setFlangeBoltRotation, setNodeProperties } from '../model/commands/edit-node';
+import { useUserNames } from '../hooks/use-user-names';
 import type { EditorModel } from '../model/editor-model';
 import { END_OPTIONS, endFromChoice, type EndChoice } from './end-options';
 import { Fact, PanelButton, PanelSection, SmallSelect, npsOptions } from './panel-bits';
@@ -25,6 +26,7 @@ const KIND_WORDS: Record<SpoolNode['kind'], string> = {
 /** Properties of a selected node's component, editable where the document allows. */
 export function NodeProperties({
   model,
+  design,
   result,
   node,
   units,
@@ -49,11 +51,13 @@ export function NodeProperties({
     setRotation(node.kind === 'end' && 'boltRotationDeg' in node.end && node.end.boltRotationDeg !== undefined ? String(node.end.boltRotationDeg) : '');
   }
   const p = component?.position;
+  const names = useUserNames(result, design);
+  const kindWords = node.kind === 'end' ? capitalise(endWords(node.end)) : KIND_WORDS[node.kind];
 
   return (
     <div className="flex flex-col gap-3" data-testid="node-properties">
       <PanelSection
-        title={`${KIND_WORDS[node.kind]} ${node.id}`}
+        title={`${kindWords} ${names.node(node.id)}`}
         actions={
           !readOnly ? (
             <PanelButton tone="danger" onClick={() => onDelete(node.id)} title="Delete (Delete key)" aria-keyshortcuts="Delete">
@@ -240,4 +244,8 @@ export function NodeProperties({
 
 function fmtCoord(mm: number, units: LengthUnits): string {
   return formatLength(mm, units).replace(' mm', '');
+}
+
+function capitalise(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
 }
