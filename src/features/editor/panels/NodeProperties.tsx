@@ -6,6 +6,7 @@ import { NPS_VALUES } from '../../../../shared/standards/nps';
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
 import { endWords, setEnd, setFlangeBoltRotation, setNodeProperties } from '../model/commands/edit-node';
 import { useUserNames } from '../hooks/use-user-names';
+import { describeOrientation, orientationReference } from '../model/orientation-words';
 import type { EditorModel } from '../model/editor-model';
 import { END_OPTIONS, endFromChoice, type EndChoice } from './end-options';
 import { Fact, PanelButton, PanelSection, SmallSelect, npsOptions } from './panel-bits';
@@ -52,6 +53,8 @@ export function NodeProperties({
   }
   const p = component?.position;
   const names = useUserNames(result, design);
+  const headerAxis = component && (component.shape.type === 'branch-connection' || component.shape.type === 'set-on-branch') ? component.shape.headerAxis : null;
+  const placedOrientation = component?.shape.type === 'branch-connection' ? component.shape.orientationDeg : null;
   const kindWords = node.kind === 'end' ? capitalise(endWords(node.end)) : KIND_WORDS[node.kind];
 
   return (
@@ -206,7 +209,7 @@ export function NodeProperties({
 
         {node.kind === 'half-coupling' || node.kind === 'branch-outlet' ? (
           <label className="flex flex-col gap-0.5 text-xs font-semibold text-ink-700">
-            Orientation, ° clockwise looking along the header, 0 = top
+            {headerAxis ? orientationReference(headerAxis).fieldLabel : 'Orientation, ° clockwise looking along the header run; 0° = top of pipe (plant north on a vertical run)'}
             <input
               defaultValue={node.orientationDeg ?? ''}
               key={`${node.id}-${node.orientationDeg ?? ''}`}
@@ -228,6 +231,7 @@ export function NodeProperties({
           {component?.ends.map((e, i) => (
             <Fact key={i} label={`Take-off, end ${i + 1} (${e.joint})`} value={e.takeOffMm === null ? '—' : formatLength(e.takeOffMm, units)} />
           ))}
+          {headerAxis && placedOrientation !== null ? <Fact label="Orientation" value={describeOrientation(headerAxis, placedOrientation)} /> : null}
           {component?.massKg ? <Fact label="Weight (est.)" value={`${component.massKg.toFixed(1)} kg`} /> : null}
           {flange ? (
             <>
