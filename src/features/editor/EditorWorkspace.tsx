@@ -12,6 +12,7 @@ import { extendTarget } from './model/extend-target';
 import { IdAllocator } from './model/id-allocator';
 import { PLANT_AXES, directionFromOffsets, type PlantAxis } from './model/plant-directions';
 import { angleBetweenDeg, scale } from './model/vector';
+import { MarkText } from './panels/MarkText';
 import { useEditorKeys } from './hooks/use-editor-keys';
 import { useEditorResult, useEditorSnapshot } from './hooks/use-editor-snapshot';
 import { BuildBar, type BuildDraft } from './panels/BuildBar';
@@ -122,6 +123,7 @@ export function EditorWorkspace({
         { fromNodeId: from, direction, lengthMm: draft.lengthMm!, elbowRadius: draft.radius, ...(returnSide ? { returnSide } : {}), ...(draft.kind !== 'auto' ? { lengthKind: draft.kind } : {}) },
         ctx,
       ),
+      { fit: { what: turningBackFrom ? 'the return' : 'the elbow' } },
     );
     // Hand the keys back to the editor: the next letter is a direction, not text in the box.
     if (r.ok) rootRef.current?.focus();
@@ -183,7 +185,7 @@ export function EditorWorkspace({
         model.redo();
         return;
       case 'make-flange':
-        if (!readOnly && selection?.type === 'node') model.edit((d) => setEnd(d, { nodeId: selection.id, end: { type: 'weld-neck-flange' } }));
+        if (!readOnly && selection?.type === 'node') model.edit((d) => setEnd(d, { nodeId: selection.id, end: { type: 'weld-neck-flange' } }), { fit: { what: 'the flange' } });
         return;
       case 'delete':
         if (!readOnly && selection) requestDelete(selection.id);
@@ -278,7 +280,7 @@ export function EditorWorkspace({
           draft={draft}
           onDraft={setDraft}
           onAdd={addRun}
-          fromLabel={fromNode ? `${fromNode.kind === 'end' ? 'open end' : fromNode.kind} ${fromNode.id}` : null}
+          fromLabel={fromNode ? <MarkText result={result} design={design} id={fromNode.id} /> : null}
           units={units}
           disabled={!from}
           turningBackFrom={turningBackFrom}
@@ -287,6 +289,13 @@ export function EditorWorkspace({
       <p role="status" aria-live="polite" className={cn('min-h-5 text-sm', snap.lastError ? 'font-semibold text-danger-700' : 'text-steel-600')} data-testid="editor-status">
         {snap.lastError ?? snap.lastMessage ?? (readOnly ? 'Orbit with the mouse or a finger; click a pipe or fitting to read its dimensions.' : '')}
       </p>
+      {snap.pendingFit ? (
+        <div className="flex flex-wrap items-center gap-2 rounded-md border border-danger-600 bg-danger-50 px-2 py-1 text-sm" data-testid="fit-choice">
+          <span className="text-ink-800">The cut list will show this run as impossible until it is lengthened.</span>
+          <PanelButton tone="danger" onClick={() => model.acceptPendingFit()}>Insert anyway</PanelButton>
+          <PanelButton onClick={() => model.dismissPendingFit()}>Cancel</PanelButton>
+        </div>
+      ) : null}
       <div className="grid gap-2 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="relative h-[32rem] overflow-hidden rounded-md border border-steel-200 bg-steel-100">
           <SpoolCanvas result={result} design={design} selection={selection} view={view} units={units} onSelect={onSelect} modelRef={modelGroup} nextRun={nextRun} />
@@ -338,7 +347,7 @@ export function EditorWorkspace({
         {pendingDelete ? (
           <div className="flex flex-col gap-3">
             <p className="text-sm">
-              Deleting {pendingDelete.id} also removes {pendingDelete.count - 1} other component{pendingDelete.count === 2 ? '' : 's'} and runs downstream of it (a branch goes with its parent). Undo brings them back.
+              Deleting <MarkText result={result} design={design} id={pendingDelete.id} /> also removes {pendingDelete.count - 1} other component{pendingDelete.count === 2 ? '' : 's'} and runs downstream of it (a branch goes with its parent). Undo brings them back.
             </p>
             <div className="flex justify-end gap-2">
               <PanelButton onClick={() => setPendingDelete(null)}>Keep them</PanelButton>

@@ -58,6 +58,7 @@ export default function SpoolEditor({ spoolId, readOnly }: { spoolId: string; re
   const [conflictLater, setConflictLater] = useState<object | null>(null);
 
   useEffect(() => model.setCompute(compute), [model, compute]);
+  useEffect(() => model.setUnits(units), [model, units]);
   useEffect(() => model.setReadOnly(!editing), [model, editing]);
 
   const autosave = useDraftAutosave({ model, spoolId, draft: editing && loaded ? loaded : null, enabled: editing && !!loaded });

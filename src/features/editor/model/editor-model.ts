@@ -6,6 +6,9 @@ import { IdAllocator, idFloorOf, type IdFloor } from './id-allocator';
 import type { CommandContext } from './commands/command-context';
 import type { CommandResult } from './commands/command-result';
 import { DEFAULT_VIEW_PREFS, type ViewPrefs } from './view-prefs';
+import { describeMisfits, newMisfits, type Misfit } from './fit-check';
+import { userNames } from './user-names';
+import type { LengthUnits } from '../../../../shared/units/length-format';
 
 /** Computes the engine result of a design (the real engine in the app and tests). */
 export type ComputeFn = (design: SpoolDesign) => SpoolResult;
@@ -29,13 +32,30 @@ export type EditorSnapshot = {
   lastMessage: string | null;
   /** Increases on every design change (autosave watches it). */
   designRevision: number;
+  /**
+   * A fitting held back because it does not fit its run: what is missing, in words and
+   * figures. `acceptPendingFit()` inserts it anyway; any other change drops it.
+   */
+  pendingFit: PendingFit | null;
 };
 
-/** How a command joins the history. */
-export type CommandOptions = { coalesce?: string };
+/** A change waiting for the user's "insert anyway". */
+export type PendingFit = { message: string; label: string; misfits: Misfit[] };
+
+/** Held change behind a {@link PendingFit}: the design it applies to and what it makes. */
+type HeldChange = { base: SpoolDesign | null; result: Extract<CommandResult, { ok: true }>; after: SpoolResult; coalesce: string | null; ids: IdFloor };
+
+/**
+ * How a command joins the history. With `fit`, a change that leaves a run too short for
+ * its fittings (and a pipe piece) is held back and the snapshot's `pendingFit` says what
+ * is missing; `fit.what` names the fitting ("the tee"). `fit.accept` applies it anyway.
+ */
+export type CommandOptions = { coalesce?: string; fit?: { what: string; accept?: boolean } };
 
 /** What a command call tells its caller. */
-export type CommandOutcome = { ok: true; label: string; removedIds: string[] } | { ok: false; error: string };
+export type CommandOutcome =
+  | { ok: true; label: string; removedIds: string[] }
+  | { ok: false; error: string; misfits?: Misfit[] };
 
 /** Undo depth kept; older steps drop off. */
 const MAX_HISTORY = 200;
@@ -62,13 +82,17 @@ export class EditorModel {
   private readonly listeners = new Set<() => void>();
   private resultFor: SpoolDesign | null = null;
   private result: SpoolResult | null = null;
+  private held: HeldChange | null = null;
+  private pendingFit: PendingFit | null = null;
+  private units: LengthUnits;
 
   constructor(
     private compute: ComputeFn,
-    options: { design?: SpoolDesign | null; readOnly?: boolean } = {},
+    options: { design?: SpoolDesign | null; readOnly?: boolean; units?: LengthUnits } = {},
   ) {
     this.design = options.design ?? null;
     this.readOnly = options.readOnly ?? false;
+    this.units = options.units ?? 'mm';
     this.idFloor = idFloorOf(this.design);
     this.snapshot = this.makeSnapshot();
   }
@@ -102,23 +126,86 @@ export class EditorModel {
     if (this.readOnly) return this.refuse('This spool is read-only for your role');
     const ids = new IdAllocator(this.design, this.idFloor);
     let result: CommandResult;
+    const before = this.getResult();
     try {
-      result = command(this.design, { result: this.getResult(), ids });
+      result = command(this.design, { result: before, ids });
     } catch (cause) {
       // A command bug must not leave a half-edited design; report it as a refusal.
       return this.refuse(cause instanceof Error ? cause.message : 'The change could not be made');
     }
-    if (!result.ok) return this.refuse(result.error);
+    // Commands speak in document ids; users read shop marks (named as before the change).
+    const names = userNames(before, this.design);
+    if (!result.ok) return this.refuse(names.text(result.error));
+    result = { ...result, label: names.text(result.label) };
+    if (options.fit && result.design !== this.design) {
+      const after = this.compute(result.design);
+      const misfits = newMisfits(before, after);
+      if (misfits.length > 0 && !options.fit.accept) {
+        const message = `${describeMisfits(options.fit.what, misfits, this.units)} Lengthen the run or move the fitting, or insert it anyway.`;
+        this.held = { base: this.design, result, after, coalesce: options.coalesce ?? null, ids: ids.floor() };
+        this.pendingFit = { message, label: result.label, misfits };
+        this.lastError = message;
+        this.emit();
+        return { ok: false, error: message, misfits };
+      }
+      return this.commit(result, options.coalesce ?? null, ids.floor(), after);
+    }
+    return this.commit(result, options.coalesce ?? null, ids.floor(), null);
+  }
+
+  /** Applies the change held back by `pendingFit` (the user chose "insert anyway"). */
+  acceptPendingFit(): CommandOutcome {
+    const held = this.held;
+    if (!held || this.readOnly) return this.refuse('Nothing is waiting to be inserted');
+    if (held.base !== this.design) {
+      this.dropPendingFit();
+      return this.refuse('The spool changed since; insert the fitting again');
+    }
+    return this.commit(held.result, held.coalesce, held.ids, held.after, `${held.result.label} (does not fit)`);
+  }
+
+  /** Forgets the held change ("cancel"). */
+  dismissPendingFit(): void {
+    if (!this.held && !this.pendingFit) return;
+    this.dropPendingFit();
+    this.lastError = null;
+    this.emit();
+  }
+
+  /** The units lengths are stated in (besides mm) in the model's messages. */
+  setUnits(units: LengthUnits): void {
+    this.units = units;
+  }
+
+  private dropPendingFit(): void {
+    this.held = null;
+    this.pendingFit = null;
+  }
+
+  private commit(
+    result: Extract<CommandResult, { ok: true }>,
+    coalesce: string | null,
+    floor: IdFloor,
+    after: SpoolResult | null,
+    message: string = result.label,
+  ): CommandOutcome {
+    const options = { coalesce: coalesce ?? undefined };
+    this.dropPendingFit();
     const joins = options.coalesce !== undefined && options.coalesce === this.lastCoalesce && this.undoStack.length > 0;
     if (joins) this.undoStack[this.undoStack.length - 1]!.label = result.label;
     else this.push(this.undoStack, { design: this.design, selection: this.selection, label: result.label });
     this.lastCoalesce = options.coalesce ?? null;
     this.redoStack.length = 0;
-    this.idFloor = ids.floor();
+    this.idFloor = floor;
     this.design = result.design;
+    if (after) {
+      // Already computed for the fit check: keep it rather than computing again.
+      this.result = after;
+      this.resultFor = result.design;
+    }
     this.selection = result.select !== undefined ? result.select : this.validSelection(this.selection);
     this.lastError = null;
-    this.lastMessage = result.label;
+    this.lastMessage = message;
     this.designRevision += 1;
     this.emit();
     return { ok: true, label: result.label, removedIds: result.removedIds ?? [] };
@@ -186,6 +273,7 @@ export class EditorModel {
       this.redoStack.length = 0;
     }
     this.lastCoalesce = null;
+    this.dropPendingFit();
     const floor = idFloorOf(design);
     this.idFloor = { n: Math.max(floor.n, this.idFloor.n), r: Math.max(floor.r, this.idFloor.r) };
     this.design = design;
@@ -199,6 +287,7 @@ export class EditorModel {
   /** Swaps the engine call (e.g. when the job's spec arrives); results are recomputed. */
   setCompute(compute: ComputeFn): void {
     this.compute = compute;
+    this.dropPendingFit();
     this.resultFor = null;
     this.result = null;
     this.emit();
@@ -219,12 +308,14 @@ export class EditorModel {
   }
 
   private refuse(error: string): CommandOutcome {
+    this.dropPendingFit();
     this.lastError = error;
     this.emit();
     return { ok: false, error };
   }
 
   private restore(entry: HistoryEntry, message: string): void {
+    this.dropPendingFit();
     this.lastCoalesce = null;
     this.design = entry.design;
     this.selection = this.validSelection(entry.selection);
@@ -258,6 +349,7 @@ export class EditorModel {
       lastError: this.lastError,
       lastMessage: this.lastMessage,
       designRevision: this.designRevision,
+      pendingFit: this.pendingFit,
     };
   }
 

@@ -1,4 +1,4 @@
-import { forwardRef } from 'react';
+import { forwardRef, type ReactNode } from 'react';
 import type { RunLengthKind } from '../../../../shared/schemas/spool-design-run.schema';
 import type { ElbowRadius } from '../../../../shared/schemas/spool-design-primitives.schema';
 import { cn } from '../../../lib/cn';
@@ -40,7 +40,7 @@ export const BuildBar = forwardRef<
     draft: BuildDraft;
     onDraft: (draft: BuildDraft) => void;
     onAdd: () => void;
-    fromLabel: string | null;
+    fromLabel: ReactNode;
     units: LengthUnits;
     disabled: boolean;
     /** Set when the chosen direction doubles back on the run: the run's direction (the return's side is square to it). */
@@ -95,7 +95,7 @@ export const BuildBar = forwardRef<
             Offsets…
           </button>
         </div>
-        <p className="min-h-4 text-[11px] text-steel-600">{fromLabel ? `from ${fromLabel}` : 'select an open end'}</p>
+        <p className="min-h-4 text-[11px] text-steel-600">{fromLabel ? <>from {fromLabel}</> : 'select an open end'}</p>
       </fieldset>
       {draft.axis === 'offset' ? (
         <fieldset className="flex gap-1" disabled={disabled}>

@@ -2,10 +2,11 @@ import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema';
 import { elementKind } from '../model/design-graph';
 import type { Selection } from '../model/editor-selection';
+import type { UserNames } from '../model/user-names';
 import { cn } from '../../../lib/cn';
 
 /** The engine's errors and warnings; clicking one selects the component it is about. */
-export function ChecksPanel({ result, design, onSelect }: { result: SpoolResult; design: SpoolDesign; onSelect: (s: Selection) => void }) {
+export function ChecksPanel({ result, design, names, onSelect }: { result: SpoolResult; design: SpoolDesign; names: UserNames; onSelect: (s: Selection) => void }) {
   if (result.issues.length === 0) {
     return <p className="p-3 text-sm text-ok-600">No problems found: every length can be cut and every fitting is made.</p>;
   }
@@ -24,8 +25,8 @@ export function ChecksPanel({ result, design, onSelect }: { result: SpoolResult;
             >
               {issue.severity === 'error' ? 'Error' : 'Warning'}
             </span>
-            {issue.message}
-            {issue.componentId ? <span className="ml-1 font-mono text-xs text-steel-600">({issue.componentId})</span> : null}
+            {names.text(issue.message)}
+            {kind ? <span className="ml-1 font-mono text-xs text-steel-600">({kind === 'node' ? names.node(issue.componentId!) : names.run(issue.componentId!)})</span> : null}
           </>
         );
         return (

@@ -3,12 +3,13 @@ import { formatLength, type LengthUnits } from '../../../../shared/units/length-
 import { setFlangeBoltRotation } from '../model/commands/edit-node';
 import type { EditorModel } from '../model/editor-model';
 import type { Selection } from '../model/editor-selection';
+import type { UserNames } from '../model/user-names';
 import { PanelButton } from './panel-bits';
 
 /** Plain words for a rotation correction, in degrees and at the bolt circle. */
-export function correctionWords(c: RotationCorrection, units: LengthUnits): string {
+export function correctionWords(c: RotationCorrection, units: LengthUnits, names: UserNames): string {
   const arc = c.atBoltCircleMm !== null ? ` (${formatLength(c.atBoltCircleMm, units)} at the bolt circle)` : '';
-  return `Rotate ${c.flangeId} ${c.rotateDeg.toFixed(1)}° ${c.sense === 'clockwise' ? 'clockwise' : 'counter-clockwise'}, seen facing it${arc}`;
+  return `Rotate ${names.node(c.flangeId)} ${c.rotateDeg.toFixed(1)}° ${c.sense === 'clockwise' ? 'clockwise' : 'counter-clockwise'}, seen facing it${arc}`;
 }
 
 /**
@@ -19,12 +20,14 @@ export function correctionWords(c: RotationCorrection, units: LengthUnits): stri
 export function FlangesPanel({
   model,
   result,
+  names,
   units,
   readOnly,
   onSelect,
 }: {
   model: EditorModel;
   result: SpoolResult;
+  names: UserNames;
   units: LengthUnits;
   readOnly: boolean;
   onSelect: (s: Selection) => void;
@@ -43,7 +46,7 @@ export function FlangesPanel({
           <li key={f.nodeId} className="flex flex-col gap-1 py-2">
             <div className="flex flex-wrap items-baseline justify-between gap-2">
               <button type="button" className="font-mono font-semibold hover:underline" onClick={() => onSelect({ type: 'node', id: f.nodeId })}>
-                {f.nodeId}
+                {names.node(f.nodeId)}
               </button>
               <span className="text-steel-700">
                 {f.type === 'weld-neck-flange' ? 'Weld neck' : 'Slip-on'} NPS {f.nps} Class {f.flangeClass} · {f.boltCount ?? '?'} bolts
@@ -52,14 +55,14 @@ export function FlangesPanel({
             <p>
               First hole <strong className="font-mono">{f.rotationDeg.toFixed(1)}°</strong> clockwise from{' '}
               {f.reference === 'plant-north' ? 'plant north' : 'the plant vertical'}, seen facing the flange
-              {f.bendPlaneRotationDeg !== null ? ` · ${f.bendPlaneRotationDeg.toFixed(1)}° from the plane of bend ${f.bendPlaneNodeId}` : ''}.
+              {f.bendPlaneRotationDeg !== null ? ` · ${f.bendPlaneRotationDeg.toFixed(1)}° from the plane of bend ${f.bendPlaneNodeId ? names.node(f.bendPlaneNodeId) : ''}` : ''}.
             </p>
             <p className={f.straddles ? 'text-ok-600' : f.mustTwoHole ? 'text-danger-700' : 'text-steel-700'}>
               {f.straddles ? 'Two-holed: holes straddle the centrelines.' : f.mustTwoHole ? 'Not two-holed, but it must be.' : 'Holes on a centreline (allowed for this flange).'}
             </p>
             {f.correction ? (
               <div className="flex flex-wrap items-center gap-2 rounded-md bg-danger-50 p-2 text-danger-700">
-                <span>{correctionWords(f.correction, units)}</span>
+                <span>{correctionWords(f.correction, units, names)}</span>
                 {!readOnly ? (
                   <PanelButton onClick={() => apply(f.nodeId, f.correction!)}>Apply correction</PanelButton>
                 ) : null}
@@ -74,14 +77,14 @@ export function FlangesPanel({
           <ul className="flex flex-col gap-1">
             {result.flangePairs.map((p) => (
               <li key={`${p.a}-${p.b}`} className={p.withinTolerance === false ? 'text-danger-700' : 'text-steel-800'}>
-                {p.a} → {p.b}:{' '}
+                {names.node(p.a)} → {names.node(p.b)}:{' '}
                 {p.errorMm === null
                   ? 'faces not parallel, no hole match needed'
                   : `${p.errorDeg?.toFixed(1)}° (${formatLength(p.errorMm, units)} at the bolt circle), tolerance ${formatLength(p.toleranceMm, units)} — ${p.withinTolerance ? 'within' : 'outside'}`}
-                {p.correction ? <span className="block">{correctionWords(p.correction, units)}</span> : null}
+                {p.correction ? <span className="block">{correctionWords(p.correction, units, names)}</span> : null}
                 {p.correction && !readOnly ? (
                   <PanelButton className="mt-1" onClick={() => apply(p.correction!.flangeId, p.correction!)}>
-                    Apply correction to {p.correction.flangeId}
+                    Apply correction to {names.node(p.correction.flangeId)}
                   </PanelButton>
                 ) : null}
               </li>

@@ -3,7 +3,8 @@ import type { SpoolRun } from '../../../../shared/schemas/spool-design-run.schem
 import type { EndSpec } from '../../../../shared/schemas/spool-design-node.schema';
 import { NPS_VALUES, compareNps, type Nps } from '../../../../shared/standards/nps';
 import type { LengthUnits } from '../../../../shared/units/length-format';
-import { insertOnRun, type InlineComponent } from '../model/commands/insert-on-run';
+import { describeInline, insertOnRun, type InlineComponent } from '../model/commands/insert-on-run';
+import { describeOrientation, orientationReference } from '../model/orientation-words';
 import type { EditorModel } from '../model/editor-model';
 import { PLANT_AXES, type PlantAxis } from '../model/plant-directions';
 import { perpendicular } from '../model/vector';
@@ -97,7 +98,9 @@ export function InsertOnRunForm({
       model.apply(() => ({ ok: false, error: 'Give the branch a direction and a length' }));
       return;
     }
-    model.edit((design, ctx) => insertOnRun(design, { runId: run.id, distanceMm, component, ...(branch ? { branch } : {}) }, ctx));
+    model.edit((design, ctx) => insertOnRun(design, { runId: run.id, distanceMm, component, ...(branch ? { branch } : {}) }, ctx), {
+      fit: { what: `the ${describeInline(component)}` },
+    });
   };
 
   return (
@@ -161,13 +164,16 @@ export function InsertOnRunForm({
       ) : null}
       {small && !socketBranch ? (
         <label className="flex flex-col gap-0.5 text-xs font-semibold text-ink-700">
-          Orientation, degrees clockwise looking along the run, 0 = top
+          {orientationReference(run.direction).fieldLabel}
           <input
             value={orientation}
             onChange={(e) => setOrientation(e.target.value)}
             inputMode="decimal"
             className="min-h-10 rounded-md border border-steel-300 bg-white px-2 font-mono text-sm"
           />
+          {Number.isFinite(Number(orientation)) && orientation.trim() !== '' ? (
+            <span className="font-normal text-steel-600" data-testid="orientation-words">{describeOrientation(run.direction, Number(orientation))}</span>
+          ) : null}
         </label>
       ) : null}
       {hasBranch ? (

@@ -4,7 +4,9 @@ import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema
 import type { SpoolNode } from '../../../../shared/schemas/spool-design-node.schema';
 import { NPS_VALUES } from '../../../../shared/standards/nps';
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
-import { setEnd, setFlangeBoltRotation, setNodeProperties } from '../model/commands/edit-node';
+import { endWords, setEnd, setFlangeBoltRotation, setNodeProperties } from '../model/commands/edit-node';
+import { useUserNames } from '../hooks/use-user-names';
+import { describeOrientation, orientationReference } from '../model/orientation-words';
 import type { EditorModel } from '../model/editor-model';
 import { END_OPTIONS, endFromChoice, type EndChoice } from './end-options';
 import { Fact, PanelButton, PanelSection, SmallSelect, npsOptions } from './panel-bits';
@@ -25,6 +27,7 @@ const KIND_WORDS: Record<SpoolNode['kind'], string> = {
 /** Properties of a selected node's component, editable where the document allows. */
 export function NodeProperties({
   model,
+  design,
   result,
   node,
   units,
@@ -49,11 +52,15 @@ export function NodeProperties({
     setRotation(node.kind === 'end' && 'boltRotationDeg' in node.end && node.end.boltRotationDeg !== undefined ? String(node.end.boltRotationDeg) : '');
   }
   const p = component?.position;
+  const names = useUserNames(result, design);
+  const headerAxis = component && (component.shape.type === 'branch-connection' || component.shape.type === 'set-on-branch') ? component.shape.headerAxis : null;
+  const placedOrientation = component?.shape.type === 'branch-connection' ? component.shape.orientationDeg : null;
+  const kindWords = node.kind === 'end' ? capitalise(endWords(node.end)) : KIND_WORDS[node.kind];
 
   return (
     <div className="flex flex-col gap-3" data-testid="node-properties">
       <PanelSection
-        title={`${KIND_WORDS[node.kind]} ${node.id}`}
+        title={`${kindWords} ${names.node(node.id)}`}
         actions={
           !readOnly ? (
             <PanelButton tone="danger" onClick={() => onDelete(node.id)} title="Delete (Delete key)" aria-keyshortcuts="Delete">
@@ -71,7 +78,7 @@ export function NodeProperties({
               label="End"
               value={node.end.type}
               disabled={readOnly}
-              onChange={(e) => model.edit((d) => setEnd(d, { nodeId: node.id, end: endFromChoice(e.target.value as EndChoice) }))}
+              onChange={(e) => model.edit((d) => setEnd(d, { nodeId: node.id, end: endFromChoice(e.target.value as EndChoice) }), { fit: { what: 'that end' } })}
               options={END_OPTIONS}
             />
             {node.end.type === 'weld-neck-flange' || node.end.type === 'slip-on-flange' ? (
@@ -202,7 +209,7 @@ export function NodeProperties({
 
         {node.kind === 'half-coupling' || node.kind === 'branch-outlet' ? (
           <label className="flex flex-col gap-0.5 text-xs font-semibold text-ink-700">
-            Orientation, ° clockwise looking along the header, 0 = top
+            {headerAxis ? orientationReference(headerAxis).fieldLabel : 'Orientation, ° clockwise looking along the header run; 0° = top of pipe (plant north on a vertical run)'}
             <input
               defaultValue={node.orientationDeg ?? ''}
               key={`${node.id}-${node.orientationDeg ?? ''}`}
@@ -224,6 +231,7 @@ export function NodeProperties({
           {component?.ends.map((e, i) => (
             <Fact key={i} label={`Take-off, end ${i + 1} (${e.joint})`} value={e.takeOffMm === null ? '—' : formatLength(e.takeOffMm, units)} />
           ))}
+          {headerAxis && placedOrientation !== null ? <Fact label="Orientation" value={describeOrientation(headerAxis, placedOrientation)} /> : null}
           {component?.massKg ? <Fact label="Weight (est.)" value={`${component.massKg.toFixed(1)} kg`} /> : null}
           {flange ? (
             <>
@@ -240,4 +248,8 @@ export function NodeProperties({
 
 function fmtCoord(mm: number, units: LengthUnits): string {
   return formatLength(mm, units).replace(' mm', '');
+}
+
+function capitalise(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
 }

@@ -5,6 +5,7 @@ import type { LengthUnits } from '../../../../shared/units/length-format';
 import { cn } from '../../../lib/cn';
 import type { EditorModel } from '../model/editor-model';
 import type { Selection } from '../model/editor-selection';
+import { useUserNames } from '../hooks/use-user-names';
 import { ChecksPanel } from './ChecksPanel';
 import { CutListPanel } from './CutListPanel';
 import { FlangesPanel } from './FlangesPanel';
@@ -34,6 +35,7 @@ export function ResultTabs({
   const warnings = result.issues.length - errors;
   const flangeProblems = result.flanges.filter((f) => f.correction).length + result.flangePairs.filter((p) => p.withinTolerance === false).length;
   const onSelect = (s: Selection) => model.select(s);
+  const names = useUserNames(result, design);
   const tabs: { id: Tab; label: string; badge?: string; tone?: 'bad' | 'warn' }[] = [
     { id: 'cut', label: 'Cut list', badge: String(result.pieces.length) },
     { id: 'welds', label: 'Welds', badge: String(result.welds.length) },
@@ -74,9 +76,9 @@ export function ResultTabs({
       </div>
       <div role="tabpanel" id={`result-panel-${tab}`} aria-labelledby={`result-tab-${tab}`} className="max-h-80 overflow-auto">
         {tab === 'cut' ? <CutListPanel result={result} units={units} selection={selection} onSelect={onSelect} /> : null}
-        {tab === 'welds' ? <WeldListPanel result={result} onSelect={onSelect} /> : null}
-        {tab === 'checks' ? <ChecksPanel result={result} design={design} onSelect={onSelect} /> : null}
-        {tab === 'flanges' ? <FlangesPanel model={model} result={result} units={units} readOnly={readOnly} onSelect={onSelect} /> : null}
+        {tab === 'welds' ? <WeldListPanel result={result} names={names} onSelect={onSelect} /> : null}
+        {tab === 'checks' ? <ChecksPanel result={result} design={design} names={names} onSelect={onSelect} /> : null}
+        {tab === 'flanges' ? <FlangesPanel model={model} result={result} names={names} units={units} readOnly={readOnly} onSelect={onSelect} /> : null}
         {tab === 'weight' ? <WeightPanel result={result} units={units} /> : null}
       </div>
     </section>

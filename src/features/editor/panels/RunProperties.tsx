@@ -7,6 +7,7 @@ import { formatLength, type LengthUnits } from '../../../../shared/units/length-
 import { setLineSize, setRunDirection, setRunLength, setRunProperties } from '../model/commands/edit-run';
 import type { EditorModel } from '../model/editor-model';
 import { effectiveNps } from '../model/line-size';
+import { useUserNames } from '../hooks/use-user-names';
 import { PLANT_AXES, axisOf, describeDirection } from '../model/plant-directions';
 import { AxisPicker } from './AxisPicker';
 import { InsertOnRunForm, type InsertType } from './InsertOnRunForm';
@@ -44,6 +45,7 @@ export function RunProperties({
   const placed = result?.runs.find((r) => r.runId === run.id) ?? null;
   const piece = result?.pieces.find((p) => p.runIds.includes(run.id)) ?? null;
   const nps = effectiveNps(design, run.id);
+  const names = useUserNames(result, design);
   const [lengthMm, setLengthMm] = useState<number | null>(run.length.mm);
   const [kind, setKind] = useState<RunLengthKind>(run.length.kind);
   const [heat, setHeat] = useState(run.heat ?? '');
@@ -67,7 +69,7 @@ export function RunProperties({
   return (
     <div className="flex flex-col gap-3" data-testid="run-properties">
       <PanelSection
-        title={`Run ${run.id}`}
+        title={`Run ${names.run(run.id)}${piece ? ` (${piece.mark})` : ''}`}
         actions={
           !readOnly ? (
             <PanelButton tone="danger" onClick={() => onDelete(run.id)} title="Delete this run and everything downstream (Delete)" aria-keyshortcuts="Delete">

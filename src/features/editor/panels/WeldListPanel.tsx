@@ -1,10 +1,11 @@
 import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import type { Selection } from '../model/editor-selection';
+import type { UserNames } from '../model/user-names';
 
 const TYPE_WORDS = { butt: 'Butt', socket: 'Socket', branch: 'Branch', flange: 'Flange', 'slip-on-fillet': 'Slip-on fillet' } as const;
 
 /** The weld map as a list: every joint numbered, shop or field, with its size. */
-export function WeldListPanel({ result, onSelect }: { result: SpoolResult; onSelect: (s: Selection) => void }) {
+export function WeldListPanel({ result, names, onSelect }: { result: SpoolResult; names: UserNames; onSelect: (s: Selection) => void }) {
   if (result.welds.length === 0) return <p className="p-3 text-sm text-steel-600">No welds yet.</p>;
   const field = result.welds.filter((w) => w.location === 'field').length;
   return (
@@ -26,7 +27,7 @@ export function WeldListPanel({ result, onSelect }: { result: SpoolResult; onSel
             <td className="px-2 py-1.5">{TYPE_WORDS[w.type]}</td>
             <td className="px-2 py-1.5 font-mono">{w.nps}"</td>
             <td className="px-2 py-1.5">{w.location === 'field' ? 'Field' : 'Shop'}</td>
-            <td className="px-2 py-1.5 text-xs text-steel-700">{w.joins}</td>
+            <td className="px-2 py-1.5 text-xs text-steel-700">{names.text(w.joins)}</td>
           </tr>
         ))}
       </tbody>
