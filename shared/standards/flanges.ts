@@ -23,7 +23,16 @@ export function isSupportedFlangeClass(value: unknown): value is FlangeClass {
 
 /** The refusal for a class without a table: names the class and the supported ones. */
 export function unsupportedFlangeClassMessage(value: unknown): string {
-  return `ASME B16.5 Class ${String(value)} is not supported: Tackline has flange tables for ${SUPPORTED_FLANGE_CLASSES_TEXT} only`;
+  // Echo a short, printable form only: the value may be anything a client sent.
+  const shown =
+    typeof value === 'number' && Number.isFinite(value) && Math.abs(value) < 1e6
+      ? String(value)
+      : typeof value === 'string' && /^[0-9]{1,6}$/.test(value)
+        ? value
+        : null;
+  return shown === null
+    ? `The flange class must be one of ASME B16.5 ${SUPPORTED_FLANGE_CLASSES_TEXT}: Tackline has no other flange tables`
+    : `ASME B16.5 Class ${shown} is not supported: Tackline has flange tables for ${SUPPORTED_FLANGE_CLASSES_TEXT} only`;
 }
 export const FLANGE_TYPES = ['weld-neck', 'slip-on', 'blind'] as const satisfies readonly FlangeType[];
 

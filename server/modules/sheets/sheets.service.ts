@@ -36,7 +36,8 @@ export function jobSpecOverrides(job: Pick<Job, 'spec'>): SpecOverrides {
   };
   const schedule = scheduleSchema.safeParse(job.spec.schedule);
   if (schedule.success) out.schedule = schedule.data;
-  if (job.spec.flangeClass === 150 || job.spec.flangeClass === 300) out.flangeClass = job.spec.flangeClass;
+  // Passed on as stored, never swapped for another: the engine refuses a class without a table.
+  out.flangeClass = job.spec.flangeClass;
   return out;
 }
 
