@@ -8,6 +8,7 @@
  * - a length that cannot be computed (bad geometry, missing table data) is `null`,
  *   never negative, never NaN; the reason is in `issues`.
  */
+import type { FlangeClass } from '../standards/flanges';
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import type { SpoolNodeKind } from '../schemas/spool-design-node.schema';
 import type { RunLengthKind } from '../schemas/spool-design-run.schema';
@@ -24,7 +25,7 @@ export type ResolvedSpec = {
   fittingMaterial: string;
   flangeMaterial: string;
   schedule: Schedule;
-  flangeClass: 150 | 300;
+  flangeClass: FlangeClass;
   rootGapMm: number;
   sawKerfMm: number;
   minPieceLengthMm: number;
@@ -242,7 +243,7 @@ export type FlangeOrientation = {
   nodeId: string;
   type: 'weld-neck-flange' | 'slip-on-flange';
   nps: Nps;
-  flangeClass: 150 | 300;
+  flangeClass: FlangeClass;
   boltCount: number | null;
   boltCircleMm: number | null;
   faceCentre: Vec3;

@@ -22,6 +22,7 @@ import { roundResult } from './round-result';
 import { WEIGHT_CAUTION, computeWeights } from './weights';
 import { buildWeldList } from './weld-list';
 import { reportUnconfirmed, unconfirmedSink } from './unconfirmed-data';
+import { isSupportedFlangeClass, unsupportedFlangeClassMessage } from '../standards/flanges';
 
 /** Geometric tolerances. */
 export type EngineTolerances = {
@@ -88,6 +89,11 @@ export function computeSpool(design: unknown, options: ComputeOptions = {}): Spo
 function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult {
   const issues: IssueSink = [];
   const spec = resolveSpec(design, options.jobSpec);
+  // A class without a table (a job stored before the schema refused it) is refused here
+  // too: never laid out as another class.
+  if (!isSupportedFlangeClass(spec.flangeClass)) {
+    addError(issues, 'standard-data-missing', `Spec: ${unsupportedFlangeClassMessage(spec.flangeClass)}`);
+  }
   const angleDeg = options.tolerances?.angleDeg ?? DEFAULT_ANGLE_TOLERANCE_DEG;
   const closeCoupleOverride = options.tolerances?.closeCoupleMm;
 

@@ -4,9 +4,9 @@ import { scheduleSchema } from '../standards/pipe-schedules';
 
 /**
  * A job's default spec as engine overrides: the one translation the editor, the sheets and
- * the revision service all use. Values the design tables do not carry (a schedule or class
- * without data) are left to the design and built-in defaults, so the engine never sees an
- * unknown value.
+ * the revision service all use. A schedule the pipe tables do not carry is left to the
+ * design and built-in defaults; the flange class is passed on as stored, never swapped for
+ * another (the engine refuses a class without a table).
  */
 export function jobSpecOverrides(spec: Job['spec'] | undefined): SpecOverrides {
   if (!spec) return {};
@@ -14,7 +14,7 @@ export function jobSpecOverrides(spec: Job['spec'] | undefined): SpecOverrides {
   return {
     material: spec.material,
     ...(schedule.success ? { schedule: schedule.data } : {}),
-    ...(spec.flangeClass === 150 || spec.flangeClass === 300 ? { flangeClass: spec.flangeClass } : {}),
+    flangeClass: spec.flangeClass,
     rootGapMm: spec.rootGapMm,
     sawKerfMm: spec.sawKerfMm,
     minPieceLengthMm: spec.minPieceLengthMm,

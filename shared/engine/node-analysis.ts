@@ -2,6 +2,7 @@
  * Types shared by the take-off steps: what the engine knows about each node once its
  * standards dimensions are looked up, before anything is placed in space.
  */
+import type { FlangeClass } from '../standards/flanges';
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import type { Nps } from '../standards/nps';
@@ -95,7 +96,7 @@ export type NodeDetail =
   | {
       type: 'flange';
       flangeType: 'weld-neck-flange' | 'slip-on-flange';
-      flangeClass: 150 | 300;
+      flangeClass: FlangeClass;
       blind: boolean;
       odMm: number | null;
       thicknessMm: number | null;

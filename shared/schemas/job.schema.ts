@@ -1,6 +1,9 @@
 import { z } from 'zod';
 import { idSchema, timestampSchema } from './id.schema';
 import { listQuerySchema, queryBooleanSchema } from './list-query.schema';
+import { flangeClassSchema } from './spool-design-primitives.schema';
+
+export { flangeClassSchema };
 
 /** Units a job's dimensions are shown in: millimetres, or feet-inches to 1/16". */
 export const jobUnitsSchema = z.enum(['mm', 'ft-in']);
@@ -12,20 +15,11 @@ export const jobStatusSchema = z.enum(['active', 'on-hold', 'complete', 'archive
 /** Job status. */
 export type JobStatus = z.infer<typeof jobStatusSchema>;
 
-/** ASME B16.5 flange pressure classes. */
-export const flangeClassSchema = z.union([
-  z.literal(150),
-  z.literal(300),
-  z.literal(400),
-  z.literal(600),
-  z.literal(900),
-  z.literal(1500),
-  z.literal(2500),
-]);
-
 /**
  * A job's default spec, applied to new spools: pipe material, wall schedule,
  * flange class, and the shop allowances used in cut lengths (all in millimetres).
+ * The flange class is one Tackline has ASME B16.5 tables for (150, 300, 600); any other
+ * is refused with that list, never printed as another class.
  */
 export const jobSpecSchema = z
   .object({

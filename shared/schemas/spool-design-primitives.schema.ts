@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { unsupportedFlangeClassMessage } from '../standards/flanges';
 
 /**
  * A 3D vector or point in plant coordinates, millimetres: x = east, y = north, z = up.
@@ -31,9 +32,12 @@ export const elementIdSchema = z
 /** A node or run id. */
 export type ElementId = z.infer<typeof elementIdSchema>;
 
-/** ASME B16.5 pressure class carried by Tackline's flange tables. */
-export const flangeClassSchema = z.union([z.literal(150), z.literal(300)], {
-  error: () => 'Flange class must be 150 or 300',
+/**
+ * ASME B16.5 pressure class carried by Tackline's flange tables. Any other class is refused
+ * with the list of supported ones: a class without a table is never read as another.
+ */
+export const flangeClassSchema = z.union([z.literal(150), z.literal(300), z.literal(600)], {
+  error: (issue) => unsupportedFlangeClassMessage(issue.input),
 });
 
 /** Elbow radius: long = 1.5 × NPS, short = 1.0 × NPS (ASME B16.9). */

@@ -79,17 +79,28 @@ function rows(raw: readonly Raw[]): FlangeRow[] {
   }));
 }
 
-/** Sources of the S values in each class table. */
+/**
+ * Where each class table's values come from: the standard, table and edition only (the
+ * row notes and statuses say how far each value is confirmed).
+ */
 export const FLANGE_SOURCES = {
-  150: 'ASME B16.5-2009 Table 7 (drilling templates, Class 150) reproduction; tf and both Y = the pre-2003 tabulated values (Scribd/pdfcoffee Class 150 forged-flange table, which include a 1.6 mm face) less the face, agreeing with the B16.5 metric values within 0.6 mm; X and R from the same table',
-  300: 'ASME B16.5 Class 300: zaffertec "ANSI B16.5 Forged Flanges Class 300" (NPS 1/2–3, thickness and Y excluding the face, converted from inches); NPS 4–8 bolt circle and count confirmed by the B16.36 Class 400 orifice table (same pattern); the rest from memory',
+  150: 'ASME B16.5-2009 Table 7 (Class 150 drilling); tf, Y, X and R from the pre-2003 Class 150 dimension table less the 1.6 mm face',
+  300: 'ASME B16.5 Class 300 dimension table, pre-2003 edition converted from inches (NPS 1/2–3); NPS 4–8 drilling as ASME B16.36 Class 400 (same pattern); the rest from memory',
+  600: 'ASME B16.5-2013 Table 15 (Class 600 drilling); Table 16 body dimensions from memory',
+} as const;
+
+/** Table names as users see them, one per class ("ASME B16.5 Class 150"). */
+export const FLANGE_TABLE_NAMES = {
+  150: 'ASME B16.5 Class 150',
+  300: 'ASME B16.5 Class 300',
+  600: 'ASME B16.5 Class 600',
 } as const;
 
 // Columns: nps, O, W, bolts, hole, bolt, tf, Y(WN), Y(SO), X, R, drilling, Y(WN), body status
 // prettier-ignore
 const C150: readonly Raw[] = [
-  ['1/2', 90, 60.3, 4, '5/8', '1/2', 9.6, 46, 14, 30, 34.9, 'M', 'C', 'C'],
-  ['3/4', 100, 69.9, 4, '5/8', '1/2', 11.2, 51, 14, 38, 42.9, 'M', 'C', 'C'],
+  ['1/2', 90, 60.3, 4, '5/8', '1/2', 9.6, 46, 14, 30, 34.9, 'S', 'C', 'C'],
+  ['3/4', 100, 69.9, 4, '5/8', '1/2', 11.2, 51, 14, 38, 42.9, 'S', 'C', 'C'],
   ['1', 110, 79.4, 4, '5/8', '1/2', 12.7, 54, 16, 49, 50.8, 'S', 'C', 'C'],
   ['1-1/4', 115, 88.9, 4, '5/8', '1/2', 14.3, 56, 19, 59, 63.5, 'S', 'C', 'C'],
   ['1-1/2', 125, 98.4, 4, '5/8', '1/2', 15.9, 60, 21, 65, 73.0, 'S', 'C', 'C'],
@@ -135,8 +146,42 @@ const C300: readonly Raw[] = [
   ['24', 915, 812.8, 24, '1-5/8', '1-1/2', 68.3, 167, 105, 702, 692.2, 'M', 'M', 'M'],
 ];
 
-/** ASME B16.5 Class 150 and Class 300 flange rows, 2003+ raised-face convention. */
-export const FLANGE_TABLE: Readonly<Record<150 | 300, readonly FlangeRow[]>> = {
+const C600_DRILLING =
+  'OD, bolt circle and bolt count as B16.5 Table 15; hole and bolt diameters from memory, agreeing with the part of the table that could be read';
+const C600_BODY =
+  'tf, Y, X and R from memory (the inch values converted); for Class 400 and above the 7 mm raised face is not included in tf or Y';
+
+// Class 600: ASME B16.5 Table 15 drilling; NPS 3-1/2 left out (not an Nps here).
+// prettier-ignore
+const C600: readonly Raw[] = [
+  ['1/2', 95, 66.7, 4, '5/8', '1/2', 14.3, 52, 22, 38, 34.9, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['3/4', 115, 82.6, 4, '3/4', '5/8', 15.9, 57, 25, 48, 42.9, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['1', 125, 88.9, 4, '3/4', '5/8', 17.5, 62, 27, 54, 50.8, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['1-1/4', 135, 98.4, 4, '3/4', '5/8', 20.7, 67, 29, 64, 63.5, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['1-1/2', 155, 114.3, 4, '7/8', '3/4', 22.3, 70, 32, 70, 73.0, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['2', 165, 127.0, 8, '3/4', '5/8', 25.4, 73, 37, 84, 92.1, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['2-1/2', 190, 149.2, 8, '7/8', '3/4', 28.6, 79, 41, 100, 104.8, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['3', 210, 168.3, 8, '7/8', '3/4', 31.8, 83, 46, 117, 127.0, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['4', 275, 215.9, 8, '1', '7/8', 38.1, 102, 54, 152, 157.2, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['5', 330, 266.7, 8, '1-1/8', '1', 44.5, 114, 60, 189, 185.7, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['6', 355, 292.1, 12, '1-1/8', '1', 47.7, 117, 67, 222, 215.9, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['8', 420, 349.2, 12, '1-1/4', '1-1/8', 55.6, 133, 76, 273, 269.9, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['10', 510, 431.8, 16, '1-3/8', '1-1/4', 63.5, 152, 86, 343, 323.8, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['12', 560, 489.0, 20, '1-3/8', '1-1/4', 66.7, 156, 92, 400, 381.0, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['14', 605, 527.0, 20, '1-1/2', '1-3/8', 69.9, 165, 94, 432, 412.8, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['16', 685, 603.2, 20, '1-5/8', '1-1/2', 76.2, 178, 106, 495, 469.9, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['18', 745, 654.0, 20, '1-3/4', '1-5/8', 82.6, 184, 117, 546, 533.4, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['20', 815, 723.9, 24, '1-3/4', '1-5/8', 88.9, 190, 127, 610, 584.2, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+  ['24', 940, 838.2, 24, '2', '1-7/8', 101.6, 203, 140, 718, 692.2, 'S~', 'M', 'M', `${C600_DRILLING}; ${C600_BODY}`],
+];
+
+/**
+ * ASME B16.5 Class 150, 300 and 600 flange rows. Classes 150 and 300 follow the 2003+
+ * raised-face convention (tf and Y exclude the 2 mm face); Class 600's tf and Y exclude its
+ * 7 mm face in every edition.
+ */
+export const FLANGE_TABLE: Readonly<Record<150 | 300 | 600, readonly FlangeRow[]>> = {
   150: rows(C150),
   300: rows(C300),
+  600: rows(C600),
 };

@@ -19,13 +19,13 @@ export type ElbowRow = {
   sr180?: { o: Cell; k: Cell };
 };
 
-/** Where each column's S values come from. */
+/** Which table of the standard each column is (standard and table only, as users see it). */
 export const ELBOW_SOURCES = {
-  lr90: "ASME B16.9 LR 90° A: a fitting maker's elbow catalogue (exact inch conversions) and the weldolets dimension sheet; NPS 5/14/18/20 also in the wermac B16.9 reducing-elbow table (same A)",
-  lr45: "ASME B16.9 LR 45° B: a fitting maker's elbow catalogue (exact inch conversions) and the weldolets dimension sheet",
-  sr90: 'ASME B16.9 SR 90° A: wermac "Butt Weld Elbows 90°-SR" table',
-  lr180: 'ASME B16.9 LR 180° O and K: wermac "Butt Weld Elbows 180° LR and SR" table',
-  sr180: 'ASME B16.9 SR 180° O and K: wermac 180° LR and SR table and the pipingengineer.org SR return table',
+  lr90: 'ASME B16.9 long-radius 90° elbows, centre-to-end A',
+  lr45: 'ASME B16.9 long-radius 45° elbows, centre-to-end B',
+  sr90: 'ASME B16.9 short-radius 90° elbows, centre-to-end A',
+  lr180: 'ASME B16.9 long-radius 180° returns, O and K',
+  sr180: 'ASME B16.9 short-radius 180° returns, O and K',
 } as const;
 
 /**

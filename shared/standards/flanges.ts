@@ -1,17 +1,39 @@
-import { FLANGE_SOURCES, FLANGE_TABLE, type FlangeRow } from './b16-5-flange-table';
-import { weakestStatus, type DataStatus } from './data-status';
+import { FLANGE_SOURCES, FLANGE_TABLE, FLANGE_TABLE_NAMES, type FlangeRow } from './b16-5-flange-table';
+import { weakestStatus, withStatusNote, type DataStatus } from './data-status';
 import { found, missing, type Lookup } from './lookup-result';
 import type { Nps } from './nps';
 import { pipeDimensions } from './pipe-schedules';
 
-/** ASME B16.5 pressure classes carried here. */
-export type FlangeClass = 150 | 300;
+/** ASME B16.5 pressure classes carried here (the only ones Tackline lays out). */
+export type FlangeClass = 150 | 300 | 600;
 
 /** Flange types carried here. */
 export type FlangeType = 'weld-neck' | 'slip-on' | 'blind';
 
 /** Classes and types as arrays, for schemas and pickers. */
-export const FLANGE_CLASSES = [150, 300] as const satisfies readonly FlangeClass[];
+export const FLANGE_CLASSES = [150, 300, 600] as const satisfies readonly FlangeClass[];
+
+/** "Classes 150, 300 and 600": the supported classes as a refusal names them. */
+export const SUPPORTED_FLANGE_CLASSES_TEXT = `Classes ${FLANGE_CLASSES.slice(0, -1).join(', ')} and ${String(FLANGE_CLASSES[FLANGE_CLASSES.length - 1])}`;
+
+/** Whether Tackline has an ASME B16.5 table for `value` (a number from a form or a stored job). */
+export function isSupportedFlangeClass(value: unknown): value is FlangeClass {
+  return (FLANGE_CLASSES as readonly unknown[]).includes(value);
+}
+
+/** The refusal for a class without a table: names the class and the supported ones. */
+export function unsupportedFlangeClassMessage(value: unknown): string {
+  // Echo a short, printable form only: the value may be anything a client sent.
+  const shown =
+    typeof value === 'number' && Number.isFinite(value) && Math.abs(value) < 1e6
+      ? String(value)
+      : typeof value === 'string' && /^[0-9]{1,6}$/.test(value)
+        ? value
+        : null;
+  return shown === null
+    ? `The flange class must be one of ASME B16.5 ${SUPPORTED_FLANGE_CLASSES_TEXT}: Tackline has no other flange tables`
+    : `ASME B16.5 Class ${shown} is not supported: Tackline has flange tables for ${SUPPORTED_FLANGE_CLASSES_TEXT} only`;
+}
 export const FLANGE_TYPES = ['weld-neck', 'slip-on', 'blind'] as const satisfies readonly FlangeType[];
 
 /**
@@ -21,11 +43,22 @@ export const FLANGE_TYPES = ['weld-neck', 'slip-on', 'blind'] as const satisfies
 export const RAISED_FACE_MM = 2;
 
 /**
+ * Raised-face height for Class 400 and above in the B16.5 metric tables (7 mm; the inch
+ * tables say 0.25 in = 6.4 mm). ASME B16.5-2009 Fig. 7.
+ */
+export const RAISED_FACE_HIGH_CLASS_MM = 7;
+
+/** Raised-face height of a class, mm: 2 for Classes 150 and 300, 7 above. */
+export function raisedFaceHeightMm(flangeClass: FlangeClass): number {
+  return flangeClass <= 300 ? RAISED_FACE_MM : RAISED_FACE_HIGH_CLASS_MM;
+}
+
+/**
  * Which raised-face convention the flange data follows. Printed on sheets beside flange
  * dimensions so a checker using an older table is not misled.
  */
 export const RAISED_FACE_CONVENTION =
-  'ASME B16.5-2003 and later: flange thickness and length through hub exclude the raised face (2 mm for Classes 150 and 300), which is given separately. Older tables include a 1.6 mm face in both.';
+  'ASME B16.5-2003 and later: flange thickness and length through hub exclude the raised face (2 mm for Classes 150 and 300, 7 mm for Class 600), which is given separately. Older Class 150 and 300 tables include a 1.6 mm face in both.';
 
 /** Allowance added to the pipe wall for the slip-on setback (common practice, no source). */
 export const SLIP_ON_SETBACK_ALLOWANCE_MM = 3;
@@ -74,16 +107,30 @@ export type FlangeDimensions = {
    * (tf, X, R).
    */
   partStatus: { drilling: DataStatus; hubLength: DataStatus; body: DataStatus };
+  /**
+   * The standard and table as users see it ("ASME B16.5 Class 150"), followed by a plain
+   * warning when a value used is not confirmed against the standard.
+   */
   source: string;
+  /** Where the table's values come from, for developers (standard, table, edition, row note). */
+  tableSource: string;
 };
 
 /** Optional inputs: the wall of the pipe a slip-on receives (for its setback). */
 export type FlangeOptions = { pipeWallMm?: number };
 
-const BY_CLASS = {
+const BY_CLASS: Record<FlangeClass, Map<Nps, FlangeRow>> = {
   150: new Map<Nps, FlangeRow>(FLANGE_TABLE[150].map((r) => [r.nps, r])),
   300: new Map<Nps, FlangeRow>(FLANGE_TABLE[300].map((r) => [r.nps, r])),
+  600: new Map<Nps, FlangeRow>(FLANGE_TABLE[600].map((r) => [r.nps, r])),
 };
+
+/** The class's row for a size; a class with no table is refused, never read as another. */
+export function flangeRow(nps: Nps, flangeClass: FlangeClass): Lookup<FlangeRow> {
+  if (!isSupportedFlangeClass(flangeClass)) return missing(unsupportedFlangeClassMessage(flangeClass));
+  const row = BY_CLASS[flangeClass].get(nps);
+  return row ? found(row) : missing(`No ASME B16.5 Class ${String(flangeClass)} flange data for NPS ${nps}`);
+}
 
 /** Inch fraction text ('1-1/8', '7/8', '1') to a number of inches. */
 export function inchFractionToNumber(text: string): number {
@@ -103,8 +150,10 @@ export function flangeDimensions(
   type: FlangeType,
   options: FlangeOptions = {},
 ): Lookup<FlangeDimensions> {
-  const row = BY_CLASS[flangeClass]?.get(nps);
+  if (!isSupportedFlangeClass(flangeClass)) return missing(unsupportedFlangeClassMessage(flangeClass));
+  const row = BY_CLASS[flangeClass].get(nps);
   if (!row) return missing(`No ASME B16.5 Class ${String(flangeClass)} ${type} flange data for NPS ${nps}`);
+  const named = (status: DataStatus) => withStatusNote(FLANGE_TABLE_NAMES[flangeClass], status);
   const base = {
     odMm: row.odMm,
     boltCircleMm: row.boltCircleMm,
@@ -113,9 +162,9 @@ export function flangeDimensions(
     boltHoleDiaIn: row.holeIn,
     boltSizeIn: row.boltIn,
     thicknessMm: row.tfMm,
-    raisedFaceMm: RAISED_FACE_MM,
+    raisedFaceMm: raisedFaceHeightMm(flangeClass),
     raisedFaceDiaMm: row.raisedFaceDiaMm,
-    source: FLANGE_SOURCES[flangeClass] + (row.note ? ` (NPS ${nps}: ${row.note})` : ''),
+    tableSource: FLANGE_SOURCES[flangeClass] + (row.note ? ` (NPS ${nps}: ${row.note})` : ''),
   };
   switch (type) {
     case 'weld-neck':
@@ -124,6 +173,7 @@ export function flangeDimensions(
         hubLengthMm: row.yWeldNeckMm,
         hubDiaAtBaseMm: row.hubBaseMm,
         status: weakestStatus(row.drillingStatus, row.yWeldNeckStatus, row.bodyStatus),
+        source: named(weakestStatus(row.drillingStatus, row.yWeldNeckStatus, row.bodyStatus)),
         partStatus: { drilling: row.drillingStatus, hubLength: row.yWeldNeckStatus, body: row.bodyStatus },
       });
     case 'slip-on': {
@@ -139,6 +189,7 @@ export function flangeDimensions(
         hubDiaAtBaseMm: row.hubBaseMm,
         slipOnSetbackMm: slipOnSetbackMm(wall),
         status: weakestStatus(row.drillingStatus, row.bodyStatus),
+        source: named(weakestStatus(row.drillingStatus, row.bodyStatus)),
         partStatus: { drilling: row.drillingStatus, hubLength: row.bodyStatus, body: row.bodyStatus },
       });
     }
@@ -147,6 +198,7 @@ export function flangeDimensions(
         ...base,
         hubLengthMm: row.tfMm,
         status: weakestStatus(row.drillingStatus, row.bodyStatus),
+        source: named(weakestStatus(row.drillingStatus, row.bodyStatus)),
         partStatus: { drilling: row.drillingStatus, hubLength: row.bodyStatus, body: row.bodyStatus },
       });
   }

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { weakestStatus, type DataStatus } from './data-status';
+import { weakestStatus, withStatusNote, type DataStatus } from './data-status';
 import { found, missing, type Lookup } from './lookup-result';
 import type { Nps } from './nps';
 import { PIPE_TABLE, type PipeRow } from './pipe-schedule-table';
@@ -39,7 +39,10 @@ export type PipeDimensions = {
   status: DataStatus;
   /** Status of the wall alone (the OD's is `status` when the wall is stronger). */
   wallStatus: DataStatus;
+  /** "ASME B36.10M", with the plain warning when a value used is not confirmed. */
   source: string;
+  /** Which tables the row came from, and caveats, for developers. */
+  tableSource: string;
 };
 
 /** B36.10M plain-end mass constant for carbon steel, kg/m per mm² of (D − t)·t. */
@@ -65,7 +68,8 @@ export function pipeDimensions(nps: Nps, schedule: Schedule): Lookup<PipeDimensi
     massKgPerM: round(B3610_MASS_CONSTANT * (d - wallMm) * wallMm, 2),
     status: weakestStatus(row.odStatus, wallStatus),
     wallStatus,
-    source: row.source,
+    source: withStatusNote('ASME B36.10M', weakestStatus(row.odStatus, wallStatus)),
+    tableSource: row.source,
   });
 }
 
@@ -73,7 +77,7 @@ export function pipeDimensions(nps: Nps, schedule: Schedule): Lookup<PipeDimensi
 export function pipeOdMm(nps: Nps): Lookup<{ odMm: number; status: DataStatus; source: string }> {
   const row = ROWS.get(nps);
   if (!row) return missing(`No ASME B36.10M pipe data for NPS ${nps}`);
-  return found({ odMm: row.odMm, status: row.odStatus, source: row.source });
+  return found({ odMm: row.odMm, status: row.odStatus, source: withStatusNote('ASME B36.10M', row.odStatus) });
 }
 
 /** "Sch 40" for numbers, "STD" for weight classes: how a sheet writes it. */

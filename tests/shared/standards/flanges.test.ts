@@ -15,7 +15,7 @@ function value<T>(r: { ok: true; value: T } | { ok: false; missing: string }): T
 }
 
 describe('flangeDimensions Class 150 (ASME B16.5)', () => {
-  // ASME B16.5-2009 Table 7, drilling templates for Class 150 (pdfslide reproduction): exact.
+  // ASME B16.5-2009 Table 7, drilling templates for Class 150 (a reproduction of the table): exact.
   // [NPS, OD mm, bolt circle mm, bolts, hole in, bolt in]
   const table7: Array<[Nps, number, number, number, string, string]> = [
     ['1', 110, 79.4, 4, '5/8', '1/2'],
@@ -50,7 +50,7 @@ describe('flangeDimensions Class 150 (ASME B16.5)', () => {
   });
 
   // Weld-neck length through hub in the pre-2003 tables, which include the 1.6 mm raised face
-  // (Scribd "Flanges-ANSI-pdf" Class 150 table, mm). Ours excludes it: Y + 1.6 should match within 0.6 mm.
+  // (a pre-2003 Class 150 forged-flange table, mm). Ours excludes it: Y + 1.6 should match within 0.6 mm.
   const pre2003Y: Array<[Nps, number]> = [
     ['1', 55.6],
     ['1-1/4', 57.2],
@@ -200,9 +200,13 @@ describe('flange conventions', () => {
     expect(value(flangeDimensions('6', 150, 'weld-neck')).slipOnSetbackMm).toBeUndefined();
   });
 
-  it('misses an unknown class with a sentence', () => {
-    const r = flangeDimensions('6', 600 as FlangeClass, 'weld-neck');
-    expect(r).toEqual({ ok: false, missing: 'No ASME B16.5 Class 600 weld-neck flange data for NPS 6' });
+  it('refuses a class without a table, naming the supported ones, never another class', () => {
+    const r = flangeDimensions('6', 900 as FlangeClass, 'weld-neck');
+    expect(r).toEqual({
+      ok: false,
+      missing:
+        'ASME B16.5 Class 900 is not supported: Tackline has flange tables for Classes 150, 300 and 600 only',
+    });
   });
 
   it('reads inch fractions', () => {

@@ -1,3 +1,4 @@
+import { FLANGE_CLASSES } from '../../../../shared/standards/flanges';
 import { useState } from 'react';
 import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema';
@@ -95,8 +96,7 @@ export function NodeProperties({
                   }}
                   options={[
                     { value: '', label: 'Spool spec' },
-                    { value: '150', label: 'Class 150' },
-                    { value: '300', label: 'Class 300' },
+                    ...FLANGE_CLASSES.map((c) => ({ value: String(c), label: `Class ${c}` })),
                   ]}
                 />
                 <form

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema';
+import { FLANGE_CLASSES, type FlangeClass } from '../../../../shared/standards/flanges';
 import { NPS_VALUES, type Nps } from '../../../../shared/standards/nps';
 import { SCHEDULE_VALUES, type Schedule } from '../../../../shared/standards/pipe-schedules';
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
@@ -39,11 +40,10 @@ export function SpoolSpecPanel({ model, design, result, units, readOnly }: { mod
           label="Flange class"
           value={spec.flangeClass ? String(spec.flangeClass) : ''}
           disabled={readOnly}
-          onChange={(e) => set({ flangeClass: e.target.value ? (Number(e.target.value) as 150 | 300) : null })}
+          onChange={(e) => set({ flangeClass: e.target.value ? (Number(e.target.value) as FlangeClass) : null })}
           options={[
             { value: '', label: 'job spec' },
-            { value: '150', label: 'Class 150' },
-            { value: '300', label: 'Class 300' },
+            ...FLANGE_CLASSES.map((c) => ({ value: String(c), label: `Class ${c}` })),
           ]}
         />
         <LengthInput

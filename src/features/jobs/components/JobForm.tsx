@@ -2,6 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, type ReactNode } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { jobCreateSchema, type Job, type JobCreate, type JobCreateInput } from '../../../../shared/schemas/job.schema';
+import { FLANGE_CLASSES, SUPPORTED_FLANGE_CLASSES_TEXT } from '../../../../shared/standards/flanges';
 import { Button } from '../../../components/ui/Button';
 import { InlineError } from '../../../components/ui/ErrorState';
 import { SelectField, TextField } from '../../../components/ui/Field';
@@ -55,7 +56,18 @@ function valuesOf(job: Job): JobCreateInput {
   };
 }
 
-const flangeClasses = [150, 300, 400, 600, 900, 1500, 2500].map((c) => ({ value: String(c), label: `Class ${c}` }));
+// Only the classes Tackline has ASME B16.5 tables for: the schema refuses any other.
+const supportedClassOptions = FLANGE_CLASSES.map((c) => ({ value: String(c), label: `Class ${c}` }));
+
+/**
+ * Class choices for a job. A job stored with a class Tackline has no table for keeps that
+ * class on screen, marked, so saving is refused with the reason rather than the select
+ * quietly showing another class.
+ */
+function flangeClassOptions(current: number | undefined): { value: string; label: string }[] {
+  if (current === undefined || (FLANGE_CLASSES as readonly number[]).includes(current)) return supportedClassOptions;
+  return [{ value: String(current), label: `Class ${current} (no tables: choose another)` }, ...supportedClassOptions];
+}
 const unitOptions = [
   { value: 'mm', label: 'Millimetres (mm)' },
   { value: 'ft-in', label: 'Feet-inches (to 1/16")' },
@@ -126,7 +138,8 @@ export function JobForm({ job, submitLabel, busy, error, onSubmit, onCancel, not
         <TextField label="Schedule / wall" mono error={errors.spec?.schedule?.message} {...register('spec.schedule')} />
         <SelectField
           label="Flange class (ASME B16.5)"
-          options={flangeClasses}
+          hint={`Tackline lays out ${SUPPORTED_FLANGE_CLASSES_TEXT} only`}
+          options={flangeClassOptions(job?.spec.flangeClass)}
           error={errors.spec?.flangeClass?.message}
           {...register('spec.flangeClass', { setValueAs: (v) => Number(v) })}
         />
