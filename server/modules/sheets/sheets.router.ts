@@ -1,5 +1,6 @@
 import { Router, type Response } from 'express';
 import { idParamsSchema } from '../../../shared/schemas/id.schema';
+import { AppError } from '../../common/app-error';
 import { ANY_ROLE, requireRole } from '../../common/auth.middleware';
 import { actorOf } from '../../common/session-actor';
 import { inputOf, validate } from '../../common/validate.middleware';
@@ -17,6 +18,12 @@ function sendPdf(res: Response, pdf: Buffer, filename: string): void {
   res.end(pdf);
 }
 
+/** A 503 from a busy renderer says when to come back. */
+function retryAfter(res: Response, err: unknown): never {
+  if (err instanceof AppError && err.status === 503) res.set('Retry-After', '10');
+  throw err;
+}
+
 /**
  * Printable sheets, for every role: the PDF is built completely before the first byte is
  * sent, so any failure is a JSON error and never a half-written PDF.
@@ -25,12 +32,16 @@ export function sheetsRouter(sheets: SheetsService): Router {
   const router = Router();
   router.get('/spools/:id/sheet.pdf', requireRole(...ANY_ROLE), validate(spoolSheet), async (req, res) => {
     const { params, query } = inputOf(res, spoolSheet);
-    const out = await sheets.spoolSheet(actorOf(req), params.id, query);
+    const out = await sheets
+      .spoolSheet(actorOf(req), params.id, query)
+      .catch((e: unknown) => retryAfter(res, e));
     sendPdf(res, out.pdf, out.filename);
   });
   router.get('/jobs/:id/saw-list.pdf', requireRole(...ANY_ROLE), validate(sawList), async (req, res) => {
     const { params, query } = inputOf(res, sawList);
-    const out = await sheets.sawList(actorOf(req), params.id, query);
+    const out = await sheets
+      .sawList(actorOf(req), params.id, query)
+      .catch((e: unknown) => retryAfter(res, e));
     sendPdf(res, out.pdf, out.filename);
   });
   return router;

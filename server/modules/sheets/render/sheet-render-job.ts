@@ -1,0 +1,124 @@
+import { computeSpool } from '../../../../shared/engine/compute-spool';
+import type { SpoolResult } from '../../../../shared/engine/compute-result';
+import type { PaperSize } from '../../../../shared/schemas/sheet-query.schema';
+import type { RevisionState } from '../../../../shared/schemas/revision.schema';
+import { spoolDesignSchema, type SpoolDesign } from '../../../../shared/schemas/spool-design.schema';
+import type { SpecOverrides } from '../../../../shared/schemas/spool-design-spec.schema';
+import type { LengthUnits } from '../../../../shared/units/length-format';
+import { revisionChanges } from '../pdf/revision-changes';
+import { renderSawList, type SawListInput } from '../pdf/saw-list';
+import type { SawListSpool } from '../pdf/saw-list-groups';
+import type { SheetHeader } from '../pdf/sheet-header';
+import { renderSpoolSheet } from '../pdf/spool-sheet';
+
+/**
+ * One sheet to draw, as plain data (it crosses to a render thread by structured clone):
+ * the stored designs as read from the database, and everything else the sheet prints.
+ * Validation and the engine run happen on the render thread too, so a large design never
+ * holds up the request thread.
+ */
+export type SheetRenderJob =
+  | {
+      kind: 'spool-sheet';
+      header: SheetHeader;
+      /** The printed revision's stored design (validated here). */
+      design: unknown;
+      /** The issued revision before it, for "changed since", when there is one. */
+      previous: { letter: string; design: unknown } | null;
+      jobSpec: SpecOverrides;
+      units: LengthUnits;
+      paper: PaperSize;
+    }
+  | {
+      kind: 'saw-list';
+      header: Omit<SawListInput, 'spools'>;
+      spools: { mark: string; revisionLetter: string; revisionState: RevisionState; design: unknown }[];
+      jobSpec: SpecOverrides;
+    };
+
+/** What a render answers: the PDF, or why the stored design cannot be drawn (a 422). */
+export type SheetRenderOutcome =
+  { ok: true; pdf: Uint8Array; pageCount: number } | { ok: false; message: string; details?: unknown };
+
+class UndrawableDesign extends Error {
+  constructor(
+    message: string,
+    readonly details: unknown,
+  ) {
+    super(message);
+  }
+}
+
+function parseStored(design: unknown, letter: string): SpoolDesign {
+  const parsed = spoolDesignSchema.safeParse(design);
+  if (!parsed.success) {
+    // Stored designs are validated on save; one that fails now predates a schema change.
+    throw new UndrawableDesign(
+      `Revision ${letter} does not hold a valid spool design, so no sheet can be drawn from it.`,
+      { issues: parsed.error.issues },
+    );
+  }
+  return parsed.data;
+}
+
+function compute(design: SpoolDesign, jobSpec: SpecOverrides): SpoolResult {
+  return computeSpool(design, { jobSpec, trusted: true });
+}
+
+async function renderSpool(
+  job: Extract<SheetRenderJob, { kind: 'spool-sheet' }>,
+): Promise<SheetRenderOutcome> {
+  const design = parseStored(job.design, job.header.revision.letter);
+  const result = compute(design, job.jobSpec);
+  let changes = null;
+  if (job.previous) {
+    // An older design that no longer reads gives no change list rather than no sheet.
+    const older = spoolDesignSchema.safeParse(job.previous.design);
+    if (older.success)
+      changes = revisionChanges(
+        compute(older.data, job.jobSpec),
+        result,
+        job.units,
+        job.previous.letter,
+        job.header.revision.letter,
+      );
+  }
+  const out = await renderSpoolSheet({
+    header: job.header,
+    design,
+    result,
+    units: job.units,
+    paper: job.paper,
+    changes,
+  });
+  return {
+    ok: true,
+    pdf: new Uint8Array(out.pdf.buffer, out.pdf.byteOffset, out.pdf.byteLength),
+    pageCount: out.pageCount,
+  };
+}
+
+async function renderSaw(job: Extract<SheetRenderJob, { kind: 'saw-list' }>): Promise<SheetRenderOutcome> {
+  const spools: SawListSpool[] = job.spools.map((s) => ({
+    mark: s.mark,
+    revisionLetter: s.revisionLetter,
+    revisionState: s.revisionState,
+    result: compute(parseStored(s.design, s.revisionLetter), job.jobSpec),
+  }));
+  const out = await renderSawList({ ...job.header, spools });
+  return {
+    ok: true,
+    pdf: new Uint8Array(out.pdf.buffer, out.pdf.byteOffset, out.pdf.byteLength),
+    pageCount: out.pageCount,
+  };
+}
+
+/** Validates, computes and draws one sheet. Runs on a render thread (or inline in tests). */
+export async function runSheetRenderJob(job: SheetRenderJob): Promise<SheetRenderOutcome> {
+  try {
+    return job.kind === 'spool-sheet' ? await renderSpool(job) : await renderSaw(job);
+  } catch (err) {
+    if (err instanceof UndrawableDesign) return { ok: false, message: err.message, details: err.details };
+    throw err;
+  }
+}
