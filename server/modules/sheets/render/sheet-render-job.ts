@@ -2,7 +2,14 @@ import { computeSpool } from '../../../../shared/engine/compute-spool';
 import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import type { PaperSize } from '../../../../shared/schemas/sheet-query.schema';
 import type { RevisionState } from '../../../../shared/schemas/revision.schema';
-import { spoolDesignSchema, type SpoolDesign } from '../../../../shared/schemas/spool-design.schema';
+import { z } from 'zod';
+import { spoolNodeSchema } from '../../../../shared/schemas/spool-design-node.schema';
+import { spoolRunSchema } from '../../../../shared/schemas/spool-design-run.schema';
+import {
+  spoolDesignObjectSchema,
+  spoolDesignSchema,
+  type SpoolDesign,
+} from '../../../../shared/schemas/spool-design.schema';
 import type { SpecOverrides } from '../../../../shared/schemas/spool-design-spec.schema';
 import type { LengthUnits } from '../../../../shared/units/length-format';
 import { revisionChanges } from '../pdf/revision-changes';
@@ -49,16 +56,40 @@ class UndrawableDesign extends Error {
   }
 }
 
-function parseStored(design: unknown, letter: string): SpoolDesign {
-  const parsed = spoolDesignSchema.safeParse(design);
-  if (!parsed.success) {
-    // Stored designs are validated on save; one that fails now predates a schema change.
-    throw new UndrawableDesign(
-      `Revision ${letter} does not hold a valid spool design, so no sheet can be drawn from it.`,
-      { issues: parsed.error.issues },
-    );
+/**
+ * Size limit before the design limits were lowered: a revision stored then (even issued) may
+ * hold up to this many nodes and must still print. The render thread's own time and memory
+ * limits bound the work.
+ */
+const STORED_BEFORE_LIMITS_MAX = 5000;
+const storedBeforeLimitsSchema = spoolDesignObjectSchema.extend({
+  nodes: z.array(spoolNodeSchema).min(1).max(STORED_BEFORE_LIMITS_MAX),
+  runs: z.array(spoolRunSchema).max(STORED_BEFORE_LIMITS_MAX),
+});
+
+function idsUnique(design: SpoolDesign): boolean {
+  const ids = new Set<string>();
+  for (const { id } of [...design.nodes, ...design.runs]) {
+    if (ids.has(id)) return false;
+    ids.add(id);
   }
-  return parsed.data;
+  return true;
+}
+
+/** The stored design, validated; one over today's size limits but otherwise valid still prints. */
+export function parseStoredDesign(design: unknown, letter: string): SpoolDesign {
+  const parsed = spoolDesignSchema.safeParse(design);
+  if (parsed.success) return parsed.data;
+  const sizeOnly = parsed.error.issues.every(
+    (i) => i.code === 'too_big' && i.path.length === 1 && (i.path[0] === 'nodes' || i.path[0] === 'runs'),
+  );
+  const older = sizeOnly ? storedBeforeLimitsSchema.safeParse(design) : null;
+  if (older?.success && idsUnique(older.data)) return older.data;
+  // Stored designs are validated on save; one that fails now predates a schema change.
+  throw new UndrawableDesign(
+    `Revision ${letter} does not hold a valid spool design, so no sheet can be drawn from it.`,
+    { issues: parsed.error.issues },
+  );
 }
 
 function compute(design: SpoolDesign, jobSpec: SpecOverrides): SpoolResult {
@@ -68,15 +99,20 @@ function compute(design: SpoolDesign, jobSpec: SpecOverrides): SpoolResult {
 async function renderSpool(
   job: Extract<SheetRenderJob, { kind: 'spool-sheet' }>,
 ): Promise<SheetRenderOutcome> {
-  const design = parseStored(job.design, job.header.revision.letter);
+  const design = parseStoredDesign(job.design, job.header.revision.letter);
   const result = compute(design, job.jobSpec);
   let changes = null;
   if (job.previous) {
     // An older design that no longer reads gives no change list rather than no sheet.
-    const older = spoolDesignSchema.safeParse(job.previous.design);
-    if (older.success)
+    let older: SpoolDesign | null;
+    try {
+      older = parseStoredDesign(job.previous.design, job.previous.letter);
+    } catch {
+      older = null;
+    }
+    if (older)
       changes = revisionChanges(
-        compute(older.data, job.jobSpec),
+        compute(older, job.jobSpec),
         result,
         job.units,
         job.previous.letter,
@@ -103,7 +139,7 @@ async function renderSaw(job: Extract<SheetRenderJob, { kind: 'saw-list' }>): Pr
     mark: s.mark,
     revisionLetter: s.revisionLetter,
     revisionState: s.revisionState,
-    result: compute(parseStored(s.design, s.revisionLetter), job.jobSpec),
+    result: compute(parseStoredDesign(s.design, s.revisionLetter), job.jobSpec),
   }));
   const out = await renderSawList({ ...job.header, spools });
   return {
