@@ -27,7 +27,7 @@ const envSchema = z.object({
   SHEET_RENDER_THREADS: z.coerce.number().int().min(1).max(64).optional(),
   SHEET_RENDER_TIMEOUT_MS: z.coerce.number().int().min(1).max(600_000).default(30_000),
   SHEET_RENDER_MEMORY_MB: z.coerce.number().int().min(64).max(16_384).default(512),
-  SHEET_RENDER_QUEUE: z.coerce.number().int().min(0).max(10_000).default(32),
+  SHEET_RENDER_QUEUE: z.coerce.number().int().min(0).max(10_000).default(16),
   SHEET_RENDER_WAIT_MS: z.coerce.number().int().min(1).max(600_000).default(20_000),
 });
 

@@ -1,5 +1,6 @@
 import { Router, type Response } from 'express';
 import { idParamsSchema } from '../../../shared/schemas/id.schema';
+import type { ErrorBody } from '../../../shared/schemas/error.schema';
 import { AppError } from '../../common/app-error';
 import { ANY_ROLE, requireRole } from '../../common/auth.middleware';
 import { actorOf } from '../../common/session-actor';
@@ -18,10 +19,15 @@ function sendPdf(res: Response, pdf: Buffer, filename: string): void {
   res.end(pdf);
 }
 
-/** A 503 from a busy renderer says when to come back. */
-function retryAfter(res: Response, err: unknown): never {
-  if (err instanceof AppError && err.status === 503) res.set('Retry-After', '10');
-  throw err;
+/**
+ * A busy renderer's 503 is answered here, with Retry-After, in the API's error shape: it is
+ * expected under load, so it is not logged as a server failure.
+ */
+function retryAfter(res: Response, err: unknown): null {
+  if (!(err instanceof AppError) || err.status !== 503) throw err;
+  const body: ErrorBody = { error: { code: err.code, message: err.message, details: err.details } };
+  res.status(503).set('Retry-After', '10').json(body);
+  return null;
 }
 
 /**
@@ -35,14 +41,14 @@ export function sheetsRouter(sheets: SheetsService): Router {
     const out = await sheets
       .spoolSheet(actorOf(req), params.id, query)
       .catch((e: unknown) => retryAfter(res, e));
-    sendPdf(res, out.pdf, out.filename);
+    if (out) sendPdf(res, out.pdf, out.filename);
   });
   router.get('/jobs/:id/saw-list.pdf', requireRole(...ANY_ROLE), validate(sawList), async (req, res) => {
     const { params, query } = inputOf(res, sawList);
     const out = await sheets
       .sawList(actorOf(req), params.id, query)
       .catch((e: unknown) => retryAfter(res, e));
-    sendPdf(res, out.pdf, out.filename);
+    if (out) sendPdf(res, out.pdf, out.filename);
   });
   return router;
 }

@@ -70,6 +70,7 @@ export class SheetsService {
   ) {}
 
   async spoolSheet(actor: SessionActor, spoolId: string, query: SpoolSheetQuery): Promise<RenderedPdf> {
+    this.renderer.admit();
     const spool = await this.spools.get(actor, spoolId);
     const job = await this.jobs.get(actor, spool.jobId);
     const history = await this.revisions.list(actor, spool.id);
@@ -111,6 +112,7 @@ export class SheetsService {
   }
 
   async sawList(actor: SessionActor, jobId: string, query: SawListQuery): Promise<RenderedPdf> {
+    this.renderer.admit();
     const job = await this.jobs.get(actor, jobId);
     const ids = query.spools ?? (await this.openSpoolIds(actor, job.id));
     const chosen: Extract<SheetRenderJob, { kind: 'saw-list' }>['spools'] = [];

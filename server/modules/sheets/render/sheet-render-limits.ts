@@ -20,7 +20,7 @@ export function defaultSheetRenderLimits(): SheetRenderLimits {
     threads: Math.max(1, Math.min(4, availableParallelism() - 1)),
     timeoutMs: 30_000,
     memoryMb: 512,
-    queueLength: 32,
+    queueLength: 16,
     waitMs: 20_000,
   };
 }

@@ -13,6 +13,11 @@ export interface RenderedSheet {
 
 /** Draws sheets; the server's runs them on worker threads. */
 export interface SheetRenderer {
+  /**
+   * Throws the 503 a render would get now because every thread is busy and the queue is
+   * full: called before the design is read, so a refused request costs next to nothing.
+   */
+  admit(): void;
   render(job: SheetRenderJob): Promise<RenderedSheet>;
   close(): Promise<void>;
 }
@@ -54,6 +59,9 @@ export class PooledSheetRenderer implements SheetRenderer {
         concurrentTasksPerWorker: 1,
         // Threads idle for a minute go, and give their memory back.
         idleTimeout: 60_000,
+        // Render threads run at a lower priority (nice +10 on Linux), so the request thread
+        // answers other requests first when the cores are busy.
+        niceIncrement: 10,
         execArgv: workerExecArgv(),
         resourceLimits: { maxOldGenerationSizeMb: this.limits.memoryMb },
       });
@@ -63,16 +71,24 @@ export class PooledSheetRenderer implements SheetRenderer {
     return this.pool;
   }
 
+  admit(): void {
+    if (this.running >= this.limits.threads && this.waiting.length >= this.limits.queueLength)
+      throw this.queueFull();
+  }
+
+  private queueFull(): AppError {
+    return busy(
+      `The sheet printer is busy: ${this.waiting.length} sheets are already waiting. Try again in a few seconds.`,
+    );
+  }
+
   /** Waits for a free render thread (or refuses with 503 when the queue is full or too slow). */
   private async acquire(): Promise<void> {
     if (this.running < this.limits.threads) {
       this.running += 1;
       return;
     }
-    if (this.waiting.length >= this.limits.queueLength)
-      throw busy(
-        `The sheet printer is busy: ${this.waiting.length} sheets are already waiting. Try again in a few seconds.`,
-      );
+    if (this.waiting.length >= this.limits.queueLength) throw this.queueFull();
     await new Promise<void>((resolve, reject) => {
       const turn = () => {
         clearTimeout(timer);
