@@ -21,6 +21,7 @@ import { revisionRouter } from './modules/revisions/revision.router';
 import { RevisionService } from './modules/revisions/revision.service';
 import { sheetsRouter } from './modules/sheets/sheets.router';
 import { SheetsService } from './modules/sheets/sheets.service';
+import { PooledSheetRenderer, type SheetRenderer } from './modules/sheets/render/sheet-render-pool';
 import { jobSpoolRouter, spoolRouter } from './modules/spools/spool.router';
 import { SpoolService } from './modules/spools/spool.service';
 import { userRouter } from './modules/users/user.router';
@@ -41,11 +42,17 @@ export interface AppOptions {
   clientDir?: string | null;
   /** Where 500s are logged. */
   log?: (message: string, err: unknown) => void;
+  /** Draws sheet PDFs; default: a worker-thread pool with `config.sheetRender`'s limits. */
+  sheetRenderer?: SheetRenderer;
 }
 
+/** The app and what must be closed with it (render threads). */
+export type TacklineApp = Express & { locals: { sheetRenderer: SheetRenderer } };
+
 /** Builds the Express app: JSON API under /api, and the built client when there is one. */
-export function createApp(options: AppOptions): Express {
+export function createApp(options: AppOptions): TacklineApp {
   const { dataSource: ds, config } = options;
+  const sheetRenderer = options.sheetRenderer ?? new PooledSheetRenderer(config.sheetRender);
   const audit = options.audit ?? writeAuditEvent;
 
   const authService = new AuthService(ds, audit);
@@ -55,7 +62,8 @@ export function createApp(options: AppOptions): Express {
   const revisions = new RevisionService(ds, audit, spools);
   const passport = createPassport(authService);
 
-  const app = express();
+  const app = express() as TacklineApp;
+  app.locals.sheetRenderer = sheetRenderer;
   app.disable('x-powered-by');
   // Behind a reverse proxy the client address and protocol come from X-Forwarded-*.
   app.set('trust proxy', config.trustProxy);
@@ -107,7 +115,7 @@ export function createApp(options: AppOptions): Express {
   api.use('/jobs/:jobId/spools', jobSpoolRouter(spools));
   api.use('/spools', spoolRouter(spools));
   api.use('/spools', revisionRouter(revisions));
-  api.use(sheetsRouter(new SheetsService(ds, jobs, spools, revisions, config.publicUrl)));
+  api.use(sheetsRouter(new SheetsService(ds, jobs, spools, revisions, config.publicUrl, sheetRenderer)));
   api.use(apiNotFound);
 
   app.use('/api', api);

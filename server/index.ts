@@ -34,7 +34,11 @@ async function main(): Promise<void> {
     const force = setTimeout(() => process.exit(1), 10_000);
     force.unref();
     server.close(() => {
-      ds.destroy().finally(() => process.exit(0));
+      void app.locals.sheetRenderer
+        .close()
+        .catch(() => {})
+        .then(() => ds.destroy())
+        .finally(() => process.exit(0));
     });
     server.closeIdleConnections();
   };

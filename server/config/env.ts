@@ -1,4 +1,8 @@
 import { z } from 'zod';
+import {
+  defaultSheetRenderLimits,
+  type SheetRenderLimits,
+} from '../modules/sheets/render/sheet-render-limits';
 
 const DEV_SESSION_SECRET = 'tackline-dev-session-secret-change-me';
 
@@ -19,6 +23,12 @@ const envSchema = z.object({
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(10),
   JSON_BODY_LIMIT: z.string().default('2mb'),
+  // Sheet rendering on worker threads (server/modules/sheets/render/sheet-render-pool.ts).
+  SHEET_RENDER_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+  SHEET_RENDER_TIMEOUT_MS: z.coerce.number().int().min(1).max(600_000).default(30_000),
+  SHEET_RENDER_MEMORY_MB: z.coerce.number().int().min(64).max(16_384).default(512),
+  SHEET_RENDER_QUEUE: z.coerce.number().int().min(0).max(10_000).default(16),
+  SHEET_RENDER_WAIT_MS: z.coerce.number().int().min(1).max(600_000).default(20_000),
 });
 
 /** Everything the server reads from its environment, parsed once. */
@@ -43,6 +53,8 @@ export interface ServerConfig {
   jsonBodyLimit: string;
   /** Seconds between pruning expired sessions; false turns pruning off (tests). */
   sessionPruneSeconds: number | false;
+  /** Render threads and the time, memory and queue limits of sheet rendering. */
+  sheetRender: SheetRenderLimits;
 }
 
 /** Parses `env` (default `process.env`) into the server config; exits on a bad value. */
@@ -80,5 +92,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     bcryptCost: e.BCRYPT_COST,
     jsonBodyLimit: e.JSON_BODY_LIMIT,
     sessionPruneSeconds: e.NODE_ENV === 'test' ? false : 15 * 60,
+    sheetRender: {
+      threads: e.SHEET_RENDER_THREADS ?? defaultSheetRenderLimits().threads,
+      timeoutMs: e.SHEET_RENDER_TIMEOUT_MS,
+      memoryMb: e.SHEET_RENDER_MEMORY_MB,
+      queueLength: e.SHEET_RENDER_QUEUE,
+      waitMs: e.SHEET_RENDER_WAIT_MS,
+    },
   };
 }

@@ -10,6 +10,20 @@ export const SPOOL_DESIGN_FORMAT = 'tackline.spool';
 export const SPOOL_DESIGN_VERSION = 1;
 
 /**
+ * Most nodes (work points, each with its fitting or end) one spool design may hold. A shop
+ * spool rarely has more than a few hundred components (common practice, no source: a spool is
+ * sized to ship and to handle in the bay); larger layouts are split into several spools.
+ */
+export const MAX_DESIGN_NODES = 500;
+/** Most runs one design may hold (a tree of {@link MAX_DESIGN_NODES} nodes has one fewer). */
+export const MAX_DESIGN_RUNS = MAX_DESIGN_NODES;
+
+function tooLarge(what: string, limit: number) {
+  return (issue: { input?: unknown }) =>
+    `A spool design holds at most ${limit} ${what}${Array.isArray(issue.input) ? `; this one has ${issue.input.length}` : ''}. Split it into smaller spools.`;
+}
+
+/**
  * The spool design object without the cross-field checks, for editors that want to
  * extend or pick from it. Use {@link spoolDesignSchema} to validate.
  */
@@ -26,9 +40,12 @@ export const spoolDesignObjectSchema = z
     /** Plant position of the root node's work point, mm (x east, y north, z up). */
     origin: vec3Schema,
     /** Work points with their components. The root is the node no run points `to`. */
-    nodes: z.array(spoolNodeSchema).min(1, 'A design needs at least one node').max(5000),
+    nodes: z
+      .array(spoolNodeSchema)
+      .min(1, 'A design needs at least one node')
+      .max(MAX_DESIGN_NODES, { error: tooLarge('nodes', MAX_DESIGN_NODES) }),
     /** Straight runs between nodes; together they must form one tree. */
-    runs: z.array(spoolRunSchema).max(5000),
+    runs: z.array(spoolRunSchema).max(MAX_DESIGN_RUNS, { error: tooLarge('runs', MAX_DESIGN_RUNS) }),
   })
   .strict();
 

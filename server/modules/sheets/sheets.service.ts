@@ -1,10 +1,6 @@
 import { jobSpecOverrides } from '../../../shared/engine/job-spec-overrides';
 import { IsNull, type DataSource } from 'typeorm';
-import { computeSpool } from '../../../shared/engine/compute-spool';
-import type { SpoolResult } from '../../../shared/engine/compute-result';
-import type { Job } from '../../../shared/schemas/job.schema';
 import type { Revision, RevisionSummary } from '../../../shared/schemas/revision.schema';
-import { spoolDesignSchema, type SpoolDesign } from '../../../shared/schemas/spool-design.schema';
 import type { Spool } from '../../../shared/schemas/spool.schema';
 import { notFound, unprocessable } from '../../common/app-error';
 import type { SessionActor } from '../../common/session-actor';
@@ -12,12 +8,14 @@ import type { JobService } from '../jobs/job.service';
 import type { RevisionService } from '../revisions/revision.service';
 import { SpoolEntity } from '../spools/spool.entity';
 import type { SpoolService } from '../spools/spool.service';
-import { revisionChanges, type PrintedRevision, type RevisionChanges } from './pdf/revision-changes';
-import { renderSawList } from './pdf/saw-list';
-import type { SawListSpool } from './pdf/saw-list-groups';
 import type { RevisionHistoryEntry, SheetHeader } from './pdf/sheet-header';
-import { renderSpoolSheet } from './pdf/spool-sheet';
-import { MAX_SAW_LIST_SPOOLS, type SawListQuery, type SpoolSheetQuery } from '../../../shared/schemas/sheet-query.schema';
+import type { SheetRenderJob } from './render/sheet-render-job';
+import type { SheetRenderer } from './render/sheet-render-pool';
+import {
+  MAX_SAW_LIST_SPOOLS,
+  type SawListQuery,
+  type SpoolSheetQuery,
+} from '../../../shared/schemas/sheet-query.schema';
 
 /** A rendered PDF and the file name to offer. */
 export interface RenderedPdf {
@@ -51,10 +49,12 @@ export class SheetsService {
     private readonly spools: SpoolService,
     private readonly revisions: RevisionService,
     private readonly publicUrl: string,
+    private readonly renderer: SheetRenderer,
     private readonly now: () => Date = () => new Date(),
   ) {}
 
   async spoolSheet(actor: SessionActor, spoolId: string, query: SpoolSheetQuery): Promise<RenderedPdf> {
+    this.renderer.admit();
     const spool = await this.spools.get(actor, spoolId);
     const job = await this.jobs.get(actor, spool.jobId);
     const history = await this.revisions.list(actor, spool.id);
@@ -62,7 +62,6 @@ export class SheetsService {
     if (!revisionId) throw unprocessable('This spool has no design yet: open a draft and lay it out first.');
     if (!history.some((r) => r.id === revisionId)) throw notFound('Revision');
     const revision = await this.revisions.get(actor, spool.id, revisionId);
-    const { design, result } = this.compute(revision, job);
 
     const header: SheetHeader = {
       shopName: actor.organisationName,
@@ -80,19 +79,20 @@ export class SheetsService {
       spoolUrl: `${this.publicUrl.replace(/\/+$/, '')}/spools/${spool.id}`,
       printedAt: this.now(),
     };
-    const compared = await this.changesSincePrevious(actor, spool.id, history, revision, { design, result }, job);
-    // The revision that flagged the spool for rework says so on its sheet.
-    const changes =
-      compared && spool.rework && spool.rework.letter === revision.letter
-        ? { ...compared, rework: { fromStatus: spool.rework.fromStatus, toStatus: spool.rework.toStatus } }
-        : compared;
-    const out = await renderSpoolSheet({
+    // Validation, the engine and the drawing all run on a render thread.
+    const out = await this.renderer.render({
+      kind: 'spool-sheet',
       header,
-      design,
-      result,
+      design: revision.design,
+      previous: await this.previousIssued(actor, spool.id, history, revision),
+      // The revision that flagged the spool for rework says so on its sheet.
+      rework:
+        spool.rework && spool.rework.letter === revision.letter
+          ? { fromStatus: spool.rework.fromStatus, toStatus: spool.rework.toStatus }
+          : null,
+      jobSpec: jobSpecOverrides(job.spec),
       units: job.units,
       paper: query.paper,
-      changes,
     });
     return {
       pdf: out.pdf,
@@ -101,9 +101,10 @@ export class SheetsService {
   }
 
   async sawList(actor: SessionActor, jobId: string, query: SawListQuery): Promise<RenderedPdf> {
+    this.renderer.admit();
     const job = await this.jobs.get(actor, jobId);
     const ids = query.spools ?? (await this.openSpoolIds(actor, job.id));
-    const chosen: SawListSpool[] = [];
+    const chosen: Extract<SheetRenderJob, { kind: 'saw-list' }>['spools'] = [];
     const skipped: string[] = [];
     for (const id of ids) {
       const spool = await this.spools.get(actor, id);
@@ -115,74 +116,49 @@ export class SheetsService {
         continue;
       }
       const revision = await this.revisions.get(actor, spool.id, revisionId);
-      const { result } = this.compute(revision, job);
       chosen.push({
         mark: spool.mark,
         revisionLetter: revision.letter,
         revisionState: revision.state,
-        result,
+        design: revision.design,
       });
     }
     chosen.sort((a, b) => a.mark.localeCompare(b.mark, undefined, { numeric: true }));
-    const out = await renderSawList({
-      shopName: actor.organisationName,
-      clientName: job.client,
-      jobNumber: job.number,
-      jobTitle: job.title,
-      site: job.site,
-      jobUrl: `${this.publicUrl.replace(/\/+$/, '')}/jobs/${job.id}`,
-      units: job.units,
-      paper: query.paper,
+    const out = await this.renderer.render({
+      kind: 'saw-list',
+      header: {
+        shopName: actor.organisationName,
+        clientName: job.client,
+        jobNumber: job.number,
+        jobTitle: job.title,
+        site: job.site,
+        jobUrl: `${this.publicUrl.replace(/\/+$/, '')}/jobs/${job.id}`,
+        units: job.units,
+        paper: query.paper,
+        skipped,
+        printedAt: this.now(),
+      },
       spools: chosen,
-      skipped,
-      printedAt: this.now(),
+      jobSpec: jobSpecOverrides(job.spec),
     });
     return { pdf: out.pdf, filename: `${job.number}-saw-list.pdf` };
   }
 
   /**
-   * What changed since the issued revision before the printed one (for a draft: the latest
-   * issued). Null for a first revision, or when the older design no longer reads.
+   * The issued revision before the printed one (for a draft: the latest issued), whose
+   * design the sheet's "changed since" list compares against. Null for a first revision.
    */
-  private async changesSincePrevious(
+  private async previousIssued(
     actor: SessionActor,
     spoolId: string,
     history: RevisionSummary[],
     printed: Revision,
-    current: PrintedRevision,
-    job: Job,
-  ): Promise<RevisionChanges | null> {
+  ): Promise<{ letter: string; design: unknown } | null> {
     const at = history.findIndex((r) => r.id === printed.id);
     const previous = history.slice(at + 1).find((r) => r.state !== 'draft');
     if (!previous) return null;
     const older = await this.revisions.get(actor, spoolId, previous.id);
-    const parsed = spoolDesignSchema.safeParse(older.design);
-    if (!parsed.success) return null;
-    const before = computeSpool(parsed.data, { jobSpec: jobSpecOverrides(job.spec), trusted: true });
-    return revisionChanges(
-      { design: parsed.data, result: before },
-      current,
-      job.units,
-      previous.letter,
-      printed.letter,
-    );
-  }
-
-  private compute(revision: Revision, job: Job): { design: SpoolDesign; result: SpoolResult } {
-    const parsed = spoolDesignSchema.safeParse(revision.design);
-    if (!parsed.success) {
-      // Stored designs are validated on save; one that fails now predates a schema change.
-      throw unprocessable(
-        `Revision ${revision.letter} does not hold a valid spool design, so no sheet can be drawn from it.`,
-        {
-          issues: parsed.error.issues,
-        },
-      );
-    }
-    return {
-      design: parsed.data,
-      result: computeSpool(parsed.data, { jobSpec: jobSpecOverrides(job.spec), trusted: true }),
-    };
+    return { letter: previous.letter, design: older.design };
   }
 
   private async openSpoolIds(actor: SessionActor, jobId: string): Promise<string[]> {
