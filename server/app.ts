@@ -7,6 +7,7 @@ import type { Pool } from 'pg';
 import type { DataSource } from 'typeorm';
 import { AppError } from './common/app-error';
 import { apiNotFound, errorMiddleware } from './common/error.middleware';
+import { rejectBadUrlEncoding } from './common/url-encoding.middleware';
 import type { ServerConfig } from './config/env';
 import { AuditQueryService } from './modules/audit/audit-query.service';
 import { auditRouter } from './modules/audit/audit.router';
@@ -60,6 +61,7 @@ export function createApp(options: AppOptions): Express {
   // Behind a reverse proxy the client address and protocol come from X-Forwarded-*.
   app.set('trust proxy', config.trustProxy);
   app.use(securityHeaders);
+  app.use(rejectBadUrlEncoding);
 
   const api = express.Router();
   api.use(express.json({ limit: config.jsonBodyLimit }));

@@ -15,6 +15,7 @@ const DUPLICATE_MESSAGES: Record<string, string> = {
 interface BodyParserError {
   type?: string;
   status?: number;
+  statusCode?: number;
   limit?: number;
 }
 
@@ -36,13 +37,23 @@ export function toAppError(err: unknown): AppError {
         reason: 'malformed_json',
       });
     }
-    if (typeof parser.status === 'number' && parser.status >= 400 && parser.status < 500) {
+    if (parser.status === 413) {
+      return new AppError(413, 'payload_too_large', 'The request body could not be read');
+    }
+  }
+  // Anything else that already carries a 4xx (http-errors from the body reader, e.g. a
+  // gzip body that is not gzip, an unknown Content-Encoding; the router's URIError) is the
+  // client's mistake: say so, without echoing the low-level message.
+  const status = parser && typeof parser === 'object' ? (parser.status ?? parser.statusCode) : undefined;
+  if (typeof status === 'number' && status >= 400 && status < 500) {
+    if (status === 415) {
       return new AppError(
-        parser.status === 413 ? 413 : 400,
-        parser.status === 413 ? 'payload_too_large' : 'invalid_request',
-        'The request body could not be read',
+        415,
+        'invalid_request',
+        'The request body uses an encoding the server does not accept',
       );
     }
+    return new AppError(400, 'invalid_request', 'The request could not be read');
   }
   if (err instanceof QueryFailedError) {
     const driver = err.driverError as { code?: string; constraint?: string };
