@@ -8,6 +8,8 @@ export const errorCodeSchema = z.enum([
   'not_found',
   'duplicate',
   'stale_version',
+  'job_archived',
+  'already_issued',
   'payload_too_large',
   'unprocessable',
   'too_many_attempts',
