@@ -5,8 +5,9 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { Pool } from 'pg';
 import type { DataSource } from 'typeorm';
-import { AppError } from './common/app-error';
 import { apiNotFound, errorMiddleware } from './common/error.middleware';
+import { requireOwnOrigin } from './common/own-origin.middleware';
+import { rejectBadUrlEncoding } from './common/url-encoding.middleware';
 import type { ServerConfig } from './config/env';
 import { AuditQueryService } from './modules/audit/audit-query.service';
 import { auditRouter } from './modules/audit/audit.router';
@@ -68,10 +69,12 @@ export function createApp(options: AppOptions): TacklineApp {
   // Behind a reverse proxy the client address and protocol come from X-Forwarded-*.
   app.set('trust proxy', config.trustProxy);
   app.use(securityHeaders);
+  app.use(rejectBadUrlEncoding);
 
   const api = express.Router();
+  // Before the body is read: a forged request is refused without parsing anything.
+  api.use(requireOwnOrigin(config.allowedOrigins));
   api.use(express.json({ limit: config.jsonBodyLimit }));
-  api.use(jsonBodiesOnly);
   api.use('/health', healthRouter(ds));
 
   const PgStore = connectPgSimple(session);
@@ -134,22 +137,6 @@ export function createApp(options: AppOptions): TacklineApp {
   app.use(errorMiddleware(options.log));
   return app;
 }
-
-/**
- * A write whose body is not JSON is refused, even where every field is optional: form
- * and text/plain posts are what another site can send without a CORS preflight.
- */
-const jsonBodiesOnly: RequestHandler = (req, _res, next) => {
-  // Content-Length: 0 (a bodiless POST such as sign-out) is no body.
-  const hasBody =
-    req.headers['transfer-encoding'] !== undefined || Number(req.headers['content-length'] ?? 0) > 0;
-  if (hasBody && req.method !== 'GET' && req.method !== 'HEAD' && !req.is('application/json')) {
-    return next(
-      new AppError(400, 'invalid_request', 'Send the request body as JSON (Content-Type: application/json)'),
-    );
-  }
-  next();
-};
 
 const securityHeaders: RequestHandler = (_req, res, next) => {
   res.set('X-Content-Type-Options', 'nosniff');

@@ -15,12 +15,63 @@ const DUPLICATE_MESSAGES: Record<string, string> = {
 interface BodyParserError {
   type?: string;
   status?: number;
+  statusCode?: number;
   limit?: number;
+}
+
+/** Seconds a client is told to wait while the database comes back. */
+export const DATABASE_RETRY_AFTER_SECONDS = 5;
+
+// PostgreSQL SQLSTATEs of a server going away or not there yet: admin/crash shutdown,
+// cannot connect now (starting up, shutting down), too many connections, connection exceptions.
+const UNAVAILABLE_SQLSTATES = new Set(['57P01', '57P02', '57P03', '53300']);
+const UNAVAILABLE_NODE_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'EPIPE',
+  'ETIMEDOUT',
+  'ENOTFOUND',
+  'EAI_AGAIN',
+]);
+const UNAVAILABLE_MESSAGES =
+  /Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error|Connection terminated unexpectedly/i;
+
+/** True for an error that means the database cannot be reached right now (a restart, a network cut). */
+export function isDatabaseUnavailable(err: unknown): boolean {
+  const seen = new Set<unknown>();
+  const check = (e: unknown): boolean => {
+    if (!e || typeof e !== 'object' || seen.has(e)) return false;
+    seen.add(e);
+    const { code, message, driverError, errors, cause } = e as {
+      code?: unknown;
+      message?: unknown;
+      driverError?: unknown;
+      errors?: unknown;
+      cause?: unknown;
+    };
+    if (
+      typeof code === 'string' &&
+      (UNAVAILABLE_SQLSTATES.has(code) || code.startsWith('08') || UNAVAILABLE_NODE_CODES.has(code))
+    )
+      return true;
+    if (typeof message === 'string' && UNAVAILABLE_MESSAGES.test(message)) return true;
+    if (check(driverError) || check(cause)) return true;
+    return Array.isArray(errors) && errors.some(check);
+  };
+  return check(err);
 }
 
 /** Turns anything thrown into an AppError; unknown errors become a plain 500. */
 export function toAppError(err: unknown): AppError {
   if (err instanceof AppError) return err;
+  if (isDatabaseUnavailable(err)) {
+    return new AppError(
+      503,
+      'service_unavailable',
+      'The database is not reachable right now (it may be restarting). Nothing was saved; try again in a few seconds.',
+      { retryAfterSeconds: DATABASE_RETRY_AFTER_SECONDS },
+    );
+  }
   if (err instanceof ZodError) {
     return new AppError(400, 'invalid_request', `Invalid request: ${summarise(err)}`, { issues: err.issues });
   }
@@ -36,13 +87,23 @@ export function toAppError(err: unknown): AppError {
         reason: 'malformed_json',
       });
     }
-    if (typeof parser.status === 'number' && parser.status >= 400 && parser.status < 500) {
+    if (parser.status === 413) {
+      return new AppError(413, 'payload_too_large', 'The request body could not be read');
+    }
+  }
+  // Anything else that already carries a 4xx (http-errors from the body reader, e.g. a
+  // gzip body that is not gzip, an unknown Content-Encoding; the router's URIError) is the
+  // client's mistake: say so, without echoing the low-level message.
+  const status = parser && typeof parser === 'object' ? (parser.status ?? parser.statusCode) : undefined;
+  if (typeof status === 'number' && status >= 400 && status < 500) {
+    if (status === 415) {
       return new AppError(
-        parser.status === 413 ? 413 : 400,
-        parser.status === 413 ? 'payload_too_large' : 'invalid_request',
-        'The request body could not be read',
+        415,
+        'invalid_request',
+        'The request body uses an encoding the server does not accept',
       );
     }
+    return new AppError(400, 'invalid_request', 'The request could not be read');
   }
   if (err instanceof QueryFailedError) {
     const driver = err.driverError as { code?: string; constraint?: string };
@@ -62,6 +123,7 @@ export function errorMiddleware(
   return (err, req, res, next) => {
     if (res.headersSent) return next(err);
     const appError = toAppError(err);
+    if (appError.status === 503) res.set('Retry-After', String(DATABASE_RETRY_AFTER_SECONDS));
     if (appError.status >= 500) log(`[tackline] ${req.method} ${req.originalUrl} failed`, err);
     const body: ErrorBody = { error: { code: appError.code, message: appError.message } };
     if (appError.details !== undefined) body.error.details = appError.details;

@@ -5,6 +5,8 @@ import {
 } from '../modules/sheets/render/sheet-render-limits';
 
 const DEV_SESSION_SECRET = 'tackline-dev-session-secret-change-me';
+/** Where `npm run dev` serves the client (vite.config.ts), proxying /api here. */
+const DEV_SERVER_ORIGINS = ['http://127.0.0.1:5173', 'http://localhost:5173'];
 
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
@@ -15,6 +17,8 @@ const envSchema = z.object({
   HOST: z.string().min(1).default('127.0.0.1'),
   SESSION_SECRET: z.string().min(16).optional(),
   PUBLIC_URL: z.url().optional(),
+  // Extra page origins whose writes are accepted besides PUBLIC_URL's (comma-separated).
+  ALLOWED_ORIGINS: z.string().optional(),
   // auto: Secure cookies when PUBLIC_URL is https. false: e.g. tests over plain http.
   COOKIE_SECURE: z.enum(['auto', 'true', 'false']).default('auto'),
   // Express "trust proxy". Unset: trust a loopback proxy only when PUBLIC_URL is https.
@@ -41,6 +45,11 @@ export interface ServerConfig {
   /** True when SESSION_SECRET was not set and the development value is in use. */
   usingDevSessionSecret: boolean;
   publicUrl: string;
+  /**
+   * Origins of pages allowed to send writes: PUBLIC_URL's, ALLOWED_ORIGINS, and in
+   * development the Vite dev server. (The origin a request is addressed to always is.)
+   */
+  allowedOrigins: string[];
   /** Cookies get `Secure` when the public URL is https (COOKIE_SECURE=auto), or as COOKIE_SECURE says. */
   secureCookies: boolean;
   /**
@@ -78,6 +87,15 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     sessionSecret: e.SESSION_SECRET ?? DEV_SESSION_SECRET,
     usingDevSessionSecret: !e.SESSION_SECRET,
     publicUrl,
+    allowedOrigins: [
+      new URL(publicUrl).origin,
+      ...(e.ALLOWED_ORIGINS ?? '')
+        .split(',')
+        .map((o) => o.trim())
+        .filter(Boolean)
+        .map((o) => new URL(o).origin),
+      ...(e.NODE_ENV === 'development' ? DEV_SERVER_ORIGINS : []),
+    ],
     secureCookies: e.COOKIE_SECURE === 'auto' ? publicUrl.startsWith('https:') : e.COOKIE_SECURE === 'true',
     trustProxy:
       e.TRUST_PROXY === undefined

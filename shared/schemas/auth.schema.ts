@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { emailSchema, userSchema } from './user.schema';
+import { textSchema } from './text.schema';
 
 /**
  * `POST /api/auth/sign-in` body. The password is only length-checked here: the
@@ -8,7 +9,7 @@ import { emailSchema, userSchema } from './user.schema';
 export const signInSchema = z
   .object({
     email: emailSchema,
-    password: z.string().min(1).max(200),
+    password: textSchema().min(1).max(200),
   })
   .strict();
 /** Parsed sign-in body. */

@@ -9,6 +9,8 @@ export const errorCodeSchema = z.enum([
   'duplicate',
   'stale_version',
   'rework_confirmation_required',
+  'job_archived',
+  'already_issued',
   'payload_too_large',
   'unprocessable',
   'too_many_attempts',

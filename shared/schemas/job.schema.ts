@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { idSchema, timestampSchema } from './id.schema';
 import { listQuerySchema, queryBooleanSchema } from './list-query.schema';
 import { flangeClassSchema } from './spool-design-primitives.schema';
+import { textSchema } from './text.schema';
 
 export { flangeClassSchema };
 
@@ -23,8 +24,8 @@ export type JobStatus = z.infer<typeof jobStatusSchema>;
  */
 export const jobSpecSchema = z
   .object({
-    material: z.string().trim().min(1).max(120),
-    schedule: z.string().trim().min(1).max(20),
+    material: textSchema().trim().min(1).max(120),
+    schedule: textSchema().trim().min(1).max(20),
     flangeClass: flangeClassSchema,
     rootGapMm: z.number().min(0).max(10),
     sawKerfMm: z.number().min(0).max(10),
@@ -61,7 +62,7 @@ export const jobSchema = z.object({
 /** A job as the API returns it. */
 export type Job = z.infer<typeof jobSchema>;
 
-const textField = (max: number) => z.string().trim().min(1).max(max);
+const textField = (max: number) => textSchema().trim().min(1).max(max);
 
 /** `POST /api/jobs` body. */
 export const jobCreateSchema = z
@@ -69,7 +70,7 @@ export const jobCreateSchema = z
     number: jobNumberSchema,
     title: textField(200),
     client: textField(200),
-    site: z.string().trim().max(200).default(''),
+    site: textSchema().trim().max(200).default(''),
     units: jobUnitsSchema.default('mm'),
     spec: jobSpecSchema,
     status: jobStatusSchema.exclude(['archived']).default('active'),
@@ -86,7 +87,7 @@ export const jobUpdateSchema = z
     number: jobNumberSchema.optional(),
     title: textField(200).optional(),
     client: textField(200).optional(),
-    site: z.string().trim().max(200).optional(),
+    site: textSchema().trim().max(200).optional(),
     units: jobUnitsSchema.optional(),
     spec: jobSpecSchema.optional(),
     status: jobStatusSchema.exclude(['archived']).optional(),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from './text.schema';
 
 /** Largest page a list endpoint returns. */
 export const MAX_PAGE_SIZE = 100;
@@ -27,7 +28,7 @@ export function listQuerySchema<const F extends readonly [string, ...string[]]>(
       pageSize: z.coerce.number().int().min(1).max(MAX_PAGE_SIZE).default(DEFAULT_PAGE_SIZE),
       sort: z.enum(sortFields).default(sortFields[0] as F[number]),
       order: sortOrderSchema.default(defaultOrder),
-      q: z.string().trim().max(200).optional(),
+      q: textSchema().trim().max(200).optional(),
     })
     .strict();
 }

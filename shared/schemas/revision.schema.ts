@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { idSchema, timestampSchema } from './id.schema';
 import { spoolStatusSchema } from './spool-status.schema';
+import { findTextProblems, textSchema } from './text.schema';
 
 /** A revision's life: one working draft per spool; issued ones never change; superseded when the next is issued. */
 export const revisionStateSchema = z.enum(['draft', 'issued', 'superseded']);
@@ -11,7 +12,10 @@ export type RevisionState = z.infer<typeof revisionStateSchema>;
  * The design document envelope: any JSON object. The server checks its content
  * against the spool design schema separately (422 when it fails).
  */
-export const designEnvelopeSchema = z.record(z.string(), z.unknown());
+export const designEnvelopeSchema = z.record(z.string(), z.unknown()).superRefine((design, ctx) => {
+  // Text the database cannot hold is a bad request wherever it sits in the document.
+  for (const { path, message } of findTextProblems(design)) ctx.addIssue({ code: 'custom', path, message });
+});
 
 /** A revision in a list: everything but the design. */
 export const revisionSummarySchema = z.object({
@@ -38,7 +42,7 @@ export type Revision = z.infer<typeof revisionSchema>;
 export const revisionParamsSchema = z.object({ id: idSchema, revisionId: idSchema }).strict();
 
 /** Revision note: why this revision exists. */
-export const revisionNoteSchema = z.string().trim().max(2000);
+export const revisionNoteSchema = textSchema().trim().max(2000);
 
 /** `PUT /api/spools/:id/draft` body: the whole design, the note, and the draft version last read. */
 export const draftSaveSchema = z

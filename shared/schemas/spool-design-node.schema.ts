@@ -7,6 +7,7 @@ import {
   elementIdSchema,
   flangeClassSchema,
 } from './spool-design-primitives.schema';
+import { textSchema } from './text.schema';
 
 const angleDegSchema = z.number().finite().min(-720).max(720);
 
@@ -14,7 +15,7 @@ const angleDegSchema = z.number().finite().min(-720).max(720);
 const nodeBase = {
   id: elementIdSchema,
   /** Free text shown on the sheet beside the component (tag, note). */
-  label: z.string().max(120).optional(),
+  label: textSchema().max(120).optional(),
   /** Spec overrides for this component only (schedule, root gap, class...). */
   spec: specOverridesSchema.optional(),
 };

@@ -2,14 +2,26 @@ import { z } from 'zod';
 import { unsupportedFlangeClassMessage } from '../standards/flanges';
 
 /**
+ * Largest plant coordinate, mm (10 km each way from the plant origin): no plant is wider,
+ * and a bound keeps every derived position, sheet scale and weight a finite, printable number.
+ */
+export const MAX_PLANT_COORDINATE_MM = 10_000_000;
+
+const coordinateSchema = z
+  .number()
+  .finite()
+  .min(-MAX_PLANT_COORDINATE_MM, 'Coordinates stay within 10 km of the plant origin')
+  .max(MAX_PLANT_COORDINATE_MM, 'Coordinates stay within 10 km of the plant origin');
+
+/**
  * A 3D vector or point in plant coordinates, millimetres: x = east, y = north, z = up.
  * Used for positions (mm) and for directions (any length; the engine normalises).
  */
 export const vec3Schema = z
   .object({
-    x: z.number().finite(),
-    y: z.number().finite(),
-    z: z.number().finite(),
+    x: coordinateSchema,
+    y: coordinateSchema,
+    z: coordinateSchema,
   })
   .strict();
 /** A plant-coordinate vector (see {@link vec3Schema}). */

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { npsSchema } from '../standards/nps';
 import { specOverridesSchema } from './spool-design-spec.schema';
 import { directionSchema, elementIdSchema } from './spool-design-primitives.schema';
+import { textSchema } from './text.schema';
 
 /**
  * How a run's length was dimensioned:
@@ -38,8 +39,8 @@ export const spoolRunSchema = z
     /** Pipe size; omitted: inherited from the run feeding `from` (a reducer's `toNps`, a branch's size). */
     nps: npsSchema.optional(),
     /** Heat number of the pipe the piece is cut from (traceability). */
-    heat: z.string().trim().min(1).max(40).optional(),
-    label: z.string().max(120).optional(),
+    heat: textSchema().trim().min(1).max(40).optional(),
+    label: textSchema().max(120).optional(),
     spec: specOverridesSchema.optional(),
   })
   .strict();

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { npsSchema } from '../standards/nps';
 import { scheduleSchema } from '../standards/pipe-schedules';
 import { flangeClassSchema } from './spool-design-primitives.schema';
+import { textSchema } from './text.schema';
 
 /**
  * Spec values a design, a run or a node may set. Every field is optional: what a
@@ -14,11 +15,11 @@ export const specOverridesSchema = z
     /** Main line size for runs that state none (the root run's size). */
     nps: npsSchema.optional(),
     /** Pipe material, as the sheet prints it (e.g. `ASTM A106 Gr B`). */
-    material: z.string().trim().min(1).max(80).optional(),
+    material: textSchema().trim().min(1).max(80).optional(),
     /** Butt-weld fitting material (e.g. `ASTM A234 WPB`). */
-    fittingMaterial: z.string().trim().min(1).max(80).optional(),
+    fittingMaterial: textSchema().trim().min(1).max(80).optional(),
     /** Flange and forged socket-fitting material (e.g. `ASTM A105`). */
-    flangeMaterial: z.string().trim().min(1).max(80).optional(),
+    flangeMaterial: textSchema().trim().min(1).max(80).optional(),
     schedule: scheduleSchema.optional(),
     flangeClass: flangeClassSchema.optional(),
     /** Root opening of every open-root butt and branch weld, mm. */

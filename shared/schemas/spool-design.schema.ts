@@ -2,7 +2,8 @@ import { z } from 'zod';
 import { spoolNodeSchema } from './spool-design-node.schema';
 import { spoolRunSchema } from './spool-design-run.schema';
 import { specOverridesSchema } from './spool-design-spec.schema';
-import { vec3Schema } from './spool-design-primitives.schema';
+import { MAX_PLANT_COORDINATE_MM, vec3Schema } from './spool-design-primitives.schema';
+import { textSchema } from './text.schema';
 
 /** Format name carried by every design document. */
 export const SPOOL_DESIGN_FORMAT = 'tackline.spool';
@@ -32,9 +33,9 @@ export const spoolDesignObjectSchema = z
     format: z.literal(SPOOL_DESIGN_FORMAT),
     version: z.literal(SPOOL_DESIGN_VERSION),
     /** Spool mark as drawn (e.g. `CW-201-S03`); the server's spool record is authoritative. */
-    mark: z.string().trim().max(60).optional(),
+    mark: textSchema().trim().max(60).optional(),
     /** Free text (line number, service). */
-    description: z.string().max(500).optional(),
+    description: textSchema().max(500).optional(),
     /** Design-wide spec values; omitted ones come from the job defaults. */
     spec: specOverridesSchema.optional(),
     /** Plant position of the root node's work point, mm (x east, y north, z up). */
@@ -57,6 +58,15 @@ export const spoolDesignObjectSchema = z
  * duplicate ids are rejected here; tree and geometry problems are engine issues.
  */
 export const spoolDesignSchema = spoolDesignObjectSchema.superRefine((design, ctx) => {
+  // Every derived position lies within origin ± the sum of the run lengths: bound that sum too.
+  const totalRunMm = design.runs.reduce((sum, run) => sum + run.length.mm, 0);
+  if (totalRunMm > MAX_PLANT_COORDINATE_MM) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['runs'],
+      message: `The runs add up to ${Math.round(totalRunMm / 1000)} m; a spool's runs stay under 10 km in total`,
+    });
+  }
   const seen = new Map<string, string>();
   design.nodes.forEach((node, i) => {
     const prior = seen.get(node.id);

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { idSchema, timestampSchema } from './id.schema';
 import { listQuerySchema, queryBooleanSchema } from './list-query.schema';
 import { spoolStatusSchema } from './spool-status.schema';
+import { textSchema } from './text.schema';
 
 /** Spool mark, e.g. `CW-201-S03`: unique within its job. */
 export const spoolMarkSchema = z
@@ -12,7 +13,7 @@ export const spoolMarkSchema = z
   .regex(/^[A-Za-z0-9][A-Za-z0-9._/-]*$/, 'Letters, digits, and . _ / - only');
 
 /** Line number from the client's isometric, e.g. `CW-201`. */
-export const lineNumberSchema = z.string().trim().min(1).max(80);
+export const lineNumberSchema = textSchema().trim().min(1).max(80);
 
 /**
  * A spool flagged for rework: a revision was issued over work the bay had already done.

@@ -2,12 +2,13 @@ import { z } from 'zod';
 import { idSchema, timestampSchema } from './id.schema';
 import { listQuerySchema, queryBooleanSchema } from './list-query.schema';
 import { roleSchema } from './role.schema';
+import { textSchema } from './text.schema';
 
 /** An e-mail address as stored: trimmed and lower-cased. */
-export const emailSchema = z.string().trim().toLowerCase().max(254).pipe(z.email());
+export const emailSchema = textSchema().trim().toLowerCase().max(254).pipe(z.email());
 
 /** Display name shown on screens and sheets. */
-export const displayNameSchema = z.string().trim().min(1).max(120);
+export const displayNameSchema = textSchema().trim().min(1).max(120);
 
 /** UTF-8 byte length of a string (no TextEncoder: shared/ has no DOM or Node types). */
 function utf8Length(text: string): number {
@@ -23,8 +24,7 @@ function utf8Length(text: string): number {
  * A new password: 10 to 72 characters (bcrypt reads at most 72 bytes, so longer
  * ones are refused rather than silently cut).
  */
-export const newPasswordSchema = z
-  .string()
+export const newPasswordSchema = textSchema()
   .min(10, 'Use at least 10 characters')
   .refine((p) => utf8Length(p) <= 72, 'Use at most 72 bytes');
 

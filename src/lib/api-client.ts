@@ -44,16 +44,22 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
     response = await fetch(apiUrl(path, query), {
       method,
       credentials: 'same-origin',
+      // Every write says JSON, even without a body: the server refuses writes that do not
+      // (that is what tells them from a form or no-cors fetch of another page).
       headers: {
         Accept: 'application/json',
-        ...(body !== undefined ? { 'Content-Type': 'application/json' } : {}),
+        ...(body !== undefined || method !== 'GET' ? { 'Content-Type': 'application/json' } : {}),
       },
       body: body !== undefined ? JSON.stringify(body) : undefined,
       signal,
     });
   } catch (cause) {
     if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
-    throw new ApiError(0, 'network_error', 'Cannot reach the Tackline server. Check the connection and try again.');
+    throw new ApiError(
+      0,
+      'network_error',
+      'Cannot reach the Tackline server. Check the connection and try again.',
+    );
   }
 
   if (response.status === 204) return undefined as T;

@@ -5,6 +5,8 @@ export type ApiErrorCode =
   | 'forbidden'
   | 'not_found'
   | 'stale_version'
+  | 'job_archived'
+  | 'already_issued'
   | 'payload_too_large'
   | 'unprocessable'
   | 'too_many_attempts'
@@ -46,11 +48,18 @@ export interface ApiIssue {
 export function issuesOf(error: unknown): ApiIssue[] {
   if (!(error instanceof ApiError)) return [];
   const d = error.details;
-  const list: unknown = Array.isArray(d) ? d : typeof d === 'object' && d !== null ? (d as { issues?: unknown }).issues : undefined;
+  const list: unknown = Array.isArray(d)
+    ? d
+    : typeof d === 'object' && d !== null
+      ? (d as { issues?: unknown }).issues
+      : undefined;
   if (!Array.isArray(list)) return [];
   return list.filter(
     (d): d is ApiIssue =>
-      typeof d === 'object' && d !== null && Array.isArray((d as ApiIssue).path) && typeof (d as ApiIssue).message === 'string',
+      typeof d === 'object' &&
+      d !== null &&
+      Array.isArray((d as ApiIssue).path) &&
+      typeof (d as ApiIssue).message === 'string',
   );
 }
 
@@ -73,14 +82,17 @@ export function toApiError(status: number, body: unknown): ApiError {
     return new ApiError(
       status,
       typeof code === 'string' ? code : status >= 500 ? 'server_error' : `http_${status}`,
-      typeof message === 'string' && message ? message : (fallbackMessages[status] ?? 'Something went wrong.'),
+      typeof message === 'string' && message
+        ? message
+        : (fallbackMessages[status] ?? 'Something went wrong.'),
       details,
     );
   }
   return new ApiError(
     status,
     status >= 500 ? 'server_error' : `http_${status}`,
-    fallbackMessages[status] ?? (status >= 500 ? 'The server had a problem. Try again shortly.' : 'Something went wrong.'),
+    fallbackMessages[status] ??
+      (status >= 500 ? 'The server had a problem. Try again shortly.' : 'Something went wrong.'),
   );
 }
 
@@ -95,6 +107,9 @@ export function messageOf(error: unknown): string {
 export function isMissing(error: unknown): boolean {
   if (!(error instanceof ApiError)) return false;
   if (error.status === 404) return true;
-  const part = typeof error.details === 'object' && error.details !== null ? (error.details as { part?: unknown }).part : undefined;
+  const part =
+    typeof error.details === 'object' && error.details !== null
+      ? (error.details as { part?: unknown }).part
+      : undefined;
   return error.status === 400 && part === 'params';
 }

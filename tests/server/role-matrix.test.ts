@@ -27,7 +27,9 @@ function call(
   path: string,
   body: unknown,
 ) {
-  const req = (agent as ReturnType<typeof request.agent>)[route.method](path);
+  // Like the client, every request declares JSON (writes without it are refused).
+  const send = (agent as ReturnType<typeof request.agent>)[route.method];
+  const req = send.call(agent, path).set('Content-Type', 'application/json');
   return body === undefined ? req : req.send(body as object);
 }
 

@@ -59,6 +59,7 @@ export class RevisionService {
       const existing = await this.findOne(m, actor, { spoolId: spool.id, state: 'draft' });
       if (existing) return { created: false, draft: toRevisionDto(existing) };
       assertNotArchived(spool);
+      await this.spools.assertJobOpen(m, spool);
       const letters = await m.getRepository(SpoolRevisionEntity).find({
         select: { letter: true },
         where: { spoolId: spool.id, organisationId: actor.organisationId },
@@ -101,6 +102,7 @@ export class RevisionService {
       const draft = await this.lockDraft(m, actor, spool.id);
       if (input.version !== draft.version) throw staleVersion(toRevisionDto(draft));
       assertNotArchived(spool);
+      await this.spools.assertJobOpen(m, spool);
       await m.update(
         SpoolRevisionEntity,
         { id: draft.id, organisationId: actor.organisationId, state: 'draft' },
@@ -133,11 +135,21 @@ export class RevisionService {
    */
   async issueDraft(actor: SessionActor, spoolId: string, input: DraftIssue): Promise<Revision> {
     return this.ds.transaction(async (m) => {
+      // The spool lock queues concurrent issues; whoever comes after the first finds the
+      // draft gone and gets 409 with the revision that was issued, not a 404.
       const spool = await this.spools.find(m, actor, spoolId, true);
+      const open = await this.findOne(m, actor, { spoolId: spool.id, state: 'draft' });
+      if (!open && spool.currentRevisionId) {
+        const issued = await this.findOne(m, actor, { id: spool.currentRevisionId });
+        throw new AppError(409, 'already_issued', 'This spool has no open draft: it was already issued.', {
+          current: issued ? toRevisionDto(issued) : null,
+        });
+      }
       const draft = await this.lockDraft(m, actor, spool.id);
       if (input.version !== undefined && input.version !== draft.version)
         throw staleVersion(toRevisionDto(draft));
       assertNotArchived(spool);
+      await this.spools.assertJobOpen(m, spool);
       assertValidDesign(draft.design);
       const rework = await this.reworkOnIssue(m, actor, spool, draft, input);
       const now = new Date();

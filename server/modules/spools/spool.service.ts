@@ -10,7 +10,7 @@ import type {
   SpoolStatusChange,
   SpoolUpdate,
 } from '../../../shared/schemas/spool.schema';
-import { forbidden, notFound, staleVersion, unprocessable } from '../../common/app-error';
+import { AppError, forbidden, notFound, staleVersion, unprocessable } from '../../common/app-error';
 import { applySortAndPage, likePattern } from '../../common/list-query';
 import type { SessionActor } from '../../common/session-actor';
 import type { AuditWriter } from '../audit/audit.service';
@@ -60,7 +60,7 @@ export class SpoolService {
   async create(actor: SessionActor, jobId: string, input: SpoolCreate): Promise<Spool> {
     return this.ds.transaction(async (m) => {
       const job = await this.jobs.find(m, actor, jobId, true);
-      if (job.status === 'archived') throw unprocessable('This job is archived: add spools to an open job');
+      if (job.status === 'archived') throw jobArchived();
       const row = await m.save(
         SpoolEntity,
         m.create(SpoolEntity, {
@@ -88,6 +88,7 @@ export class SpoolService {
       const row = await this.find(m, actor, id, true);
       if (input.version !== row.version) throw staleVersion(await this.dto(m, row));
       assertNotArchived(row);
+      await this.assertJobOpen(m, row);
       const changes: Partial<SpoolRow> = {};
       if (input.mark !== undefined && input.mark !== row.mark) changes.mark = input.mark;
       if (input.lineNumber !== undefined && input.lineNumber !== row.lineNumber)
@@ -107,6 +108,7 @@ export class SpoolService {
       const row = await this.find(m, actor, id, true);
       if (input.version !== row.version) throw staleVersion(await this.dto(m, row));
       assertNotArchived(row);
+      await this.assertJobOpen(m, row);
       if (input.status === row.status) return this.dto(m, row);
       const allowed = allowedSpoolStatusTargets(actor.role, row.status);
       if (!allowed.includes(input.status)) {
@@ -149,9 +151,23 @@ export class SpoolService {
       if (input.version !== undefined && input.version !== row.version)
         throw staleVersion(await this.dto(m, row));
       if (row.archivedAt) return this.dto(m, row);
+      await this.assertJobOpen(m, row);
       await this.write(m, actor, row, { archivedAt: new Date() }, 'spool.archive', { mark: row.mark });
       return this.dto(m, await this.find(m, actor, row.id));
     });
+  }
+
+  /**
+   * 409 `job_archived` when the spool's job is archived: an archived job is read-only
+   * throughout. The job row is share-locked, so archiving waits for this write (and a
+   * write that started after the archive sees it).
+   */
+  async assertJobOpen(m: EntityManager, row: SpoolRow): Promise<void> {
+    const rows: Array<{ status: string }> = await m.query(
+      `SELECT status FROM job WHERE id = $1 AND organisation_id = $2 FOR SHARE`,
+      [row.jobId, row.organisationId],
+    );
+    if (rows[0]?.status === 'archived') throw jobArchived();
   }
 
   /** The spool row in the actor's shop, optionally locked for update; 404 otherwise. */
@@ -219,6 +235,15 @@ export class SpoolService {
       return toSpoolDto(row, current, draft);
     });
   }
+}
+
+/** 409 for a write under an archived job. */
+export function jobArchived(): AppError {
+  return new AppError(
+    409,
+    'job_archived',
+    'This job is archived, so its spools and drafts are read-only. Nothing was saved.',
+  );
 }
 
 /** 422 for a write to an archived spool. */

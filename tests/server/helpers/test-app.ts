@@ -36,7 +36,8 @@ export async function signedIn(
   email: string,
   password: string,
 ): Promise<ReturnType<typeof request.agent>> {
-  const agent = request.agent(app);
+  // Like the client, every request declares JSON (writes without it are refused).
+  const agent = request.agent(app).set('Content-Type', 'application/json');
   const res = await agent.post('/api/auth/sign-in').send({ email, password });
   if (res.status !== 200)
     throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
