@@ -42,7 +42,7 @@ function vec(p: Vec3 | null | undefined, c: Counter): void {
 
 function correction(k: RotationCorrection | null, c: Counter): void {
   if (!k) return;
-  k.rotateDeg = n(k.rotateDeg, c);
+  k.rotateClockwiseLookingAtFaceDeg = n(k.rotateClockwiseLookingAtFaceDeg, c);
   k.atBoltCircleMm = nn(k.atBoltCircleMm, c);
 }
 
