@@ -127,6 +127,8 @@ export type ComponentShape =
       boltCircleMm: number | null;
       boltCount: number | null;
       blind: boolean;
+      /** Raised-face height included in the flange's take-off (B16.5 metric tables: 2 mm), mm. */
+      raisedFaceMm: number | null;
     }
   | { type: 'cap'; axis: Vec3; lengthMm: number | null }
   | { type: 'open-end'; axis: Vec3 }
@@ -262,6 +264,12 @@ export type FlangeOrientation = {
   bendPlaneNodeId: string | null;
   /** Rotation that makes the holes straddle, when they must and do not. */
   correction: RotationCorrection | null;
+  /**
+   * Raised-face height the take-off includes, mm: 2 mm from the ASME B16.5 metric tables,
+   * where many inch-made flanges have 1/16 in (1.6 mm); shown beside the take-off so a
+   * fitter measuring a real flange can tell.
+   */
+  raisedFaceMm: number | null;
 };
 
 /**

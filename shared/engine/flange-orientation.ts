@@ -100,6 +100,7 @@ export function flangeOrientations(
       bendPlaneRotationDeg,
       bendPlaneNodeId: bend?.nodeId ?? null,
       correction,
+      raisedFaceMm: a.detail.raisedFaceMm,
     });
   }
   return out;

@@ -117,6 +117,7 @@ export function roundResult(result: SpoolResult): SpoolResult {
     f.boltCircleMm = nn(f.boltCircleMm, c);
     f.rotationDeg = n(f.rotationDeg, c);
     f.bendPlaneRotationDeg = nn(f.bendPlaneRotationDeg, c);
+    f.raisedFaceMm = nn(f.raisedFaceMm, c);
     vec(f.faceCentre, c);
     vec(f.outward, c);
     vec(f.firstHoleDirection, c);
