@@ -139,6 +139,7 @@ export function componentResults(
           boltCircleMm: d.boltCircleMm,
           boltCount: d.boltCount,
           blind: d.blind,
+          raisedFaceMm: d.raisedFaceMm,
         };
         ends.push({
           runId: null,

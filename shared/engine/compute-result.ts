@@ -128,6 +128,8 @@ export type ComponentShape =
       boltCircleMm: number | null;
       boltCount: number | null;
       blind: boolean;
+      /** Raised-face height included in the flange's take-off (B16.5 metric tables: 2 mm), mm. */
+      raisedFaceMm: number | null;
     }
   | { type: 'cap'; axis: Vec3; lengthMm: number | null }
   | { type: 'open-end'; axis: Vec3 }
@@ -263,14 +265,25 @@ export type FlangeOrientation = {
   bendPlaneNodeId: string | null;
   /** Rotation that makes the holes straddle, when they must and do not. */
   correction: RotationCorrection | null;
+  /**
+   * Raised-face height the take-off includes, mm: 2 mm from the ASME B16.5 metric tables,
+   * where many inch-made flanges have 1/16 in (1.6 mm); shown beside the take-off so a
+   * fitter measuring a real flange can tell.
+   */
+  raisedFaceMm: number | null;
 };
 
-/** Rotate `flangeId` by `rotateDeg` (positive) in `sense`, seen facing its face. */
+/**
+ * A turn to give flange `flangeId`, from its position as designed (its `rotationDeg`), that
+ * removes the problem. One convention everywhere (the flange's own two-hole check and the
+ * flange-pair check): signed degrees, clockwise looking at the flange face, so the
+ * corrected design is `boltRotationDeg = rotationDeg + rotateClockwiseLookingAtFaceDeg`.
+ */
 export type RotationCorrection = {
   flangeId: string;
-  rotateDeg: number;
-  sense: 'clockwise' | 'counter-clockwise';
-  /** The same correction as arc length at the bolt circle, mm. */
+  /** Signed turn, degrees: positive clockwise, negative counter-clockwise, looking at the face. */
+  rotateClockwiseLookingAtFaceDeg: number;
+  /** The size of the same turn as arc length at the bolt circle (unsigned), mm. */
   atBoltCircleMm: number | null;
 };
 
@@ -283,7 +296,11 @@ export type FlangePairCheck = {
   b: string;
   /** Faces parallel (same or opposite direction). */
   parallelFaces: boolean;
-  /** Signed rotation error, degrees, within ± half a hole pitch of `b`. */
+  /**
+   * Signed rotation error, degrees, within ± half a hole pitch of `b`: how far `b` as
+   * designed sits from the matched position, clockwise looking at `b`'s face. The
+   * correction turns `b` by minus this.
+   */
   errorDeg: number | null;
   /** |error| as arc length at `b`'s bolt circle, mm. */
   errorMm: number | null;

@@ -21,6 +21,7 @@ import { resolveSpec, BUILT_IN_SPEC } from './resolve-spec';
 import { roundResult } from './round-result';
 import { WEIGHT_CAUTION, computeWeights } from './weights';
 import { buildWeldList } from './weld-list';
+import { checkWeldToeClearance } from './weld-toe-clearance';
 import { reportUnconfirmed, unconfirmedSink } from './unconfirmed-data';
 import { isSupportedFlangeClass, unsupportedFlangeClassMessage } from '../standards/flanges';
 
@@ -124,6 +125,7 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
   );
   const { pieces, marks } = buildCutList(graph, analyses, placed, pipes, positions, issues);
   const { welds, diameterInches } = buildWeldList(graph, analyses, placed, positions, marks);
+  checkWeldToeClearance(graph, analyses, placed, pipes, welds, issues);
   const weights = computeWeights(graph, pieces, analyses, positions, pipes, issues);
   const massByNode = new Map<string, number>();
   for (const i of weights.items) if (i.kind === 'component') massByNode.set(i.ref, i.massKg);

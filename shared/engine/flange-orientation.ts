@@ -23,7 +23,10 @@ export function wrapToHalfPitch(deg: number, pitchDeg: number): number {
   return d;
 }
 
-/** A rotation of `deltaDeg` (positive = clockwise seen facing) as a correction. */
+/**
+ * A turn of `deltaDeg` from the flange's designed position (positive = clockwise looking at
+ * the face) as a correction; see {@link RotationCorrection} for the one convention.
+ */
 export function correctionFor(
   flangeId: string,
   deltaDeg: number,
@@ -31,10 +34,15 @@ export function correctionFor(
 ): RotationCorrection {
   return {
     flangeId,
-    rotateDeg: Math.abs(deltaDeg),
-    sense: deltaDeg >= 0 ? 'clockwise' : 'counter-clockwise',
+    rotateClockwiseLookingAtFaceDeg: deltaDeg,
     atBoltCircleMm: boltCircleMm === null ? null : ((boltCircleMm / 2) * Math.abs(deltaDeg) * Math.PI) / 180,
   };
+}
+
+/** "12.5° clockwise" / "3° counter-clockwise": a correction's turn in words (looking at the face). */
+export function correctionTurnWords(c: RotationCorrection): string {
+  const d = c.rotateClockwiseLookingAtFaceDeg;
+  return `${r(Math.abs(d))}° ${d >= 0 ? 'clockwise' : 'counter-clockwise'}`;
 }
 
 /** Orientation of every flange end, with two-hole checks. */
@@ -69,7 +77,7 @@ export function flangeOrientations(
     if (mustTwoHole && pitch !== null && !straddles) {
       correction = correctionFor(nodeId, -offset, a.detail.boltCircleMm);
       const mm = correction.atBoltCircleMm ?? 0;
-      const msg = `Flange ${nodeId} must be two-holed but its first hole is at ${r(rotationDeg)}° from the ${reference === 'plant-vertical' ? 'vertical' : 'north'}: rotate ${r(correction.rotateDeg)}° ${correction.sense} (${r(mm)} mm at the bolt circle)`;
+      const msg = `Flange ${nodeId} must be two-holed but its first hole is at ${r(rotationDeg)}° from the ${reference === 'plant-vertical' ? 'vertical' : 'north'}: turn it ${correctionTurnWords(correction)} looking at its face (${r(mm)} mm at the bolt circle)`;
       if (mm > toleranceMm) addError(issues, 'flange-not-two-holed', msg, nodeId);
       else addWarning(issues, 'flange-not-two-holed', msg, nodeId);
     }
@@ -92,6 +100,7 @@ export function flangeOrientations(
       bendPlaneRotationDeg,
       bendPlaneNodeId: bend?.nodeId ?? null,
       correction,
+      raisedFaceMm: a.detail.raisedFaceMm,
     });
   }
   return out;

@@ -10,7 +10,7 @@ import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import type { FlangeOrientation, FlangePairCheck } from './compute-result';
 import type { SpoolGraph } from './build-graph';
 import { clockwiseAngleDeg } from './clock-angles';
-import { correctionFor, wrapToHalfPitch } from './flange-orientation';
+import { correctionFor, correctionTurnWords, wrapToHalfPitch } from './flange-orientation';
 import { apply, applyTransposed, IDENTITY, multiply, rotationBetween, type Mat3 } from './rotation-matrix';
 import { addWarning, type IssueSink } from './issues';
 import type { NodeAnalysis } from './node-analysis';
@@ -110,12 +110,15 @@ export function flangePairChecks(
       const errorMm =
         B.boltCircleMm === null ? null : ((B.boltCircleMm / 2) * Math.abs(errorDeg) * Math.PI) / 180;
       const within = errorMm === null ? null : errorMm <= toleranceMm;
-      const correction = errorDeg === 0 ? null : correctionFor(B.nodeId, errorDeg, B.boltCircleMm);
+      // errorDeg runs from the matched position to b as designed; the correction turns b
+      // from its design back onto the matched position (the same sense as a flange's own
+      // two-hole correction: applied to b's design, it leaves no error).
+      const correction = errorDeg === 0 ? null : correctionFor(B.nodeId, -errorDeg, B.boltCircleMm);
       if (within === false) {
         addWarning(
           issues,
           'flange-rotation-mismatch',
-          `Flanges ${A.nodeId} and ${B.nodeId}: matching ${B.nodeId} to ${A.nodeId} along the spool leaves its holes ${r(Math.abs(errorDeg))}° (${r(errorMm!)} mm at the bolt circle) off the design; rotate ${B.nodeId} ${r(Math.abs(errorDeg))}° ${correction!.sense} from the matched position`,
+          `Flanges ${A.nodeId} and ${B.nodeId}: matching ${B.nodeId} to ${A.nodeId} along the spool leaves its holes ${r(Math.abs(errorDeg))}° (${r(errorMm!)} mm at the bolt circle) off the design; to line them up, turn ${B.nodeId} ${correctionTurnWords(correction!)} looking at its face from its designed position`,
           B.nodeId,
         );
       }

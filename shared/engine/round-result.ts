@@ -42,7 +42,7 @@ function vec(p: Vec3 | null | undefined, c: Counter): void {
 
 function correction(k: RotationCorrection | null, c: Counter): void {
   if (!k) return;
-  k.rotateDeg = n(k.rotateDeg, c);
+  k.rotateClockwiseLookingAtFaceDeg = n(k.rotateClockwiseLookingAtFaceDeg, c);
   k.atBoltCircleMm = nn(k.atBoltCircleMm, c);
 }
 
@@ -117,6 +117,7 @@ export function roundResult(result: SpoolResult): SpoolResult {
     f.boltCircleMm = nn(f.boltCircleMm, c);
     f.rotationDeg = n(f.rotationDeg, c);
     f.bendPlaneRotationDeg = nn(f.bendPlaneRotationDeg, c);
+    f.raisedFaceMm = nn(f.raisedFaceMm, c);
     vec(f.faceCentre, c);
     vec(f.outward, c);
     vec(f.firstHoleDirection, c);

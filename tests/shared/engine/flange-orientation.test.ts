@@ -56,7 +56,8 @@ describe('bolt holes straddle the centrelines', () => {
     const r = straight('6', 150, { boltRotationDeg: 0, mustTwoHole: true });
     const f = r.flanges.find((q) => q.nodeId === 'f1')!;
     expect(f.straddles).toBe(false);
-    expect(f.correction?.rotateDeg).toBeCloseTo(22.5, 6);
+    // Exactly half a pitch off: either sense straddles; the engine turns back (−22.5°).
+    expect(Math.abs(f.correction!.rotateClockwiseLookingAtFaceDeg)).toBeCloseTo(22.5, 6);
     // 241.3/2 × 22.5° in radians = 47.38 mm at the bolt circle (C).
     expect(f.correction?.atBoltCircleMm).toBeCloseTo(47.38, 2);
     expect(r.issues.find((i) => i.code === 'flange-not-two-holed')?.severity).toBe('error');
@@ -84,7 +85,9 @@ describe('flange pairs', () => {
     expect(pair.errorDeg).toBeCloseTo(3, 6);
     expect(pair.errorMm).toBeCloseTo(9.48, 2);
     expect(pair.withinTolerance).toBe(false);
-    expect(pair.correction).toMatchObject({ flangeId: 'f2', sense: 'clockwise' });
+    // f2 sits 3° clockwise of the matched position: the turn back is 3° counter-clockwise.
+    expect(pair.correction?.flangeId).toBe('f2');
+    expect(pair.correction?.rotateClockwiseLookingAtFaceDeg).toBeCloseTo(-3, 6);
     expect(r.issues.some((i) => i.code === 'flange-rotation-mismatch' && i.componentId === 'f2')).toBe(true);
   });
 

@@ -195,7 +195,7 @@ function drawFlangeCell(
   if (f.correction) {
     const c = f.correction;
     line(
-      `Turn ${fmtDeg(c.rotateDeg)} ${c.sense === 'clockwise' ? 'CW' : 'CCW'}${c.atBoltCircleMm === null ? '' : ` = ${formatLength(c.atBoltCircleMm, units)} at BC`}`,
+      `Turn ${fmtDeg(Math.abs(c.rotateClockwiseLookingAtFaceDeg))} ${c.rotateClockwiseLookingAtFaceDeg >= 0 ? 'CW' : 'CCW'} facing${c.atBoltCircleMm === null ? '' : ` = ${formatLength(c.atBoltCircleMm, units)} at BC`}`,
       { bold: true, warn: true },
     );
   }
@@ -226,7 +226,7 @@ export function flangePairsBlock(
     rows: result.flangePairs.map((p: FlangePairCheck) => {
       const ok = p.withinTolerance;
       const fix = p.correction
-        ? `rotate ${name(p.correction.flangeId)} ${fmtDeg(p.correction.rotateDeg)} ${p.correction.sense}${p.correction.atBoltCircleMm === null ? '' : ` (${formatLength(p.correction.atBoltCircleMm, units)})`}`
+        ? `turn ${name(p.correction.flangeId)} ${fmtDeg(Math.abs(p.correction.rotateClockwiseLookingAtFaceDeg))} ${p.correction.rotateClockwiseLookingAtFaceDeg >= 0 ? 'clockwise' : 'counter-clockwise'} looking at its face${p.correction.atBoltCircleMm === null ? '' : ` (${formatLength(p.correction.atBoltCircleMm, units)})`}`
         : '';
       return {
         cells: [

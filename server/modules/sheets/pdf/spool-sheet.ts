@@ -90,6 +90,11 @@ function sheetNotes(input: SpoolSheetInput, templateProblems: string[]): string[
     `Flange bolt holes as shown in the bolt-hole views; tolerance ${formatLength(spec.boltHoleToleranceMm, units)} at the bolt circle. Check every flange before tacking.`,
     'Check overall and centre-to-face dimensions against this sheet before release; record results on the spool’s inspection record.',
   ];
+  const raisedFace = result.flanges.find((f) => f.raisedFaceMm !== null)?.raisedFaceMm ?? null;
+  if (raisedFace !== null)
+    notes.push(
+      `Flange take-offs include a ${formatLength(raisedFace, units)} raised face (ASME B16.5 metric tables); many inch-made flanges have 1.6 mm: measure before cutting.`,
+    );
   if (design.description) notes.push(`Design: ${design.description}`);
   if (header.revision.note) notes.push(`Revision ${header.revision.letter}: ${header.revision.note}`);
   notes.push(...templateProblems);

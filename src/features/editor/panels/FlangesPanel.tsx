@@ -6,10 +6,11 @@ import type { Selection } from '../model/editor-selection';
 import type { UserNames } from '../model/user-names';
 import { PanelButton } from './panel-bits';
 
-/** Plain words for a rotation correction, in degrees and at the bolt circle. */
+/** Plain words for a rotation correction (from the flange as designed, looking at its face), in degrees and at the bolt circle. */
 export function correctionWords(c: RotationCorrection, units: LengthUnits, names: UserNames): string {
   const arc = c.atBoltCircleMm !== null ? ` (${formatLength(c.atBoltCircleMm, units)} at the bolt circle)` : '';
-  return `Rotate ${names.node(c.flangeId)} ${c.rotateDeg.toFixed(1)}° ${c.sense === 'clockwise' ? 'clockwise' : 'counter-clockwise'}, seen facing it${arc}`;
+  const d = c.rotateClockwiseLookingAtFaceDeg;
+  return `Turn ${names.node(c.flangeId)} ${Math.abs(d).toFixed(1)}° ${d >= 0 ? 'clockwise' : 'counter-clockwise'} from its drawn position, looking at its face${arc}`;
 }
 
 /**
@@ -36,7 +37,7 @@ export function FlangesPanel({
   const apply = (flangeId: string, c: RotationCorrection) => {
     const f = result.flanges.find((x) => x.nodeId === flangeId);
     if (!f) return;
-    const next = f.rotationDeg + (c.sense === 'clockwise' ? c.rotateDeg : -c.rotateDeg);
+    const next = f.rotationDeg + c.rotateClockwiseLookingAtFaceDeg;
     model.edit((d) => setFlangeBoltRotation(d, { nodeId: flangeId, rotationDeg: next }));
   };
   return (

@@ -232,6 +232,7 @@ export function NodeProperties({
             <Fact key={i} label={`Take-off, end ${i + 1} (${e.joint})`} value={e.takeOffMm === null ? '—' : formatLength(e.takeOffMm, units)} />
           ))}
           {headerAxis && placedOrientation !== null ? <Fact label="Orientation" value={describeOrientation(headerAxis, placedOrientation)} /> : null}
+          {flange?.raisedFaceMm ? <Fact label="Raised face (in the take-off)" value={`${formatLength(flange.raisedFaceMm, units)}, ASME B16.5 metric; inch-made flanges are often 1.6 mm`} /> : null}
           {component?.massKg ? <Fact label="Weight (est.)" value={`${component.massKg.toFixed(1)} kg`} /> : null}
           {flange ? (
             <>

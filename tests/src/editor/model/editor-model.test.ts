@@ -149,7 +149,7 @@ describe('EditorModel', () => {
     const f = resultOf(m).flanges[0]!;
     expect(f.rotationDeg).toBeCloseTo(10, 6);
     expect(f.straddles).toBe(false);
-    expect(f.correction?.rotateDeg).toBeCloseTo(12.5, 6);
+    expect(f.correction?.rotateClockwiseLookingAtFaceDeg).toBeCloseTo(12.5, 6);
     expect(m.edit((d) => setFlangeBoltRotation(d, { nodeId: flange, rotationDeg: null })).ok).toBe(true);
     expect(resultOf(m).flanges[0]!.straddles).toBe(true);
   });
