@@ -22,6 +22,7 @@ import { roundResult } from './round-result';
 import { WEIGHT_CAUTION, computeWeights } from './weights';
 import { buildWeldList } from './weld-list';
 import { reportUnconfirmed, unconfirmedSink } from './unconfirmed-data';
+import { reportSecondary } from './secondary-data';
 import { isSupportedFlangeClass, unsupportedFlangeClassMessage } from '../standards/flanges';
 
 /** Geometric tolerances. */
@@ -110,6 +111,7 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
   const pipes = runPipes(graph, sizes, spec, issues, unconfirmed);
   const analyses = analyseNodes(graph, roles, pipes, spec, angleDeg, issues, unconfirmed);
   reportUnconfirmed(unconfirmed, issues);
+  reportSecondary(graph.nodeOrder, analyses, pipes, issues);
   const { runs: placed, positions } = placeRuns(
     graph,
     analyses,
@@ -141,8 +143,13 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
     spec.boltHoleToleranceMm,
     issues,
   );
-  const bomItems = buildBillOfMaterials(graph, analyses, pieces, (p) =>
-    p.runIds[0] ? (pipes.get(p.runIds[0])?.spec.sawKerfMm ?? spec.sawKerfMm) : spec.sawKerfMm,
+  const bomItems = buildBillOfMaterials(
+    graph,
+    analyses,
+    pieces,
+    (p) => (p.runIds[0] ? (pipes.get(p.runIds[0])?.spec.sawKerfMm ?? spec.sawKerfMm) : spec.sawKerfMm),
+    pipes,
+    spec,
   );
 
   const runs: RunResult[] = [];

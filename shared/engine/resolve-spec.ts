@@ -3,6 +3,7 @@
  */
 import type { SpecOverrides } from '../schemas/spool-design-spec.schema';
 import { SOCKET_EXPANSION_GAP_MM } from '../standards/socket-weld-fittings';
+import { DEFAULT_BOLTING_MATERIAL, DEFAULT_GASKET_TYPE } from '../standards/flange-joint-kits';
 import type { ResolvedSpec } from './compute-result';
 
 /**
@@ -10,6 +11,7 @@ import type { ResolvedSpec } from './compute-result';
  * rootGapMm 3: open-root gaps are typically 1.6–3.2 mm (common practice; the WPS rules).
  * sawKerfMm 3, minPieceLengthMm 50: common practice, no source; shops set their own.
  * boltHoleToleranceMm 1.6: bolt-hole rotation at the bolt circle, from memory (PFI ES-3).
+ * gasketType spiral-wound, boltingMaterial B7/2H: common practice, no source; the job decides.
  */
 export const BUILT_IN_SPEC: ResolvedSpec = Object.freeze({
   nps: null,
@@ -23,6 +25,9 @@ export const BUILT_IN_SPEC: ResolvedSpec = Object.freeze({
   minPieceLengthMm: 50,
   socketGapMm: SOCKET_EXPANSION_GAP_MM,
   boltHoleToleranceMm: 1.6,
+  gasketType: DEFAULT_GASKET_TYPE,
+  gasketMaterial: null,
+  boltingMaterial: DEFAULT_BOLTING_MATERIAL,
 });
 
 /** Applies `overrides` (undefined fields ignored) on top of a resolved spec. */

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { npsSchema } from '../standards/nps';
 import { scheduleSchema } from '../standards/pipe-schedules';
 import { flangeClassSchema } from './spool-design-primitives.schema';
+import { GASKET_TYPES } from '../standards/flange-joint-kits';
 
 /**
  * Spec values a design, a run or a node may set. Every field is optional: what a
@@ -31,6 +32,15 @@ export const specOverridesSchema = z
     socketGapMm: z.number().finite().min(0).max(5).optional(),
     /** Allowed bolt-hole rotation between flanges, mm at the bolt circle. */
     boltHoleToleranceMm: z.number().finite().min(0).max(20).optional(),
+
+    // ── Loose items kitted with every flange face (bill of materials) ──────────────────
+    /** Gasket kind: ASME B16.20 spiral-wound (default) or ASME B16.21 flat sheet ring. */
+    gasketType: z.enum(GASKET_TYPES).optional(),
+    /** Gasket material as ordered; blank = Tackline's default for the kind. */
+    gasketMaterial: z.string().trim().min(1).max(80).optional(),
+    /** Stud and nut material (e.g. `ASTM A193 B7 studs, A194 2H nuts`). */
+    boltingMaterial: z.string().trim().min(1).max(80).optional(),
+    // ── end of loose-item fields ──────────────────────────────────────────────────────
   })
   .strict();
 /** Partial spec values (a design's, a run's or a node's overrides). */

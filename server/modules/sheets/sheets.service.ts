@@ -38,6 +38,8 @@ export function jobSpecOverrides(job: Pick<Job, 'spec'>): SpecOverrides {
   if (schedule.success) out.schedule = schedule.data;
   // Passed on as stored, never swapped for another: the engine refuses a class without a table.
   out.flangeClass = job.spec.flangeClass;
+  if (job.spec.gasketType) out.gasketType = job.spec.gasketType;
+  if (job.spec.boltingMaterial) out.boltingMaterial = job.spec.boltingMaterial;
   return out;
 }
 
