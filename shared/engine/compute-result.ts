@@ -9,6 +9,7 @@
  *   never negative, never NaN; the reason is in `issues`.
  */
 import type { FlangeClass } from '../standards/flanges';
+import type { GasketType } from '../standards/flange-joint-kits';
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import type { SpoolNodeKind } from '../schemas/spool-design-node.schema';
 import type { RunLengthKind } from '../schemas/spool-design-run.schema';
@@ -39,6 +40,11 @@ export type ResolvedSpec = {
   closeCoupleToleranceMm: number;
   /** Least clearance between a branch weld's toe and the next girth or branch weld's toe, mm. */
   minWeldToeClearanceMm: number;
+  // Loose items kitted with every flange face (bill of materials).
+  gasketType: GasketType;
+  /** Gasket material as ordered; null = the default for the kind. */
+  gasketMaterial: string | null;
+  boltingMaterial: string;
 };
 
 /** One problem found in the design. `componentId` is a node id or a run id. */
@@ -331,13 +337,36 @@ export type OverallDimensions = {
 
 /** A bill-of-materials line. */
 export type BomItem = {
-  category: 'pipe' | 'fitting' | 'flange' | 'socket-fitting' | 'branch-outlet';
+  category: 'pipe' | 'fitting' | 'flange' | 'socket-fitting' | 'branch-outlet' | 'bolting' | 'gasket';
+  /** The whole line as one sentence, size first (`NPS 10 Elbow 90° LR STD, ASTM A234 WPB, ASME B16.9`). */
   description: string;
+  /** The item's own size: the large end of a reducer, the run of a tee, an outlet's own size. */
   nps: Nps;
+  /**
+   * The second size: a reducer's small end, a reducing tee's outlet, or the header an outlet
+   * or half coupling sits on; null for single-size items.
+   */
+  nps2: Nps | null;
+  /** Size as printed: `NPS 10`, `NPS 10 × 6`, `NPS 2 on NPS 10`. */
+  sizeLabel: string;
+  /** Wall schedule or pressure class as printed: `STD`, `Class 150, STD bore`, `Class 3000`. */
+  rating: string | null;
+  /** End preparation: `BW` (bevel, ASME B16.25), `SW`, `RF × BW`, `RF`, or the pipe ends cut. */
+  endPrep: string | null;
+  material: string;
+  /** The standard the item is ordered to (`ASME B16.9`, `ASME B16.20`). */
+  standard: string;
+  /** Shipped loose with the spool, not welded to it (bolts, gaskets, blinds). */
+  loose: boolean;
+  /** Pieces (pipe), items, or studs (bolting). */
   count: number;
   /** Pipe lines: total cut length and stock length (cut + kerf per cut), mm. */
   totalCutMm: number | null;
   totalStockMm: number | null;
+  /** Bolting lines: studs per joint, stud length without points (mm), nuts in all. */
+  bolting?: { perJoint: number; joints: number; diameterIn: string; lengthMm: number; nutCount: number };
+  /** A value on this line is not confirmed against the standard: the plain warning. */
+  note: string | null;
 };
 
 /** Bill of materials. */

@@ -23,6 +23,7 @@ import { WEIGHT_CAUTION, computeWeights } from './weights';
 import { buildWeldList } from './weld-list';
 import { checkWeldToeClearance } from './weld-toe-clearance';
 import { reportUnconfirmed, unconfirmedSink } from './unconfirmed-data';
+import { reportSecondary } from './secondary-data';
 import { isSupportedFlangeClass, unsupportedFlangeClassMessage } from '../standards/flanges';
 
 /** Geometric tolerances. */
@@ -112,6 +113,7 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
   const pipes = runPipes(graph, sizes, spec, issues, unconfirmed);
   const analyses = analyseNodes(graph, roles, pipes, spec, angleDeg, issues, unconfirmed);
   reportUnconfirmed(unconfirmed, issues);
+  reportSecondary(graph.nodeOrder, analyses, pipes, issues);
   const { runs: placed, positions } = placeRuns(
     graph,
     analyses,
@@ -147,8 +149,13 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
     spec.boltHoleToleranceMm,
     issues,
   );
-  const bomItems = buildBillOfMaterials(graph, analyses, pieces, (p) =>
-    p.runIds[0] ? (pipes.get(p.runIds[0])?.spec.sawKerfMm ?? spec.sawKerfMm) : spec.sawKerfMm,
+  const bomItems = buildBillOfMaterials(
+    graph,
+    analyses,
+    pieces,
+    (p) => (p.runIds[0] ? (pipes.get(p.runIds[0])?.spec.sawKerfMm ?? spec.sawKerfMm) : spec.sawKerfMm),
+    pipes,
+    spec,
   );
 
   const runs: RunResult[] = [];

@@ -15,6 +15,8 @@ export function jobSpecOverrides(spec: Job['spec'] | undefined): SpecOverrides {
     material: spec.material,
     ...(schedule.success ? { schedule: schedule.data } : {}),
     flangeClass: spec.flangeClass,
+    ...(spec.gasketType ? { gasketType: spec.gasketType } : {}),
+    ...(spec.boltingMaterial ? { boltingMaterial: spec.boltingMaterial } : {}),
     rootGapMm: spec.rootGapMm,
     sawKerfMm: spec.sawKerfMm,
     minPieceLengthMm: spec.minPieceLengthMm,

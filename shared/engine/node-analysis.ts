@@ -123,7 +123,8 @@ export type NodeAnalysis = {
   ends: NodeEnd[];
   nps: Nps | null;
   description: string;
-  bom: Omit<BomItem, 'count' | 'totalCutMm' | 'totalStockMm'> | null;
+  /** What the take-off knows of the BOM line; the bill of materials adds size, rating, ends and the rest. */
+  bom: Pick<BomItem, 'category' | 'description' | 'nps'> | null;
   source: string | null;
   detail: NodeDetail;
   internalWelds: InternalWeld[];

@@ -3,6 +3,7 @@
  */
 import type { SpecOverrides } from '../schemas/spool-design-spec.schema';
 import { SOCKET_EXPANSION_GAP_MM } from '../standards/socket-weld-fittings';
+import { DEFAULT_BOLTING_MATERIAL, DEFAULT_GASKET_TYPE } from '../standards/flange-joint-kits';
 import type { ResolvedSpec } from './compute-result';
 
 /**
@@ -18,6 +19,7 @@ import type { ResolvedSpec } from './compute-result';
  * ±2 mm for the common sizes (from memory; the table widens it for the largest sizes).
  * minWeldToeClearanceMm 50: weld toes kept apart so heat-affected zones do not overlap
  * (common practice, no source; many client specs ask for 50 mm or 4 × wall).
+ * gasketType spiral-wound, boltingMaterial B7/2H: common practice, no source; the job decides.
  */
 export const BUILT_IN_SPEC: ResolvedSpec = Object.freeze({
   nps: null,
@@ -35,6 +37,9 @@ export const BUILT_IN_SPEC: ResolvedSpec = Object.freeze({
   minBendAngleDeg: 3,
   closeCoupleToleranceMm: 2,
   minWeldToeClearanceMm: 50,
+  gasketType: DEFAULT_GASKET_TYPE,
+  gasketMaterial: null,
+  boltingMaterial: DEFAULT_BOLTING_MATERIAL,
 });
 
 /** Applies `overrides` (undefined fields ignored) on top of a resolved spec. */

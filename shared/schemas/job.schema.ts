@@ -3,6 +3,7 @@ import { idSchema, timestampSchema } from './id.schema';
 import { listQuerySchema, queryBooleanSchema } from './list-query.schema';
 import { flangeClassSchema } from './spool-design-primitives.schema';
 import { textSchema } from './text.schema';
+import { GASKET_TYPES } from '../standards/flange-joint-kits';
 
 export { flangeClassSchema };
 
@@ -30,6 +31,13 @@ export const jobSpecSchema = z
     rootGapMm: z.number().min(0).max(10),
     sawKerfMm: z.number().min(0).max(10),
     minPieceLengthMm: z.number().min(0).max(2000),
+
+    // ── Loose items kitted with every flange face (optional; Tackline's defaults otherwise) ──
+    /** ASME B16.20 spiral-wound or ASME B16.21 sheet gaskets. */
+    gasketType: z.enum(GASKET_TYPES).optional(),
+    /** Stud and nut material as ordered. */
+    boltingMaterial: textSchema().trim().min(1).max(80).optional(),
+    // ── end of loose-item fields ──
   })
   .strict();
 /** A job's default spec. */

@@ -3,6 +3,7 @@ import { npsSchema } from '../standards/nps';
 import { scheduleSchema } from '../standards/pipe-schedules';
 import { flangeClassSchema } from './spool-design-primitives.schema';
 import { textSchema } from './text.schema';
+import { GASKET_TYPES } from '../standards/flange-joint-kits';
 
 /**
  * Spec values a design, a run or a node may set. Every field is optional: what a
@@ -46,6 +47,15 @@ export const specOverridesSchema = z
     closeCoupleToleranceMm: z.number().finite().min(0).max(10).optional(),
     /** Least clearance between the toes of a branch weld and a nearby girth or branch weld, mm. */
     minWeldToeClearanceMm: z.number().finite().min(0).max(1000).optional(),
+
+    // ── Loose items kitted with every flange face (bill of materials) ──────────────────
+    /** Gasket kind: ASME B16.20 spiral-wound (default) or ASME B16.21 flat sheet ring. */
+    gasketType: z.enum(GASKET_TYPES).optional(),
+    /** Gasket material as ordered; blank = Tackline's default for the kind. */
+    gasketMaterial: textSchema().trim().min(1).max(80).optional(),
+    /** Stud and nut material (e.g. `ASTM A193 B7 studs, A194 2H nuts`). */
+    boltingMaterial: textSchema().trim().min(1).max(80).optional(),
+    // ── end of loose-item fields ──────────────────────────────────────────────────────
   })
   .strict();
 /** Partial spec values (a design's, a run's or a node's overrides). */

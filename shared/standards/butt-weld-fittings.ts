@@ -90,7 +90,10 @@ export function elbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensio
         backToFaceMm: row.lr180.k[0],
         bendRadiusMm: row.lr90[0],
         status: weakestStatus(row.lr180.o[1], row.lr180.k[1], row.lr90[1]),
-        source: withStatusNote(ELBOW_SOURCES.lr180, weakestStatus(row.lr180.o[1], row.lr180.k[1], row.lr90[1])),
+        source: withStatusNote(
+          ELBOW_SOURCES.lr180,
+          weakestStatus(row.lr180.o[1], row.lr180.k[1], row.lr90[1]),
+        ),
       });
     case 'SR180':
       if (!row.sr180 || !row.sr90) return missing(none);
@@ -99,7 +102,10 @@ export function elbowDimensions(nps: Nps, kind: ElbowKind): Lookup<ElbowDimensio
         backToFaceMm: row.sr180.k[0],
         bendRadiusMm: row.sr90[0],
         status: weakestStatus(row.sr180.o[1], row.sr180.k[1], row.sr90[1]),
-        source: withStatusNote(ELBOW_SOURCES.sr180, weakestStatus(row.sr180.o[1], row.sr180.k[1], row.sr90[1])),
+        source: withStatusNote(
+          ELBOW_SOURCES.sr180,
+          weakestStatus(row.sr180.o[1], row.sr180.k[1], row.sr90[1]),
+        ),
       });
   }
 }

@@ -4,7 +4,12 @@
  */
 import { STUD_LENGTH_SOURCES, STUD_LENGTH_TABLE, type StudLengthRow } from './b16-5-bolting-table';
 import { weakestStatus, withStatusNote, type DataStatus } from './data-status';
-import { flangeRow, isSupportedFlangeClass, unsupportedFlangeClassMessage, type FlangeClass } from './flanges';
+import {
+  flangeRow,
+  isSupportedFlangeClass,
+  unsupportedFlangeClassMessage,
+  type FlangeClass,
+} from './flanges';
 import { found, missing, type Lookup } from './lookup-result';
 import type { Nps } from './nps';
 

@@ -77,7 +77,11 @@ export function pipeDimensions(nps: Nps, schedule: Schedule): Lookup<PipeDimensi
 export function pipeOdMm(nps: Nps): Lookup<{ odMm: number; status: DataStatus; source: string }> {
   const row = ROWS.get(nps);
   if (!row) return missing(`No ASME B36.10M pipe data for NPS ${nps}`);
-  return found({ odMm: row.odMm, status: row.odStatus, source: withStatusNote('ASME B36.10M', row.odStatus) });
+  return found({
+    odMm: row.odMm,
+    status: row.odStatus,
+    source: withStatusNote('ASME B36.10M', row.odStatus),
+  });
 }
 
 /** "Sch 40" for numbers, "STD" for weight classes: how a sheet writes it. */

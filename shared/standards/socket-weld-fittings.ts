@@ -110,9 +110,19 @@ export function socketWeldDimensions(nps: Nps, kind: SocketFittingKind): Lookup<
   switch (kind) {
     case 'elbow90':
     case 'tee':
-      return found({ ...socket, centreToBottomMm: row.a90, status: 'S', source: withStatusNote(SOURCE_2016, 'S') });
+      return found({
+        ...socket,
+        centreToBottomMm: row.a90,
+        status: 'S',
+        source: withStatusNote(SOURCE_2016, 'S'),
+      });
     case 'elbow45':
-      return found({ ...socket, centreToBottomMm: row.a45, status: 'S', source: withStatusNote(SOURCE_2016, 'S') });
+      return found({
+        ...socket,
+        centreToBottomMm: row.a45,
+        status: 'S',
+        source: withStatusNote(SOURCE_2016, 'S'),
+      });
     case 'coupling':
       return found({
         ...socket,

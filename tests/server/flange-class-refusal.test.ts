@@ -20,7 +20,11 @@ afterAll(async () => {
 });
 
 interface ErrorAnswer {
-  error?: { code: string; message: string; details?: { issues?: Array<{ path: PropertyKey[]; message: string }> } };
+  error?: {
+    code: string;
+    message: string;
+    details?: { issues?: Array<{ path: PropertyKey[]; message: string }> };
+  };
 }
 
 const job = (flangeClass: unknown) => ({
@@ -31,17 +35,20 @@ const job = (flangeClass: unknown) => ({
 });
 
 describe('flange classes without tables are refused by the API', () => {
-  it.each([400, 900, 1500, 2500, 125, '600', null])('POST /api/jobs with class %j: 400, nothing stored', async (cls) => {
-    const before = await snapshot(db.dataSource);
-    const res = await admin.post('/api/jobs').send(job(cls));
-    const body = res.body as ErrorAnswer;
-    expect(res.status, JSON.stringify(body)).toBe(400);
-    expect(body.error?.code).toBe('invalid_request');
-    const issue = body.error?.details?.issues?.find((i) => i.path.join('.') === 'spec.flangeClass');
-    expect(issue?.message).toMatch(/Classes 150, 300 and 600/);
-    if (typeof cls === 'number') expect(issue?.message).toContain(`Class ${cls} is not supported`);
-    expect(await snapshot(db.dataSource)).toBe(before);
-  });
+  it.each([400, 900, 1500, 2500, 125, '600', null])(
+    'POST /api/jobs with class %j: 400, nothing stored',
+    async (cls) => {
+      const before = await snapshot(db.dataSource);
+      const res = await admin.post('/api/jobs').send(job(cls));
+      const body = res.body as ErrorAnswer;
+      expect(res.status, JSON.stringify(body)).toBe(400);
+      expect(body.error?.code).toBe('invalid_request');
+      const issue = body.error?.details?.issues?.find((i) => i.path.join('.') === 'spec.flangeClass');
+      expect(issue?.message).toMatch(/Classes 150, 300 and 600/);
+      if (typeof cls === 'number') expect(issue?.message).toContain(`Class ${cls} is not supported`);
+      expect(await snapshot(db.dataSource)).toBe(before);
+    },
+  );
 
   it('PATCH to Class 900: 400, the job keeps its class', async () => {
     const created = await createJob(db.dataSource, shop);
@@ -50,7 +57,9 @@ describe('flange classes without tables are refused by the API', () => {
       .patch(`/api/jobs/${created.id}`)
       .send({ spec: { ...SPEC, flangeClass: 900 }, version: created.version });
     expect(res.status).toBe(400);
-    expect((res.body as ErrorAnswer).error?.details?.issues?.[0]?.message).toMatch(/Class 900 is not supported/);
+    expect((res.body as ErrorAnswer).error?.details?.issues?.[0]?.message).toMatch(
+      /Class 900 is not supported/,
+    );
     expect(await snapshot(db.dataSource)).toBe(before);
   });
 

@@ -38,7 +38,11 @@ describe('a job class reaches the sheet as stored, never as Class 150', () => {
     expect(out.flangeClass).toBe(400);
     const r = computeSpool(design(), { jobSpec: out });
     expect(r.ok).toBe(false);
-    expect(r.issues.some((i) => i.severity === 'error' && /Class 400 is not supported.*150, 300 and 600/.test(i.message))).toBe(true);
+    expect(
+      r.issues.some(
+        (i) => i.severity === 'error' && /Class 400 is not supported.*150, 300 and 600/.test(i.message),
+      ),
+    ).toBe(true);
     expect(JSON.stringify(r.bom)).not.toContain('Class 150');
     expect(r.spec.flangeClass).toBe(400);
   });

@@ -74,6 +74,6 @@ describe('samples', () => {
     expect(seg.cutLengthMm).toBeCloseTo(2 * 381 * Math.tan(Math.PI / 8) - 2.5, 3);
     // Two welds deflect 45° each: every mitre end is cut 22.5° from square.
     expect(seg.ends.map((e) => e.mitreCutDeg)).toEqual([22.5, 22.5]);
-    expect(r.bom.items.some((i) => i.description.startsWith('Flange blind'))).toBe(true);
+    expect(r.bom.items.some((i) => i.description.startsWith('NPS 10 Flange blind'))).toBe(true);
   });
 });

@@ -49,7 +49,11 @@ describe('ASME B16.5 Class 600 drilling (B16.5-2013 Table 15)', () => {
   ];
   it.each(table15)('NPS %s: OD %i, bolt circle %f, %i bolts', (nps, od, bc, n) => {
     for (const type of ['weld-neck', 'slip-on', 'blind'] as const) {
-      expect(value(flangeDimensions(nps, 600, type))).toMatchObject({ odMm: od, boltCircleMm: bc, boltCount: n });
+      expect(value(flangeDimensions(nps, 600, type))).toMatchObject({
+        odMm: od,
+        boltCircleMm: bc,
+        boltCount: n,
+      });
     }
   });
 
@@ -173,10 +177,14 @@ describe('source strings name the standard and table only', () => {
   it('lookups start with the standard and flag secondary and from-memory values plainly', () => {
     expect(value(flangeDimensions('6', 150, 'weld-neck')).source).toBe('ASME B16.5 Class 150');
     // NPS 2 Class 300: drilling S, body S~ (a converted-inch secondary table).
-    expect(value(flangeDimensions('2', 300, 'weld-neck')).source).toBe(`ASME B16.5 Class 300 (${SECONDARY_NOTE})`);
+    expect(value(flangeDimensions('2', 300, 'weld-neck')).source).toBe(
+      `ASME B16.5 Class 300 (${SECONDARY_NOTE})`,
+    );
     expect(value(pipeDimensions('6', 'STD')).source).toBe('ASME B36.10M');
     expect(value(pipeDimensions('6', '160')).source).toBe(`ASME B36.10M (${UNCONFIRMED_NOTE})`);
-    expect(value(elbowDimensions('6', 'LR90')).source).toBe('ASME B16.9 long-radius 90° elbows, centre-to-end A');
+    expect(value(elbowDimensions('6', 'LR90')).source).toBe(
+      'ASME B16.9 long-radius 90° elbows, centre-to-end A',
+    );
     expect(value(reducerDimensions('16', '12')).source).toContain(UNCONFIRMED_NOTE);
     // Half-coupling F is marked unconfirmed until checked against the standard's own table.
     expect(value(socketWeldDimensions('1', 'half-coupling')).source).toContain(UNCONFIRMED_NOTE);

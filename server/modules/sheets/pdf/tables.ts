@@ -11,14 +11,6 @@ const WELD_TYPE: Record<string, string> = {
   'slip-on-fillet': 'Slip-on fillet',
 };
 
-const BOM_CATEGORY: Record<string, string> = {
-  pipe: 'Pipe',
-  fitting: 'Fitting',
-  flange: 'Flange',
-  'socket-fitting': 'Socket fitting',
-  'branch-outlet': 'Branch outlet',
-};
-
 const len = (mm: number | null, units: LengthUnits): string =>
   mm === null ? 'NOT COMPUTED' : formatLength(mm, units);
 
@@ -112,29 +104,53 @@ export function weldListBlock(result: SpoolResult, size: number): FlowBlock {
   });
 }
 
-/** Bill of materials. */
+/** What the BOM quantity column prints for a line. */
+function bomQuantity(item: SpoolResult['bom']['items'][number], units: LengthUnits): string {
+  if (item.category === 'pipe' && item.totalCutMm !== null)
+    return `${formatLength(item.totalCutMm, units)} (${item.count} pc)`;
+  if (item.bolting)
+    return `${item.count} studs, ${item.bolting.nutCount} nuts (${item.bolting.joints} × ${item.bolting.perJoint})`;
+  return String(item.count);
+}
+
+/**
+ * Bill of materials: size (both sizes for reducing items and outlets), the item with its
+ * material and standard, schedule or class, end preparation and quantity. Loose items (studs
+ * with nuts, gaskets, blinds) are marked: they ship with the spool, not welded to it.
+ */
 export function bomBlock(result: SpoolResult, units: LengthUnits, size: number): FlowBlock {
-  const rows: TableRow[] = result.bom.items.map((item, i) => ({
-    cells: [
-      String(i + 1),
-      BOM_CATEGORY[item.category] ?? item.category,
-      item.description,
-      item.category === 'pipe' && item.totalCutMm !== null
-        ? formatLength(item.totalCutMm, units)
-        : String(item.count),
-    ],
-  }));
+  const rows: TableRow[] = result.bom.items.map((item, i) => {
+    const text = item.description.startsWith(`${item.sizeLabel} `)
+      ? item.description.slice(item.sizeLabel.length + 1)
+      : item.description;
+    return {
+      cells: [
+        String(i + 1),
+        item.sizeLabel,
+        item.note ? `${text}. ${item.note}` : text,
+        item.rating ?? '',
+        item.endPrep ?? '',
+        bomQuantity(item, units),
+        item.loose ? 'LOOSE' : '',
+      ],
+      emphasis: item.note ? 'warn' : item.loose ? 'group' : undefined,
+    };
+  });
   return tableBlock({
     title: 'Bill of materials',
     size,
     columns: [
-      { header: 'Item', weight: 0.5 },
-      { header: 'Category', weight: 1.1 },
-      { header: 'Description', weight: 4.4, wrap: true },
-      { header: 'Qty', weight: 1.2, align: 'right', font: 'body-bold' },
+      { header: 'Item', weight: 0.4 },
+      { header: 'Size', weight: 1.1, font: 'body-bold', wrap: true },
+      { header: 'Description, material, standard', weight: 4.2, wrap: true },
+      { header: 'Sch / class', weight: 1.1, wrap: true },
+      { header: 'Ends', weight: 0.9, wrap: true },
+      { header: 'Qty', weight: 1.4, align: 'right', font: 'body-bold', wrap: true },
+      { header: 'Loose', weight: 0.6, align: 'center' },
     ],
     rows,
-    footnote: 'Pipe quantities are total cut length (kerf not included).',
+    footnote:
+      'Pipe quantities are total cut length per size and schedule (kerf not included). LOOSE: shipped loose with the spool for the joint to its mate, not welded; one stud set and one gasket per flange face. Stud lengths exclude the points (ASME B16.5). BW: bevelled for butt welding (ASME B16.25); SW: socket weld; RF: raised face.',
   });
 }
 

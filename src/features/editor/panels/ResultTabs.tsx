@@ -9,12 +9,13 @@ import { useUserNames } from '../hooks/use-user-names';
 import { ChecksPanel } from './ChecksPanel';
 import { CutListPanel } from './CutListPanel';
 import { FlangesPanel } from './FlangesPanel';
+import { MaterialsPanel } from './MaterialsPanel';
 import { WeightPanel } from './WeightPanel';
 import { WeldListPanel } from './WeldListPanel';
 
-type Tab = 'cut' | 'welds' | 'checks' | 'flanges' | 'weight';
+type Tab = 'cut' | 'welds' | 'checks' | 'flanges' | 'weight' | 'materials';
 
-/** The live results under the model: cut list, welds, checks, flanges, weight. */
+/** The live results under the model: cut list, welds, checks, flanges, weight, materials. */
 export function ResultTabs({
   model,
   result,
@@ -42,6 +43,7 @@ export function ResultTabs({
     { id: 'checks', label: 'Checks', badge: errors ? `${errors} error${errors === 1 ? '' : 's'}` : warnings ? `${warnings}` : 'ok', tone: errors ? 'bad' : warnings ? 'warn' : undefined },
     { id: 'flanges', label: 'Bolt holes', badge: flangeProblems ? `${flangeProblems} to fix` : String(result.flanges.length), tone: flangeProblems ? 'bad' : undefined },
     { id: 'weight', label: 'Weight & CoG', badge: `${Math.round(result.weights.emptyKg)} kg` },
+    { id: 'materials', label: 'Materials', badge: String(result.bom.items.length) },
   ];
   return (
     <section aria-label="Results" className="rounded-md border border-steel-200 bg-white">
@@ -80,6 +82,7 @@ export function ResultTabs({
         {tab === 'checks' ? <ChecksPanel result={result} design={design} names={names} onSelect={onSelect} /> : null}
         {tab === 'flanges' ? <FlangesPanel model={model} result={result} names={names} units={units} readOnly={readOnly} onSelect={onSelect} /> : null}
         {tab === 'weight' ? <WeightPanel result={result} units={units} /> : null}
+        {tab === 'materials' ? <MaterialsPanel result={result} units={units} /> : null}
       </div>
     </section>
   );

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import type { SpoolDesign } from '../../../../shared/schemas/spool-design.schema';
 import { FLANGE_CLASSES, type FlangeClass } from '../../../../shared/standards/flanges';
+import type { GasketType } from '../../../../shared/standards/flange-joint-kits';
 import { NPS_VALUES, type Nps } from '../../../../shared/standards/nps';
 import { SCHEDULE_VALUES, type Schedule } from '../../../../shared/standards/pipe-schedules';
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
@@ -46,6 +47,17 @@ export function SpoolSpecPanel({ model, design, result, units, readOnly }: { mod
             ...FLANGE_CLASSES.map((c) => ({ value: String(c), label: `Class ${c}` })),
           ]}
         />
+        <SmallSelect
+          label="Gaskets"
+          value={spec.gasketType ?? ''}
+          disabled={readOnly}
+          onChange={(e) => set({ gasketType: (e.target.value || null) as GasketType | null })}
+          options={[
+            { value: '', label: 'job spec' },
+            { value: 'spiral-wound', label: 'Spiral-wound (B16.20)' },
+            { value: 'sheet', label: 'Sheet (B16.21)' },
+          ]}
+        />
         <LengthInput
           label="Root gap"
           units={units}
@@ -62,6 +74,7 @@ export function SpoolSpecPanel({ model, design, result, units, readOnly }: { mod
           <Fact label="Root gap · saw kerf" value={`${formatLength(result.spec.rootGapMm, units)} · ${formatLength(result.spec.sawKerfMm, units)}`} />
           <Fact label="Shortest piece" value={formatLength(result.spec.minPieceLengthMm, units)} />
           <Fact label="Material" value={result.spec.material} />
+          <Fact label="Loose kit" value={`${result.spec.gasketType === 'sheet' ? 'sheet' : 'spiral-wound'} gaskets · ${result.spec.boltingMaterial}`} />
         </dl>
       ) : null}
     </PanelSection>
