@@ -129,6 +129,12 @@ export function createApp(options: AppOptions): TacklineApp {
     // SPA fallback: every non-API GET gets index.html; React Router takes it from there.
     app.get('/{*splat}', (req, res, next) => {
       if (req.path === '/api' || req.path.startsWith('/api/')) return next();
+      // A missing file (a stale hashed asset, a typo) is a 404, never the page: a browser
+      // would otherwise run or parse HTML as a script or style.
+      if (req.path.startsWith('/assets/') || path.extname(req.path) !== '') {
+        res.status(404).type('text/plain').send('Not found');
+        return;
+      }
       res.set('Cache-Control', 'no-cache');
       res.sendFile(path.join(clientDir, 'index.html'));
     });

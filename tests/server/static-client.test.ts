@@ -34,6 +34,20 @@ describe('serving the built client', () => {
     }
   });
 
+  it('a missing asset or file is a 404, not the page', async () => {
+    const app = testApp(db.dataSource, db.url, { clientDir });
+    for (const missing of [
+      '/assets/x.js',
+      '/assets/index-deadbeef.css',
+      '/favicon-missing.png',
+      '/assets/deep/none',
+    ]) {
+      const res = await request(app).get(missing);
+      expect(res.status, missing).toBe(404);
+      expect(res.text).not.toContain('Tackline test shell');
+    }
+  });
+
   it('never answers an /api path with the page: unknown API routes stay JSON 404s', async () => {
     const app = testApp(db.dataSource, db.url, { clientDir });
     const res = await request(app).get('/api/not-a-route');
