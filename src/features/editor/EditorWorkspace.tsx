@@ -257,16 +257,16 @@ export function EditorWorkspace({
         <div className="flex flex-wrap items-center gap-1">
           {!readOnly ? (
             <>
-              <PanelButton onClick={() => model.undo()} disabled={!snap.canUndo} title={snap.undoLabel ? `Undo: ${snap.undoLabel} (Ctrl+Z)` : 'Undo (Ctrl+Z)'} aria-keyshortcuts="Control+Z">
+              <PanelButton onClick={() => model.undo()} disabled={!snap.canUndo} title={snap.undoLabel ? `Takes back: ${snap.undoLabel} (Ctrl+Z)` : 'Ctrl+Z'} aria-keyshortcuts="Control+Z">
                 <EditorIcon name="undo" className="h-4 w-4" /> Undo
               </PanelButton>
-              <PanelButton onClick={() => model.redo()} disabled={!snap.canRedo} title={snap.redoLabel ? `Redo: ${snap.redoLabel} (Ctrl+Shift+Z)` : 'Redo (Ctrl+Shift+Z)'} aria-keyshortcuts="Control+Shift+Z">
+              <PanelButton onClick={() => model.redo()} disabled={!snap.canRedo} title={snap.redoLabel ? `Does again: ${snap.redoLabel} (Ctrl+Shift+Z)` : 'Ctrl+Shift+Z'} aria-keyshortcuts="Control+Shift+Z">
                 <EditorIcon name="redo" className="h-4 w-4" /> Redo
               </PanelButton>
             </>
           ) : null}
           <FileMenu model={model} modelGroup={modelGroup} readOnly={readOnly} />
-          <PanelButton onClick={() => setKeysOpen(true)} title="Keyboard keys (?)" aria-keyshortcuts="Shift+?">
+          <PanelButton onClick={() => setKeysOpen(true)} title="Every shortcut of the editor (?)" aria-keyshortcuts="Shift+?">
             <EditorIcon name="keyboard" className="h-4 w-4" /> Keys
           </PanelButton>
         </div>
