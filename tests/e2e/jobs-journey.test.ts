@@ -184,7 +184,7 @@ describe('jobs and spools in the browser', () => {
     await page.getByRole('link', { name: READ_MARK }).click();
     await page.getByRole('heading', { name: READ_MARK }).waitFor();
     await page.getByRole('heading', { name: 'Revisions' }).waitFor();
-    for (const name of [/Edit mark/, /Archive/, /Start/, /Issue revision/, /Mark /]) {
+    for (const name of [/Edit mark/, /Archive/, /Start/, /Issue revision/, /Record as /]) {
       await expect(page.getByRole('button', { name }).count()).resolves.toBe(0);
     }
     await page.getByText('Loading the editor…').waitFor({ state: 'detached' });
@@ -235,12 +235,12 @@ describe('jobs and spools in the browser', () => {
     await expect(page.getByRole('button', { name: /Issue revision|Start|Edit mark|Archive/ }).count()).resolves.toBe(0);
     await page.getByText('Loading the editor…').waitFor({ state: 'detached' });
     await saveScreenshot(page, '18-spool-fabricator');
-    await page.getByRole('button', { name: 'Mark cut' }).click();
+    await page.getByRole('button', { name: 'Record as cut' }).click();
     const confirm = page.getByRole('dialog', { name: `Record ${ISSUE_MARK} as Cut?` });
     await saveScreenshot(page, '18b-confirm-cut');
-    await confirm.getByRole('button', { name: 'Mark cut' }).click();
+    await confirm.getByRole('button', { name: 'Record as cut' }).click();
     await confirm.waitFor({ state: 'hidden' });
-    await page.getByRole('button', { name: 'Mark fitted up' }).waitFor();
+    await page.getByRole('button', { name: 'Record as fitted up' }).waitFor();
     await page.getByText('Cut', { exact: true }).first().waitFor();
     await saveScreenshot(page, '19-spool-cut');
 

@@ -12,6 +12,8 @@ export interface Column<Row> {
   align?: 'left' | 'right';
   /** Hide on narrow screens (the card layout still shows everything marked primary). */
   className?: string;
+  /** Shown on the small-screen card too (besides the card's title). */
+  card?: boolean;
 }
 
 interface TableProps<Row> {
@@ -24,6 +26,11 @@ interface TableProps<Row> {
   /** Makes the whole row a target (e.g. open the spool). */
   onRowClick?: (row: Row) => void;
   busy?: boolean;
+  /**
+   * Below 640 px the rows become a list of cards (no sideways scrolling): `cardTitle`
+   * heads each card, then every column marked `card` as "header: value".
+   */
+  cardTitle?: (row: Row) => ReactNode;
 }
 
 function SortIcon({ state }: { state: SortOrder | null }) {
@@ -36,10 +43,47 @@ function SortIcon({ state }: { state: SortOrder | null }) {
 }
 
 /**
- * A data table with sortable headers (aria-sort, real buttons). On narrow
- * screens it scrolls sideways inside its frame instead of breaking the page.
+ * A data table with sortable headers (aria-sort, real buttons). With `cardTitle`, small
+ * screens get a list of cards instead; without, the table scrolls sideways in its frame.
  */
-export function Table<Row>({ caption, columns, rows, rowKey, sort, onSort, onRowClick, busy }: TableProps<Row>) {
+export function Table<Row>(props: TableProps<Row>) {
+  if (!props.cardTitle) return <DataTable {...props} />;
+  return (
+    <>
+      <div className="hidden sm:block">
+        <DataTable {...props} />
+      </div>
+      <CardList {...props} cardTitle={props.cardTitle} />
+    </>
+  );
+}
+
+function CardList<Row>({ caption, columns, rows, rowKey, onRowClick, busy, cardTitle }: TableProps<Row> & { cardTitle: (row: Row) => ReactNode }) {
+  const shown = columns.filter((c) => c.card);
+  return (
+    <ul aria-label={caption} className={cn('flex flex-col gap-2 sm:hidden', busy && 'opacity-70')} data-testid="card-list">
+      {rows.map((row) => (
+        <li
+          key={rowKey(row)}
+          onClick={onRowClick ? () => onRowClick(row) : undefined}
+          className={cn('rounded-lg border border-steel-200 bg-white px-3 py-2', onRowClick && 'cursor-pointer hover:bg-spark-100/50')}
+        >
+          <div className="text-base">{cardTitle(row)}</div>
+          <dl className="mt-1 grid grid-cols-[auto_minmax(0,1fr)] items-center gap-x-3 gap-y-1 text-sm">
+            {shown.map((col) => (
+              <div key={col.key} className="contents">
+                <dt className="text-xs font-semibold uppercase tracking-wide text-steel-600">{col.header}</dt>
+                <dd className="min-w-0">{col.cell(row)}</dd>
+              </div>
+            ))}
+          </dl>
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+function DataTable<Row>({ caption, columns, rows, rowKey, sort, onSort, onRowClick, busy }: TableProps<Row>) {
   return (
     <div className={cn('overflow-x-auto rounded-lg border border-steel-200 bg-white', busy && 'opacity-70')}>
       <table className="w-full min-w-[36rem] border-collapse text-left text-sm">

@@ -257,16 +257,16 @@ export function EditorWorkspace({
         <div className="flex flex-wrap items-center gap-1">
           {!readOnly ? (
             <>
-              <PanelButton onClick={() => model.undo()} disabled={!snap.canUndo} title={snap.undoLabel ? `Undo: ${snap.undoLabel} (Ctrl+Z)` : 'Undo (Ctrl+Z)'} aria-keyshortcuts="Control+Z">
+              <PanelButton onClick={() => model.undo()} disabled={!snap.canUndo} title={snap.undoLabel ? `Takes back: ${snap.undoLabel} (Ctrl+Z)` : 'Ctrl+Z'} aria-keyshortcuts="Control+Z">
                 <EditorIcon name="undo" className="h-4 w-4" /> Undo
               </PanelButton>
-              <PanelButton onClick={() => model.redo()} disabled={!snap.canRedo} title={snap.redoLabel ? `Redo: ${snap.redoLabel} (Ctrl+Shift+Z)` : 'Redo (Ctrl+Shift+Z)'} aria-keyshortcuts="Control+Shift+Z">
+              <PanelButton onClick={() => model.redo()} disabled={!snap.canRedo} title={snap.redoLabel ? `Does again: ${snap.redoLabel} (Ctrl+Shift+Z)` : 'Ctrl+Shift+Z'} aria-keyshortcuts="Control+Shift+Z">
                 <EditorIcon name="redo" className="h-4 w-4" /> Redo
               </PanelButton>
             </>
           ) : null}
           <FileMenu model={model} modelGroup={modelGroup} readOnly={readOnly} />
-          <PanelButton onClick={() => setKeysOpen(true)} title="Keyboard keys (?)" aria-keyshortcuts="Shift+?">
+          <PanelButton onClick={() => setKeysOpen(true)} title="Every shortcut of the editor (?)" aria-keyshortcuts="Shift+?">
             <EditorIcon name="keyboard" className="h-4 w-4" /> Keys
           </PanelButton>
         </div>
@@ -297,16 +297,15 @@ export function EditorWorkspace({
         </div>
       ) : null}
       <div className="grid gap-2 lg:grid-cols-[minmax(0,1fr)_22rem]">
-        <div className="relative h-[32rem] overflow-hidden rounded-md border border-steel-200 bg-steel-100">
-          <SpoolCanvas result={result} design={design} selection={selection} view={view} units={units} onSelect={onSelect} modelRef={modelGroup} nextRun={nextRun} />
-          <div className="absolute left-2 top-2">
-            <ViewBar view={view} onPreset={(p) => model.showPreset(p)} onLabels={(labels) => model.setView({ labels })} onCog={(on) => model.setView({ showCentreOfGravity: on })} />
+        <div className="flex min-w-0 flex-col gap-1">
+          {/* The view toolbar sits above the canvas, never over the model. */}
+          <ViewBar view={view} onPreset={(p) => model.showPreset(p)} onLabels={(labels) => model.setView({ labels })} onCog={(on) => model.setView({ showCentreOfGravity: on })} />
+          <div className="relative h-[32rem] overflow-hidden rounded-md border border-steel-200 bg-steel-100">
+            <SpoolCanvas result={result} design={design} selection={selection} view={view} units={units} onSelect={onSelect} modelRef={modelGroup} nextRun={nextRun} />
           </div>
-          {result && labelsThinned(result) ? (
-            <p className="absolute right-2 top-2 max-w-xs rounded bg-white/90 px-2 py-1 text-xs text-ink-800 shadow-sm">Large spool: dimension labels show around the selection.</p>
-          ) : null}
+          {result && labelsThinned(result) ? <p className="text-xs text-ink-800">Large spool: dimension labels show around the selection.</p> : null}
           {result && result.weights.emptyKg > 0 ? (
-            <p className="absolute bottom-2 left-2 max-w-[90%] rounded bg-white/90 px-2 py-1 text-xs text-ink-800 shadow-sm">
+            <p className="text-xs text-ink-800">
               About <strong>{Math.round(result.weights.emptyKg).toLocaleString('en-GB')} kg</strong> empty. Weights and centres of gravity are estimates; lifts are planned by a competent person.
             </p>
           ) : null}

@@ -5,6 +5,7 @@ import type { Role } from '../../../shared/schemas/role.schema';
 import type { Spool } from '../../../shared/schemas/spool.schema';
 import type { SpoolStatus } from '../../../shared/schemas/spool-status.schema';
 import { SpoolStatusActions } from '../../../src/features/spools/components/SpoolStatusActions';
+import { spoolStatusDisplay } from '../../../src/features/spools/components/spool-status-labels';
 
 function spool(status: SpoolStatus): Spool {
   const t = '2026-12-01T10:00:00.000Z';
@@ -34,15 +35,22 @@ function render(role: Role, status: SpoolStatus): string {
 describe('SpoolStatusActions', () => {
   it('offers a fabricator only the next shop step', () => {
     const html = render('fabricator', 'issued');
-    expect(html).toContain('Mark cut');
-    expect(html).not.toContain('Mark fitted up');
-    expect(html).not.toContain('Release');
+    expect(html).toContain('Record as cut');
+    expect(html).not.toContain('Record as fitted up');
+    expect(html).not.toContain('released');
   });
 
   it('offers an inspector inspection and release, never cutting', () => {
-    expect(render('inspector', 'welded')).toContain('Mark inspected');
-    expect(render('inspector', 'inspected')).toContain('Release');
+    expect(render('inspector', 'welded')).toContain('Record as inspected');
+    expect(render('inspector', 'inspected')).toContain('Record as released');
     expect(render('inspector', 'issued')).toBe('');
+  });
+
+  it('words every stage button the same way: "Record as" and the status as shown', () => {
+    for (const s of ['issued', 'cut', 'fitted', 'welded', 'inspected', 'released', 'shipped'] as const) {
+      const { label, action } = spoolStatusDisplay[s];
+      expect(action).toBe(`Record as ${label.toLowerCase()}`);
+    }
   });
 
   it('shows nothing to a viewer or a detailer, whatever the status', () => {

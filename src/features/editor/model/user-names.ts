@@ -32,7 +32,9 @@ export function userNames(result: SpoolResult | null, design: SpoolDesign | null
     ...(result?.pieces.map((p) => p.mark) ?? []),
     ...(result?.welds.map((w) => w.mark) ?? []),
   ]);
-  const node = (id: string) => marks.get(id) ?? 'component';
+  // A spool of one node (just begun) has no placed component yet: it is the start.
+  const lone = design && design.runs.length === 0 && design.nodes.length === 1 ? design.nodes[0]!.id : null;
+  const node = (id: string) => marks.get(id) ?? (id === lone ? 'the start' : 'component');
   const run = (id: string) => {
     const ends = runEnds.get(id);
     return ends ? `${node(ends.from)}–${node(ends.to)}` : 'run';

@@ -28,7 +28,7 @@ export function AxisPicker({
               role="radio"
               aria-checked={value === name}
               disabled={!ok}
-              title={axis.label}
+              aria-label={axis.label}
               onClick={() => onPick(name)}
               className={cn(
                 'min-h-10 min-w-10 rounded-md border px-2 font-mono text-sm font-semibold disabled:opacity-30',
@@ -36,7 +36,6 @@ export function AxisPicker({
               )}
             >
               {axis.short}
-              <span className="sr-only"> ({axis.label})</span>
             </button>
           );
         })}

@@ -69,7 +69,8 @@ export const BuildBar = forwardRef<
                 role="radio"
                 aria-checked={draft.axis === name}
                 aria-keyshortcuts={key}
-                title={`${axis.label} (key ${key})`}
+                aria-label={axis.label}
+                title={`Key ${key}`}
                 onClick={() => onDraft({ ...draft, axis: name })}
                 className={cn(
                   'min-h-10 min-w-10 rounded-md border px-2 font-mono text-sm font-semibold',
@@ -77,7 +78,6 @@ export const BuildBar = forwardRef<
                 )}
               >
                 {axis.short}
-                <span className="sr-only"> ({axis.label})</span>
               </button>
             );
           })}
@@ -166,7 +166,7 @@ export const BuildBar = forwardRef<
         disabled={disabled || draft.lengthMm === null}
         className="mt-4 inline-flex min-h-10 items-center gap-1.5 rounded-md bg-spark-400 px-3 text-sm font-semibold text-ink-950 hover:bg-spark-300 disabled:opacity-50"
         aria-keyshortcuts="Enter"
-        title="Add the run (Enter in the length box)"
+        title="Or press Enter in the length box"
       >
         <EditorIcon name="run" /> Add run
       </button>

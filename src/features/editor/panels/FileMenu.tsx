@@ -38,12 +38,12 @@ export function FileMenu({ model, modelGroup, readOnly }: { model: EditorModel; 
           />
         </>
       ) : null}
-      <PanelButton disabled={!design} onClick={() => design && downloadBlob(designToJson(design), 'application/json', fileNameFor(design.mark, 'json'))} title="Download the design file">
+      <PanelButton disabled={!design} onClick={() => design && downloadBlob(designToJson(design), 'application/json', fileNameFor(design.mark, 'json'))} title="Download as .json">
         <EditorIcon name="download" className="h-4 w-4" /> Design file
       </PanelButton>
       <PanelButton
         disabled={!design}
-        title="Download the 3D model as glTF (.glb)"
+        title="Download the 3D model (.glb)"
         onClick={async () => {
           if (!modelGroup.current || !design) return;
           try {

@@ -64,7 +64,7 @@ export function NodeProperties({
         title={`${kindWords} ${names.node(node.id)}`}
         actions={
           !readOnly ? (
-            <PanelButton tone="danger" onClick={() => onDelete(node.id)} title="Delete (Delete key)" aria-keyshortcuts="Delete">
+            <PanelButton tone="danger" onClick={() => onDelete(node.id)} title="Removes this component (key Del)" aria-keyshortcuts="Delete">
               <EditorIcon name="trash" className="h-4 w-4" /> Delete
             </PanelButton>
           ) : null

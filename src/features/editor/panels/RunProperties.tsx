@@ -72,7 +72,7 @@ export function RunProperties({
         title={`Run ${names.run(run.id)}${piece ? ` (${piece.mark})` : ''}`}
         actions={
           !readOnly ? (
-            <PanelButton tone="danger" onClick={() => onDelete(run.id)} title="Delete this run and everything downstream (Delete)" aria-keyshortcuts="Delete">
+            <PanelButton tone="danger" onClick={() => onDelete(run.id)} title="Takes everything downstream with it (key Del)" aria-keyshortcuts="Delete">
               <EditorIcon name="trash" className="h-4 w-4" /> Delete
             </PanelButton>
           ) : null

@@ -22,9 +22,10 @@ const PRESET_DIRECTIONS: Record<ViewPreset, [number, number, number]> = {
 type Controls = { target: Vector3; update: () => void };
 
 /**
- * Puts the camera on a preset view framing the spool, when the preset is asked for
- * (again) and the first time there is a model. It does not follow edits, so a user who
- * zoomed in to work keeps their view while typing dimensions.
+ * Puts the camera on a preset view framing the spool: when the preset is asked for
+ * (again), the first time there is a model, and whenever the model's bounds change
+ * (a run added) unless the user has orbited, zoomed or stepped the camera since the last
+ * fit, so a user who zoomed in to work keeps their view while typing dimensions.
  */
 export function CameraRig({
   preset,
@@ -42,6 +43,8 @@ export function CameraRig({
   const get = useThree((s) => s.get);
   const controls = useThree((s) => s.controls) as unknown as Controls | null;
   const framedOnce = useRef(false);
+  /** The user moved the camera since the last fit. */
+  const moved = useRef(false);
 
   // Reads the latest bounds without making them a reason to re-frame.
   const frame = useEffectEvent(() => {
@@ -49,7 +52,10 @@ export function CameraRig({
     if (!controls) return;
     if (!hasModel && framedOnce.current) return;
     const b = bounds;
-    const fov = 'fov' in camera ? ((camera as { fov: number }).fov * Math.PI) / 180 : Math.PI / 4;
+    const vfov = 'fov' in camera ? ((camera as { fov: number }).fov * Math.PI) / 180 : Math.PI / 4;
+    const aspect = 'aspect' in camera ? (camera as { aspect: number }).aspect : 1;
+    // The narrower of the two angles decides (a tall, narrow canvas on a phone).
+    const fov = Math.min(vfov, 2 * Math.atan(Math.tan(vfov / 2) * aspect));
     // A bounding sphere frames loosely; 0.85 of it fills the view without cropping a spool.
     const distance = (b.radius / Math.sin(fov / 2)) * 0.85;
     const dir = new Vector3(...PRESET_DIRECTIONS[preset]).normalize();
@@ -61,16 +67,35 @@ export function CameraRig({
     controls.target.copy(centre);
     controls.update();
     if (hasModel) framedOnce.current = true;
+    moved.current = false;
     invalidate();
   });
 
-  // Re-frame on a preset request or when the first model arrives, not on every bounds change.
+  // Re-frame on a preset request or when the first model arrives.
   useEffect(() => frame(), [preset, nonce, hasModel, controls]);
+
+  // Orbit or zoom by the user ('start' fires on pointer and wheel input only).
+  useEffect(() => {
+    const c = controls as unknown as { addEventListener?: (t: string, f: () => void) => void; removeEventListener?: (t: string, f: () => void) => void } | null;
+    if (!c?.addEventListener) return;
+    const onStart = () => {
+      moved.current = true;
+    };
+    c.addEventListener('start', onStart);
+    return () => c.removeEventListener?.('start', onStart);
+  }, [controls]);
+
+  // The model grew or shrank: fit it again, unless the user has a view of their own.
+  const boundsKey = `${bounds.centre.map((v) => v.toFixed(3)).join(',')}|${bounds.radius.toFixed(3)}`;
+  useEffect(() => {
+    if (!moved.current) frame();
+  }, [boundsKey]);
 
   // A keyboard step: orbit about plant up through the target, tilt, zoom.
   const applyStep = useEffectEvent(() => {
     const { camera, invalidate } = get();
     if (!controls || step.nonce === 0) return;
+    moved.current = true;
     const offset = camera.position.clone().sub(controls.target);
     offset.applyAxisAngle(UP, (step.azimuthDeg * Math.PI) / 180);
     if (step.elevationDeg !== 0) {

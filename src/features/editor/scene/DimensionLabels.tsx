@@ -8,6 +8,7 @@ import type { ViewPrefs } from '../model/view-prefs';
 import type { Selection } from '../model/editor-selection';
 import { toScene } from './scene-units';
 import { isFlangeFace } from '../model/design-edit';
+import { placeLabels, type LabelBox } from './label-placer';
 
 const KIND_SHORT = {
   'centre-to-centre': 'C–C',
@@ -175,24 +176,43 @@ export function LabelProjector({
   const invalidate = useThree((s) => s.invalidate);
   // New labels need one frame to be placed.
   useEffect(() => invalidate(), [items, invalidate]);
+  // Label sizes, measured once per label text (reading layout every frame would be slow).
+  const sizes = useMemo(() => new Map<string, { w: number; h: number }>(), []);
   useFrame(({ camera, size }) => {
     const overlay = overlayRef.current;
     if (!overlay) return;
-    const spans = overlay.children;
-    for (let i = 0; i < spans.length; i++) {
-      const el = spans[i] as HTMLElement;
+    const spans = Array.from(overlay.children) as HTMLElement[];
+    const boxes: LabelBox[] = [];
+    for (const el of spans) {
       const item = items[Number(el.dataset.i)];
-      if (!item) continue;
-      scratch.set(item.at[0], item.at[1], item.at[2]).project(camera);
-      if (scratch.z < -1 || scratch.z > 1) {
-        el.style.display = 'none';
-        continue;
+      scratch.set(item?.at[0] ?? 0, item?.at[1] ?? 0, item?.at[2] ?? 0).project(camera);
+      const behind = !item || scratch.z < -1 || scratch.z > 1;
+      const sizeKey = item ? `${item.tone}:${item.text}` : '';
+      let s = sizes.get(sizeKey);
+      if (!s && item) {
+        el.style.display = 'block';
+        s = { w: el.offsetWidth, h: el.offsetHeight };
+        if (s.w > 0) sizes.set(sizeKey, s);
       }
-      const x = ((scratch.x + 1) / 2) * size.width;
-      const y = ((1 - scratch.y) / 2) * size.height;
-      el.style.display = 'block';
-      el.style.transform = `translate(${x.toFixed(1)}px, ${y.toFixed(1)}px) translate(-50%, -50%)`;
+      boxes.push({
+        x: behind ? Number.NaN : ((scratch.x + 1) / 2) * size.width,
+        y: behind ? Number.NaN : ((1 - scratch.y) / 2) * size.height,
+        width: s?.w ?? 0,
+        height: s?.h ?? 0,
+        priority: item ? TONE_PRIORITY[item.tone] : 9,
+      });
     }
+    // None covers another: dimensions and cuts keep their spots, weld tags move aside.
+    const placed = placeLabels(boxes, { width: size.width, height: size.height });
+    placed.forEach((p, i) => {
+      const el = spans[i]!;
+      if (!p.visible) {
+        el.style.display = 'none';
+        return;
+      }
+      el.style.display = 'block';
+      el.style.transform = `translate(${p.x.toFixed(1)}px, ${p.y.toFixed(1)}px) translate(-50%, -50%)`;
+    });
   });
   return null;
 }
@@ -249,6 +269,9 @@ function offsetOutward(mid: P, direction: P, centre: P, distanceMm: number): P {
     z: mid.z + (n.z / len) * distanceMm,
   };
 }
+
+/** Placement order: lower keeps its spot first. */
+const TONE_PRIORITY: Record<Label['tone'], number> = { north: 0, axis: 0, cog: 1, cut: 2, dim: 3, weld: 4 };
 
 const TONE_CLASS: Record<Label['tone'], string> = {
   dim: 'block whitespace-nowrap rounded bg-white/90 px-1.5 py-0.5 font-mono text-[11px] font-semibold text-ink-800 shadow-sm ring-1 ring-steel-300',

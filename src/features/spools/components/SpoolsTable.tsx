@@ -4,19 +4,18 @@ import { Table, type Column, type SortOrder } from '../../../components/ui/Table
 import { formatDateTime } from '../../../lib/format-date';
 import { SpoolStatusBadge } from './SpoolStatusBadge';
 
+function spoolLink(s: Spool) {
+  return (
+    <Link to={`/spools/${s.id}`} className="font-mono font-bold text-ink-900 underline-offset-4 hover:underline">
+      {s.mark}
+    </Link>
+  );
+}
+
 const columns: Column<Spool>[] = [
-  {
-    key: 'mark',
-    header: 'Spool mark',
-    sortable: true,
-    cell: (s) => (
-      <Link to={`/spools/${s.id}`} className="font-mono font-bold text-ink-900 underline-offset-4 hover:underline">
-        {s.mark}
-      </Link>
-    ),
-  },
+  { key: 'mark', header: 'Spool mark', sortable: true, cell: spoolLink },
   { key: 'lineNumber', header: 'Line', sortable: true, cell: (s) => <span className="font-mono">{s.lineNumber}</span> },
-  { key: 'status', header: 'Status', sortable: true, cell: (s) => <SpoolStatusBadge status={s.status} /> },
+  { key: 'status', header: 'Status', sortable: true, cell: (s) => <SpoolStatusBadge status={s.status} />, card: true },
   {
     key: 'revision',
     header: 'Issued rev.',
@@ -26,6 +25,7 @@ const columns: Column<Spool>[] = [
       ) : (
         <span className="text-steel-500">not issued</span>
       ),
+    card: true,
   },
   {
     key: 'draft',
@@ -39,6 +39,7 @@ const columns: Column<Spool>[] = [
         <span className="text-steel-500">—</span>
       ),
     className: 'hidden sm:table-cell',
+    card: true,
   },
   { key: 'updatedAt', header: 'Updated', sortable: true, cell: (s) => formatDateTime(s.updatedAt), className: 'hidden md:table-cell' },
 ];
@@ -63,6 +64,7 @@ export function SpoolsTable({ spools, sort, onSort, onOpen, busy }: SpoolsTableP
       onSort={onSort}
       onRowClick={onOpen}
       busy={busy}
+      cardTitle={spoolLink}
     />
   );
 }

@@ -24,6 +24,9 @@ describe('userNames', () => {
     expect(names.node(d.nodes.find((n) => n.kind === 'elbow')!.id)).toBe('E1');
     expect(names.run(d.runs[0]!.id)).toBe('F1–E1');
     expect(names.node('nope')).toBe('component');
+    const begun = newModel();
+    startWithFlange(begun, '6');
+    expect(userNames(resultOf(begun), begun.getSnapshot().design).node('n1')).toBe('the start');
   });
 
   it('rewrites ids inside engine messages and weld descriptions, leaving P# and W# alone', () => {
