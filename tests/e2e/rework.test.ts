@@ -93,7 +93,7 @@ describe('rework after a revision issued over work in progress', () => {
     await page.goto(`${app.baseUrl}/spools/${spoolId}`);
     await signInAs(page, DEMO_USERS.fabricator);
     await notice.waitFor();
-    await page.getByRole('button', { name: 'Mark fitted up' }).waitFor();
+    await page.getByRole('button', { name: 'Record as fitted up' }).waitFor();
     await notice.getByRole('button', { name: 'Rework done' }).click();
     await notice.waitFor({ state: 'detached' });
     await saveScreenshot(page, 'rework-03-cleared');
