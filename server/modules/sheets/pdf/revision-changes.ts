@@ -1,3 +1,4 @@
+import { shopMarks } from './shop-marks';
 import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
 
@@ -86,18 +87,21 @@ export function revisionChanges(
   const currentRuns = new Set(current.runs.map((r) => r.runId));
   for (const run of previous.runs) if (!currentRuns.has(run.runId)) lines.push(`Run ${run.runId} removed.`);
 
+  const marksNow = shopMarks(current);
+  const marksBefore = shopMarks(previous);
+  const fm = (id: string) => marksNow.get(id) ?? marksBefore.get(id) ?? '?';
   const flangesBefore = new Map(previous.flanges.map((f) => [f.nodeId, f]));
   for (const f of current.flanges) {
     const old = flangesBefore.get(f.nodeId);
     if (!old) {
-      lines.push(`Flange ${f.nodeId} added.`);
+      lines.push(`Flange ${fm(f.nodeId)} added.`);
       changedFlanges.add(f.nodeId);
     } else if (
       differs(old.rotationDeg, f.rotationDeg, ANGLE_TOLERANCE_DEG) ||
       old.boltCount !== f.boltCount
     ) {
       lines.push(
-        `Flange ${f.nodeId}: hole 1 was at ${fmtDeg(old.rotationDeg)}, now ${fmtDeg(f.rotationDeg)}${old.boltCount !== f.boltCount ? `; ${f.boltCount} holes, was ${old.boltCount}` : ''}.`,
+        `Flange ${fm(f.nodeId)}: hole 1 was at ${fmtDeg(old.rotationDeg)}, now ${fmtDeg(f.rotationDeg)}${old.boltCount !== f.boltCount ? `; ${f.boltCount} holes, was ${old.boltCount}` : ''}.`,
       );
       changedFlanges.add(f.nodeId);
     }
