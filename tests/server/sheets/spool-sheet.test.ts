@@ -1,3 +1,4 @@
+import { shopMarks, withShopMarks } from '../../../server/modules/sheets/pdf/shop-marks';
 import jsQR from 'jsqr';
 import { describe, expect, it } from 'vitest';
 import type { SpoolResult } from '../../../shared/engine/compute-result';
@@ -130,7 +131,9 @@ describe.each(SAMPLE_FILES)('spool sheet of %s', (file) => {
     expect(all).toContain('ISSUED FOR FABRICATION');
     expect(all).toContain('Branch moved 50 mm'); // revision history note
     expect(all).toContain('First issue');
-    for (const weld of result.welds) expect(all).toContain(weld.joins);
+    // What each weld joins, with shop marks in place of node ids.
+    const marks = shopMarks(result);
+    for (const weld of result.welds) expect(all).toContain(withShopMarks(weld.joins, marks, result));
     // Cautions: pdfjs splits wrapped lines, so compare without whitespace.
     const squeezed = all.replace(/\s+/g, '');
     for (const caution of SHEET_CAUTIONS) expect(squeezed).toContain(caution.replace(/\s+/g, ''));

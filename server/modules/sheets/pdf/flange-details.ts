@@ -68,6 +68,7 @@ export function flangeDetailsBlock(
           units,
           size,
           extras.get(f.nodeId) ?? '',
+          f.bendPlaneNodeId ? (tags.get(f.bendPlaneNodeId) ?? '') : '',
         );
       }
       const rowsUsed = Math.ceil(count / perRow);
@@ -88,6 +89,8 @@ function drawFlangeCell(
   units: LengthUnits,
   size: number,
   extra: string,
+  /** Shop mark of the bend whose plane the second angle is measured from. */
+  bendMark: string,
 ): void {
   const bad = f.mustTwoHole && !f.straddles;
   doc.save();
@@ -103,17 +106,11 @@ function drawFlangeCell(
     size: size * 1.05,
     width: cell.w - 2 * pad,
   });
-  drawText(
-    doc,
-    `Face looks ${describeDirection(f.outward)} · node ${f.nodeId}`,
-    cell.x + pad,
-    cell.y + pad + size * 1.3,
-    {
-      size: size * 0.85,
-      color: INK.muted,
-      width: cell.w - 2 * pad,
-    },
-  );
+  drawText(doc, `Face looks ${describeDirection(f.outward)}`, cell.x + pad, cell.y + pad + size * 1.3, {
+    size: size * 0.85,
+    color: INK.muted,
+    width: cell.w - 2 * pad,
+  });
 
   if (extra) {
     drawText(doc, extra, cell.x + pad, cell.y + pad + size * 2.3, {
@@ -200,7 +197,7 @@ function drawFlangeCell(
     );
   }
   if (f.bendPlaneRotationDeg !== null)
-    line(`${fmtDeg(f.bendPlaneRotationDeg)} from bend plane ${f.bendPlaneNodeId ?? ''}`.trim());
+    line(`${fmtDeg(f.bendPlaneRotationDeg)} from bend plane ${bendMark}`.trim());
   doc.restore();
 }
 

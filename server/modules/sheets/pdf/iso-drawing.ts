@@ -13,6 +13,7 @@ import { drawNorthArrow, normalTo, pageCentroid, reserveSegment, tagLabel } from
 import { fitIsoViewport } from './iso-projection';
 import { drawComponentSymbol, PIPE_WIDTH, SMALL_BORE_WIDTH, strokePolyline } from './iso-symbols';
 import { LabelPlacer } from './label-placer';
+import { outletAngleText, shopMarks } from './shop-marks';
 import type { Rect } from './page-setup';
 import { SHORT_CAUTION } from './sheet-cautions';
 import { INK, type TypeSizes } from './sheet-style';
@@ -53,6 +54,7 @@ export function drawIsometric(
   const ring = 62;
   const view = fitIsoViewport(points, area, ring + sizes.dimension * 2 + 10);
   const placer = new LabelPlacer(area);
+  const marks = shopMarks(result);
   const centroid = pageCentroid(view, points);
 
   doc.save();
@@ -166,7 +168,8 @@ export function drawIsometric(
       c.ends[0]!,
     );
     const angle = c.shape.orientationDeg;
-    const text = `${c.nodeId} NPS ${c.shape.branchNps}${angle === null ? '' : ` at ${Number(angle.toFixed(1))}°`}`;
+    // Shop mark, size, and the angle with its reference (top of pipe, or plant north).
+    const text = `${marks.get(c.nodeId) ?? '?'} NPS ${c.shape.branchNps}${angle === null ? '' : ` at ${outletAngleText(angle, c.shape.headerAxis)}`}`;
     tagLabel(
       doc,
       placer,

@@ -30,12 +30,12 @@ export interface TypeSizes {
   mark: number;
 }
 
-/** Type sizes for a page: nothing under 6.5 pt so a sheet stays readable at arm's length. */
+/** Type sizes for a page: nothing under 7 pt so a sheet stays readable at arm's length. */
 export function typeSizes(setup: PageSetup): TypeSizes {
   const s = setup.scale;
-  const at = (pt: number) => Math.max(6.5, Math.round(pt * s * 10) / 10);
+  const at = (pt: number) => Math.max(7, Math.round(pt * s * 10) / 10);
   return {
-    tiny: at(6.5),
+    tiny: at(7),
     small: at(7.5),
     body: at(8.5),
     table: at(8.5),

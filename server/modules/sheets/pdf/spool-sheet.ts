@@ -9,6 +9,7 @@ import { drawIsometric } from './iso-drawing';
 import type { PaperSize, Rect } from './page-setup';
 import type { SheetHeader } from './sheet-header';
 import { SheetDocument, type DocumentMarks } from './sheet-document';
+import { shopMarks } from './shop-marks';
 import { INK, typeSizes } from './sheet-style';
 import { bomBlock, cutListBlock, overallBlock, weldListBlock } from './tables';
 import { templateFigures } from './template-figures';
@@ -75,7 +76,8 @@ function rootDatum(
   const root = design.nodes.find((n) => !targets.has(n.id)) ?? design.nodes[0];
   if (!root) return { label: 'the design origin', position: design.origin };
   const position = result.workPoints.find((w) => w.nodeId === root.id)?.position ?? design.origin;
-  return { label: `the work point of ${root.label ? `${root.label} (${root.id})` : root.id}`, position };
+  const mark = shopMarks(result).get(root.id) ?? 'the first component';
+  return { label: `the work point of ${root.label ? `${root.label} (${mark})` : mark}`, position };
 }
 
 function sheetNotes(input: SpoolSheetInput, templateProblems: string[]): string[] {
@@ -121,6 +123,7 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
   const sizes = typeSizes(setup);
   const marks = sheetMarks(header, result);
   const bandH = sheet.bandHeight(marks);
+  // Flange tags F1, F2… are the flanges' shop marks (shop-marks.ts numbers them the same way).
   const flangeTags = new Map(result.flanges.map((f, i) => [f.nodeId, `F${i + 1}`]));
 
   // Page 1: drawing on the left, first columns of tables on the right.
@@ -186,7 +189,8 @@ export async function renderSpoolSheet(input: SpoolSheetInput): Promise<SpoolShe
   blocks.push(weldListBlock(result, tableSize));
   if (result.flanges.length > 0)
     blocks.push(
-      flangeDetailsBlock(result.flanges, flangeTags, units, tableSize, flangeExtras(design, changes)),
+      // Shop marks of every component: flange tags and the bends their angles refer to.
+      flangeDetailsBlock(result.flanges, shopMarks(result), units, tableSize, flangeExtras(design, changes)),
     );
   const pairs = flangePairsBlock(result, flangeTags, units, tableSize);
   if (pairs) blocks.push(pairs);

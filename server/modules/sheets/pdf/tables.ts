@@ -1,3 +1,4 @@
+import { shopMarks, withShopMarks } from './shop-marks';
 import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
 import type { FlowBlock } from './flow-layout';
@@ -78,13 +79,14 @@ export function cutListBlock(
 
 /** Weld list: joint mark, type, size, shop or field, what it joins. */
 export function weldListBlock(result: SpoolResult, size: number): FlowBlock {
+  const marks = shopMarks(result);
   const rows: TableRow[] = result.welds.map((w) => ({
     cells: [
       w.mark,
       WELD_TYPE[w.type] ?? w.type,
       `NPS ${w.nps}`,
       w.location === 'field' ? 'FIELD' : 'shop',
-      w.joins,
+      withShopMarks(w.joins, marks, result),
     ],
     emphasis: w.location === 'field' ? 'group' : undefined,
   }));

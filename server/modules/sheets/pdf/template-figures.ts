@@ -1,3 +1,4 @@
+import { shopMarks } from './shop-marks';
 import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import { mitreTemplate } from '../../../../shared/templates/mitre-template';
 import { setOnBranchTemplate } from '../../../../shared/templates/saddle-template';
@@ -56,6 +57,7 @@ export function templateFigures(
   units: LengthUnits,
 ): { figures: TemplateFigure[]; problems: string[] } {
   const L = (value: number) => formatLength(value, units);
+  const marks = shopMarks(result);
   const figures: TemplateFigure[] = [];
   const problems: string[] = [];
   for (const c of result.components) {
@@ -71,7 +73,7 @@ export function templateFigures(
       const headerOd = header?.odMm ?? null;
       const branchOd = branch?.odMm ?? null;
       if (headerOd === null || branchOd === null) {
-        problems.push(`No template for set-on branch ${c.nodeId}: pipe OD unknown.`);
+        problems.push(`No template for set-on branch ${marks.get(c.nodeId) ?? '?'}: pipe OD unknown.`);
         continue;
       }
       const calc = setOnBranchTemplate({
@@ -82,7 +84,7 @@ export function templateFigures(
         wallMm: branchPiece?.wallMm ?? undefined,
       });
       if (!calc.ok) {
-        problems.push(`No template for set-on branch ${c.nodeId}: ${calc.message}`);
+        problems.push(`No template for set-on branch ${marks.get(c.nodeId) ?? '?'}: ${calc.message}`);
         continue;
       }
       const t = calc.value;
@@ -110,7 +112,7 @@ export function templateFigures(
       ];
       figures.push({
         kind: 'branch-saddle',
-        title: `Branch saddle ${c.nodeId} · ${label}`,
+        title: `Branch saddle ${marks.get(c.nodeId) ?? '?'} · ${label}`,
         nodeId: c.nodeId,
         widthMm: wrap + TAB_MM + 2 * MARGIN_MM,
         heightMm: t.maxCutBackMm + 3 * MARGIN_MM,
@@ -142,7 +144,7 @@ export function templateFigures(
       const extra = 10;
       figures.push({
         kind: 'header-hole',
-        title: `Header hole ${c.nodeId} · ${label}`,
+        title: `Header hole ${marks.get(c.nodeId) ?? '?'} · ${label}`,
         nodeId: c.nodeId,
         widthMm: maxX - minX + 2 * extra + MARGIN_MM,
         heightMm: maxY - minY + 2 * extra + MARGIN_MM,
@@ -174,7 +176,7 @@ export function templateFigures(
       const end = c.ends[0];
       const od = end?.odMm ?? null;
       if (od === null) {
-        problems.push(`No template for mitred bend ${c.nodeId}: pipe OD unknown.`);
+        problems.push(`No template for mitred bend ${marks.get(c.nodeId) ?? '?'}: pipe OD unknown.`);
         continue;
       }
       const welds = shape.mitreWelds ?? 2;
@@ -186,7 +188,7 @@ export function templateFigures(
         radiusMm: shape.bendRadiusMm,
       });
       if (!calc.ok) {
-        problems.push(`No template for mitred bend ${c.nodeId}: ${calc.message}`);
+        problems.push(`No template for mitred bend ${marks.get(c.nodeId) ?? '?'}: ${calc.message}`);
         continue;
       }
       const t = calc.value;
@@ -208,7 +210,7 @@ export function templateFigures(
       ];
       figures.push({
         kind: 'mitre',
-        title: `Mitre cut ${c.nodeId} · ${Number(t.cutAngleDeg.toFixed(2))}° from square · NPS ${c.nps ?? '?'}`,
+        title: `Mitre cut ${marks.get(c.nodeId) ?? '?'} · ${Number(t.cutAngleDeg.toFixed(2))}° from square · NPS ${c.nps ?? '?'}`,
         nodeId: c.nodeId,
         widthMm: t.circumferenceMm + TAB_MM + 2 * MARGIN_MM,
         heightMm: t.longShortDifferenceMm + 3 * MARGIN_MM,

@@ -46,6 +46,10 @@ export function printable(doc: PDFKit.PDFDocument, value: string): string {
   return out;
 }
 
+/** Smallest type on a sheet, pt: every size asked for is raised to it (measuring and drawing alike). */
+export const MIN_TEXT_PT = 7;
+const pt = (size: number) => Math.max(MIN_TEXT_PT, size);
+
 /** Writes text with its top at (x, y); returns the height used. One line unless `wrap`. */
 export function drawText(
   doc: PDFKit.PDFDocument,
@@ -56,7 +60,7 @@ export function drawText(
 ): number {
   doc
     .font(style.font ?? 'body')
-    .fontSize(style.size)
+    .fontSize(pt(style.size))
     .fillColor(style.color ?? INK.text);
   value = printable(doc, value);
   const options: PDFKit.Mixins.TextOptions = {
@@ -82,7 +86,7 @@ export function measureWrapped(
   width: number,
   style: TextStyle,
 ): number {
-  doc.font(style.font ?? 'body').fontSize(style.size);
+  doc.font(style.font ?? 'body').fontSize(pt(style.size));
   return doc.heightOfString(printable(doc, value), { width, lineGap: style.lineGap ?? 0 });
 }
 
@@ -92,7 +96,7 @@ export function measureWidth(
   value: string,
   style: Pick<TextStyle, 'font' | 'size'>,
 ): number {
-  doc.font(style.font ?? 'body').fontSize(style.size);
+  doc.font(style.font ?? 'body').fontSize(pt(style.size));
   return doc.widthOfString(value);
 }
 

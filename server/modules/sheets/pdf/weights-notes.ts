@@ -1,3 +1,4 @@
+import { shopMarks, withShopMarks } from './shop-marks';
 import type { SpoolResult } from '../../../../shared/engine/compute-result';
 import type { Vec3 } from '../../../../shared/schemas/spool-design-primitives.schema';
 import { formatLength, type LengthUnits } from '../../../../shared/units/length-format';
@@ -99,9 +100,13 @@ export function issuesBlock(result: SpoolResult, size: number): FlowBlock | null
   const errors = result.issues.filter((i) => i.severity === 'error');
   const warnings = result.issues.filter((i) => i.severity === 'warning');
   if (errors.length === 0 && warnings.length === 0) return null;
+  // Users see shop marks, never the design's node ids.
+  const marks = shopMarks(result);
+  const ref = (id: string | null | undefined) =>
+    id ? `(${marks.get(id) ?? withShopMarks(id, marks, result)}) ` : '';
   const paragraphs = [
-    ...errors.map((i) => `ERROR ${i.componentId ? `(${i.componentId}) ` : ''}${i.message}`),
-    ...warnings.map((i) => `Warning ${i.componentId ? `(${i.componentId}) ` : ''}${i.message}`),
+    ...errors.map((i) => `ERROR ${ref(i.componentId)}${withShopMarks(i.message, marks, result)}`),
+    ...warnings.map((i) => `Warning ${ref(i.componentId)}${withShopMarks(i.message, marks, result)}`),
   ];
   return paragraphBlock({
     title:
