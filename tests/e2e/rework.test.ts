@@ -99,4 +99,29 @@ describe('rework after a revision issued over work in progress', () => {
     await saveScreenshot(page, 'rework-03-cleared');
     await page.close();
   });
+
+  it('an archived job reads as read-only: no design, progress or rework controls', { timeout: 90_000 }, async () => {
+    const page = await browser.freshPage();
+    keepPictureOnFailure(page, 'archived-job');
+    await page.goto(`${app.baseUrl}/`);
+    await signInAs(page, DEMO_USERS.admin);
+    const jobs = (await api(page.request, 'get', '/jobs')) as { items: Array<{ id: string; version: number }> };
+    const job = jobs.items[0]!;
+    const spools = (await api(page.request, 'get', `/jobs/${job.id}/spools?pageSize=100`)) as {
+      items: Array<{ id: string; mark: string }>;
+    };
+    const spool = spools.items[0]!;
+    await api(page.request, 'post', `/jobs/${job.id}/archive`, { version: job.version });
+    await page.goto(`${app.baseUrl}/spools/${spool.id}`);
+    await page.getByTestId('job-archived-banner').waitFor();
+    await page.getByText('Loading the editor…').waitFor({ state: 'detached' });
+    await expect(
+      page.getByRole('button', { name: /Issue revision|Start|Record as|Rework done|Edit mark|Archive/ }).count(),
+    ).resolves.toBe(0);
+    await saveScreenshot(page, 'archived-job-spool');
+    await page.goto(`${app.baseUrl}/jobs/${job.id}`);
+    await page.getByTestId('job-archived-banner').waitFor();
+    await expect(page.getByRole('button', { name: /New spool|Add spool/ }).count()).resolves.toBe(0);
+    await page.close();
+  });
 });

@@ -76,8 +76,13 @@ export function Component() {
           </span>
         </div>
       </PageHeader>
+      {j.status === 'archived' ? (
+        <p role="status" data-testid="job-archived-banner" className="rounded-md border border-steel-300 bg-steel-100 px-3 py-2 text-sm text-ink-800">
+          This job is archived: its spools, designs and progress are kept for the record and are read-only.
+        </p>
+      ) : null}
       <JobSpecPanel job={j} />
-      <JobSpoolsSection job={j} mayCreate={can.manageSpools(user.role)} />
+      <JobSpoolsSection job={j} mayCreate={can.manageSpools(user.role) && j.status !== 'archived'} />
       <section aria-labelledby="job-paperwork" className="flex flex-col gap-2 rounded-lg border border-steel-200 bg-white p-4">
         <h2 id="job-paperwork" className="text-xl font-semibold text-ink-800">
           Saw list

@@ -39,8 +39,12 @@ export function Component() {
     return <ErrorState error={spool.error} onRetry={() => void spool.refetch()} />;
   }
   const s = spool.data;
-  const mayManage = can.manageSpools(user.role) && !s.archivedAt;
-  const mayEditDesign = can.editDesigns(user.role) && !s.archivedAt;
+  // An archived job, like an archived spool, is read-only throughout (the server answers 409).
+  const jobArchived = job.data?.status === 'archived';
+  const readOnly = Boolean(s.archivedAt) || jobArchived;
+  const mayManage = can.manageSpools(user.role) && !readOnly;
+  const mayEditDesign = can.editDesigns(user.role) && !readOnly;
+  const mayRecord = !readOnly && allowedSpoolStatusTargets(user.role, s.status).length > 0;
 
   return (
     <div className="flex flex-col gap-6">
@@ -90,9 +94,15 @@ export function Component() {
         </div>
       </PageHeader>
 
-      <SpoolReworkNotice spool={s} role={user.role} />
+      {jobArchived ? (
+        <p role="status" data-testid="job-archived-banner" className="rounded-md border border-steel-300 bg-steel-100 px-3 py-2 text-sm text-ink-800">
+          Job {job.data?.number} is archived: this spool, its designs and its progress are read-only.
+        </p>
+      ) : null}
 
-      <div className={allowedSpoolStatusTargets(user.role, s.status).length > 0 ? 'grid gap-4 lg:grid-cols-2' : 'grid gap-4'}>
+      <SpoolReworkNotice spool={s} role={user.role} readOnly={readOnly} />
+
+      <div className={mayRecord ? 'grid gap-4 lg:grid-cols-2' : 'grid gap-4'}>
         <section aria-labelledby="spool-sheet" className="flex flex-col gap-2 rounded-lg border border-steel-200 bg-white p-4">
           <h2 id="spool-sheet" className="text-xl font-semibold text-ink-800">
             Fabrication sheet
@@ -104,7 +114,7 @@ export function Component() {
           </p>
           <SpoolSheetActions spoolId={s.id} />
         </section>
-        <SpoolStatusActions spool={s} role={user.role} />
+        {mayRecord ? <SpoolStatusActions spool={s} role={user.role} /> : null}
       </div>
 
       <SpoolEditorSlot spoolId={s.id} readOnly={!mayEditDesign} />

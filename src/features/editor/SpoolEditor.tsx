@@ -115,7 +115,7 @@ export default function SpoolEditor({ spoolId, readOnly }: { spoolId: string; re
   const shown = revision.data;
   const banner = readOnly ? (
     <p className="rounded-md border border-state-issued-fg/30 bg-state-issued-bg px-3 py-2 text-sm text-state-issued-fg" data-testid="read-only-banner">
-      Read-only for {roleLabels[user.role].toLowerCase()}s: orbit, zoom and click to read dimensions. Showing{' '}
+      {can.editDesigns(user.role) ? 'Read-only (archived)' : `Read-only for ${roleLabels[user.role].toLowerCase()}s`}: orbit, zoom and click to read dimensions. Showing{' '}
       {shown?.state === 'draft' ? 'the working draft (not issued yet)' : `issued revision ${shown?.letter ?? ''}`}.
     </p>
   ) : !editing ? (

@@ -10,11 +10,11 @@ import { spoolStatusDisplay } from './spool-status-labels';
  * The rework flag on the spool page: a revision was issued over work the bay had done. Says
  * where the spool stood, where it went back to and what changed; the bay clears it when done.
  */
-export function SpoolReworkNotice({ spool, role }: { spool: Spool; role: Role }) {
+export function SpoolReworkNotice({ spool, role, readOnly }: { spool: Spool; role: Role; readOnly: boolean }) {
   const done = useMarkReworkDone(spool.id);
   const rework = spool.rework;
   if (!rework) return null;
-  const mayClear = (REWORK_DONE_ROLES as readonly Role[]).includes(role) && !spool.archivedAt;
+  const mayClear = (REWORK_DONE_ROLES as readonly Role[]).includes(role) && !readOnly;
   const moved = rework.fromStatus !== rework.toStatus;
   return (
     <section
