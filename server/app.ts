@@ -1,4 +1,3 @@
-import connectPgSimple from 'connect-pg-simple';
 import express, { type Express, type RequestHandler } from 'express';
 import session from 'express-session';
 import { existsSync } from 'node:fs';
@@ -7,6 +6,7 @@ import type { Pool } from 'pg';
 import type { DataSource } from 'typeorm';
 import { apiNotFound, errorMiddleware } from './common/error.middleware';
 import { requireOwnOrigin } from './common/own-origin.middleware';
+import { ThrottledPgStore } from './common/throttled-session-store';
 import { rejectBadUrlEncoding } from './common/url-encoding.middleware';
 import type { ServerConfig } from './config/env';
 import { AuditQueryService } from './modules/audit/audit-query.service';
@@ -77,12 +77,11 @@ export function createApp(options: AppOptions): TacklineApp {
   api.use(express.json({ limit: config.jsonBodyLimit }));
   api.use('/health', healthRouter(ds));
 
-  const PgStore = connectPgSimple(session);
   api.use(
     session({
       name: SESSION_COOKIE,
       secret: config.sessionSecret,
-      store: new PgStore({
+      store: new ThrottledPgStore({
         // The DataSource's own pg pool: one pool per process, closed with the DataSource.
         pool: (ds.driver as unknown as { master: Pool }).master,
         tableName: 'session',

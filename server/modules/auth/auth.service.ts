@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import type { SessionActor } from '../../common/session-actor';
+import type { Role } from '../../../shared/schemas/role.schema';
 import type { AuditWriter } from '../audit/audit.service';
 import { OrganisationEntity } from '../organisations/organisation.entity';
 import { UserEntity, type UserRow } from '../users/user.entity';
@@ -57,9 +58,31 @@ export class AuthService {
   }
 
   /** The session's user, freshly loaded; null when deleted or deactivated (ends the session). */
+  /** The signed-in user of a session, with their shop's name: one query, run on every request. */
   async loadActor(userId: string): Promise<SessionActor | null> {
-    const user = await this.ds.getRepository(UserEntity).findOneBy({ id: userId, active: true });
-    return user ? this.toActor(user) : null;
+    const rows: Array<{
+      id: string;
+      organisation_id: string;
+      email: string;
+      display_name: string;
+      role: Role;
+      name: string;
+    }> = await this.ds.query(
+      `SELECT u.id, u.organisation_id, u.email, u.display_name, u.role, o.name
+           FROM app_user u JOIN organisation o ON o.id = u.organisation_id
+          WHERE u.id = $1 AND u.active`,
+      [userId],
+    );
+    const row = rows[0];
+    if (!row) return null;
+    return {
+      id: row.id,
+      organisationId: row.organisation_id,
+      organisationName: row.name,
+      email: row.email,
+      displayName: row.display_name,
+      role: row.role,
+    };
   }
 
   private async toActor(user: UserRow): Promise<SessionActor> {
