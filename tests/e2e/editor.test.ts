@@ -68,10 +68,21 @@ describe('spool editor in the browser', () => {
     const page = await browser.context.newPage();
     const problems: string[] = [];
     page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
+    // Content-Security-Policy: the page is served with one, and nothing it loads (scripts,
+    // styles, workers, the WebGL scene) is refused: any violation, reported on the console or
+    // as a securitypolicyviolation event, fails the test.
+    const cspViolations: string[] = [];
     page.on('console', (m) => {
+      if (/Content Security Policy/i.test(m.text())) cspViolations.push(`console: ${m.text()}`);
       if (m.type() === 'error' && !/status of 40[149]/.test(m.text())) problems.push(`console: ${m.text()}`);
     });
-    await page.goto(`${app.baseUrl}/`);
+    await page.addInitScript(() => {
+      document.addEventListener('securitypolicyviolation', (e) =>
+        console.error(`Content Security Policy violation: ${e.violatedDirective} ${e.blockedURI} at ${e.sourceFile}:${e.lineNumber}:${e.columnNumber}`),
+      );
+    });
+    const documentResponse = await page.goto(`${app.baseUrl}/`);
+    expect(documentResponse?.headers()['content-security-policy']).toContain("script-src 'self';");
     await signInAs(page, DEMO_USERS.detailer);
 
     // Set-up only (not what is under test): a fresh spool in the demo job.
@@ -150,6 +161,10 @@ describe('spool editor in the browser', () => {
     await page.getByTestId('editor-status').getByText(/Not a valid spool design: nodes/).waitFor();
     await page.getByRole('tab', { name: /Cut list/ }).click();
     expect(await cutListOnScreen(page)).toEqual(onScreen);
+    // The 3D view drew something under the policy (a blank WebGL canvas is one colour).
+    const shot = await page.locator('canvas').first().screenshot();
+    expect(shot.length).toBeGreaterThan(2_000);
+    expect(cspViolations).toEqual([]);
     expect(problems).toEqual([]);
     await signOut(page);
     await page.close();
