@@ -21,7 +21,16 @@ export const REDACT_PATHS = [
 ];
 
 /** Error fields that are safe to log: never SQL parameters, driver details or request bodies. */
-const SAFE_ERROR_FIELDS = ['code', 'constraint', 'table', 'column', 'routine', 'status', 'statusCode', 'type'];
+const SAFE_ERROR_FIELDS = [
+  'code',
+  'constraint',
+  'table',
+  'column',
+  'routine',
+  'status',
+  'statusCode',
+  'type',
+];
 
 /**
  * An error as a log object: name, message, stack and a few diagnostic codes. TypeORM's

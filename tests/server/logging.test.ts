@@ -55,7 +55,12 @@ describe('server log', () => {
       .post('/api/users')
       .set('Content-Type', 'application/json')
       .set('Cookie', cookie)
-      .send({ email: 'new.user@logs.example', displayName: 'New User', role: 'viewer', password: newPassword });
+      .send({
+        email: 'new.user@logs.example',
+        displayName: 'New User',
+        role: 'viewer',
+        password: newPassword,
+      });
     expect(res.status).toBe(500);
     expect(res.body.error.code).toBe('internal_error');
 
@@ -70,7 +75,9 @@ describe('server log', () => {
     const failure = lines.find((l) => l.msg === 'POST /api/users failed');
     expect(failure).toBeDefined();
     expect(JSON.stringify(failure)).toContain('injected failure for the log test');
-    expect(lines.some((l) => (l.req as { path?: string } | undefined)?.path === '/api/auth/sign-in')).toBe(true);
+    expect(lines.some((l) => (l.req as { path?: string } | undefined)?.path === '/api/auth/sign-in')).toBe(
+      true,
+    );
 
     for (const secret of [newPassword, PASSWORD, adminRow.password_hash as string, cookieValue, sessionId]) {
       expect(logText).not.toContain(secret);

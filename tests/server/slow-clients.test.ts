@@ -45,7 +45,11 @@ function stall(port: number, chunk: string, waitMs: number): Promise<string | nu
   });
 }
 
-const SHORT = { HTTP_HEADERS_TIMEOUT_MS: '300', HTTP_REQUEST_TIMEOUT_MS: '600', HTTP_KEEP_ALIVE_TIMEOUT_MS: '300' };
+const SHORT = {
+  HTTP_HEADERS_TIMEOUT_MS: '300',
+  HTTP_REQUEST_TIMEOUT_MS: '600',
+  HTTP_KEEP_ALIVE_TIMEOUT_MS: '300',
+};
 
 describe('slow clients', () => {
   it('closes a connection whose headers stall (408)', async () => {
