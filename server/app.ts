@@ -1,10 +1,14 @@
-import express, { type Express, type RequestHandler } from 'express';
+import express, { type Express } from 'express';
 import session from 'express-session';
+import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { Pool } from 'pg';
+import type { Logger } from 'pino';
+import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import { apiNotFound, errorMiddleware } from './common/error.middleware';
+import { createLogger, safeError } from './common/logger';
 import { requireOwnOrigin } from './common/own-origin.middleware';
 import { ThrottledPgStore } from './common/throttled-session-store';
 import { rejectBadUrlEncoding } from './common/url-encoding.middleware';
@@ -41,8 +45,8 @@ export interface AppOptions {
   audit?: AuditWriter;
   /** Folder of the built client to serve (with SPA fallback); null or missing folder: API only. */
   clientDir?: string | null;
-  /** Where 500s are logged. */
-  log?: (message: string, err: unknown) => void;
+  /** Structured logger for requests and 5xx errors (secrets redacted); default: pino on stdout at `config.logLevel`. */
+  logger?: Logger;
   /** Draws sheet PDFs; default: a worker-thread pool with `config.sheetRender`'s limits. */
   sheetRenderer?: SheetRenderer;
 }
@@ -68,7 +72,25 @@ export function createApp(options: AppOptions): TacklineApp {
   app.disable('x-powered-by');
   // Behind a reverse proxy the client address and protocol come from X-Forwarded-*.
   app.set('trust proxy', config.trustProxy);
-  app.use(securityHeaders);
+  const logger = options.logger ?? createLogger(config.logLevel);
+  app.use(
+    pinoHttp({
+      logger,
+      // Method, path (no query string), status and time only: no headers, cookies or bodies.
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string; remoteAddress?: string }) => ({
+          id: req.id,
+          method: req.method,
+          path: req.url.split('?')[0],
+          remoteAddress: req.remoteAddress,
+        }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+        err: safeError,
+      },
+      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : 'info'),
+    }),
+  );
+  app.use(securityHeaders(config.publicUrl.startsWith('https:')));
   app.use(rejectBadUrlEncoding);
 
   const api = express.Router();
@@ -139,13 +161,36 @@ export function createApp(options: AppOptions): TacklineApp {
     });
   }
 
-  app.use(errorMiddleware(options.log));
+  app.use(errorMiddleware(logger));
   return app;
 }
 
-const securityHeaders: RequestHandler = (_req, res, next) => {
-  res.set('X-Content-Type-Options', 'nosniff');
-  res.set('X-Frame-Options', 'DENY');
-  res.set('Referrer-Policy', 'same-origin');
-  next();
-};
+/**
+ * helmet with a Content-Security-Policy the built client needs and no more: scripts and styles
+ * from our origin only (no inline script), workers also from `blob:` (three.js loaders start
+ * them from object URLs), `data:`/`blob:` for images and fetches of embedded model buffers;
+ * no framing; HSTS and upgrade-insecure-requests only behind an https PUBLIC_URL, since a
+ * shop reaching the server over plain http on its LAN would otherwise be locked out.
+ */
+function securityHeaders(https: boolean) {
+  return helmet({
+    contentSecurityPolicy: {
+      useDefaults: true,
+      directives: {
+        defaultSrc: ["'self'"],
+        scriptSrc: ["'self'"],
+        styleSrc: ["'self'"],
+        fontSrc: ["'self'", 'data:'],
+        workerSrc: ["'self'", 'blob:'],
+        imgSrc: ["'self'", 'data:', 'blob:'],
+        connectSrc: ["'self'", 'data:', 'blob:'],
+        frameAncestors: ["'none'"],
+        upgradeInsecureRequests: https ? [] : null,
+      },
+    },
+    crossOriginOpenerPolicy: { policy: 'same-origin' },
+    strictTransportSecurity: https ? { maxAge: 180 * 24 * 60 * 60, includeSubDomains: false } : false,
+    xFrameOptions: { action: 'deny' },
+    referrerPolicy: { policy: 'same-origin' },
+  });
+}

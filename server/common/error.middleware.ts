@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { QueryFailedError } from 'typeorm';
+import type { Logger } from 'pino';
 import { ZodError } from 'zod';
 import type { ErrorBody } from '../../shared/schemas/error.schema';
 import { AppError } from './app-error';
@@ -116,15 +117,22 @@ export function toAppError(err: unknown): AppError {
   return new AppError(500, 'internal_error', 'Something went wrong on the server. Nothing was saved.');
 }
 
-/** The one error middleware: every error leaves as `{ error: { code, message, details } }`. */
-export function errorMiddleware(
-  log: (message: string, err: unknown) => void = console.error,
-): ErrorRequestHandler {
+/**
+ * The one error middleware: every error leaves as `{ error: { code, message, details } }`.
+ * A 5xx is logged through `logger`, whose `err` serializer keeps name, message, stack and
+ * codes only (no SQL parameters, no request body); the URL is logged without its query.
+ */
+export function errorMiddleware(logger: Logger): ErrorRequestHandler {
   return (err, req, res, next) => {
     if (res.headersSent) return next(err);
     const appError = toAppError(err);
     if (appError.status === 503) res.set('Retry-After', String(DATABASE_RETRY_AFTER_SECONDS));
-    if (appError.status >= 500) log(`[tackline] ${req.method} ${req.originalUrl} failed`, err);
+    if (appError.status >= 500) {
+      logger.error(
+        { err, reqId: req.id, method: req.method, path: req.path, status: appError.status },
+        `${req.method} ${req.path} failed`,
+      );
+    }
     const body: ErrorBody = { error: { code: appError.code, message: appError.message } };
     if (appError.details !== undefined) body.error.details = appError.details;
     res.status(appError.status).json(body);

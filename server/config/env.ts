@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { LOG_LEVELS, type LogLevel } from '../common/logger';
 import {
   defaultSheetRenderLimits,
   type SheetRenderLimits,
@@ -27,6 +28,11 @@ const envSchema = z.object({
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(10),
   JSON_BODY_LIMIT: z.string().default('2mb'),
+  LOG_LEVEL: z.enum(LOG_LEVELS).default('info'),
+  // Slow clients: whole headers within, whole request within, idle keep-alive socket closed after.
+  HTTP_HEADERS_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(10_000),
+  HTTP_REQUEST_TIMEOUT_MS: z.coerce.number().int().min(100).max(3_600_000).default(20_000),
+  HTTP_KEEP_ALIVE_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(5_000),
   // Sheet rendering on worker threads (server/modules/sheets/render/sheet-render-pool.ts).
   SHEET_RENDER_THREADS: z.coerce.number().int().min(1).max(64).optional(),
   SHEET_RENDER_TIMEOUT_MS: z.coerce.number().int().min(1).max(600_000).default(30_000),
@@ -60,10 +66,24 @@ export interface ServerConfig {
   signIn: { maxAttemptsPerAccount: number; maxAttemptsPerIp: number; windowMs: number };
   bcryptCost: number;
   jsonBodyLimit: string;
+  /** pino level of the server log (stdout, one JSON line per event). */
+  logLevel: LogLevel;
+  /** Node http server time-outs in ms (see server/http-server.ts). */
+  http: HttpTimeouts;
   /** Seconds between pruning expired sessions; false turns pruning off (tests). */
   sessionPruneSeconds: number | false;
   /** Render threads and the time, memory and queue limits of sheet rendering. */
   sheetRender: SheetRenderLimits;
+}
+
+/** Node http server time-outs, in milliseconds. */
+export interface HttpTimeouts {
+  /** Longest time to receive a request's headers (Node `headersTimeout`). */
+  headersTimeoutMs: number;
+  /** Longest time to receive a whole request, headers and body (Node `requestTimeout`). */
+  requestTimeoutMs: number;
+  /** How long an idle keep-alive connection stays open (Node `keepAliveTimeout`). */
+  keepAliveTimeoutMs: number;
 }
 
 /** Parses `env` (default `process.env`) into the server config; exits on a bad value. */
@@ -109,6 +129,13 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     },
     bcryptCost: e.BCRYPT_COST,
     jsonBodyLimit: e.JSON_BODY_LIMIT,
+    logLevel: e.LOG_LEVEL,
+    http: {
+      headersTimeoutMs: e.HTTP_HEADERS_TIMEOUT_MS,
+      // Node requires requestTimeout >= headersTimeout.
+      requestTimeoutMs: Math.max(e.HTTP_REQUEST_TIMEOUT_MS, e.HTTP_HEADERS_TIMEOUT_MS),
+      keepAliveTimeoutMs: e.HTTP_KEEP_ALIVE_TIMEOUT_MS,
+    },
     sessionPruneSeconds: e.NODE_ENV === 'test' ? false : 15 * 60,
     sheetRender: {
       threads: e.SHEET_RENDER_THREADS ?? defaultSheetRenderLimits().threads,

@@ -68,10 +68,21 @@ describe('spool editor in the browser', () => {
     const page = await browser.context.newPage();
     const problems: string[] = [];
     page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
+    // Content-Security-Policy: the page is served with one, and nothing it loads (scripts,
+    // styles, workers, the WebGL scene) is refused: any violation, reported on the console or
+    // as a securitypolicyviolation event, fails the test.
+    const cspViolations: string[] = [];
     page.on('console', (m) => {
+      if (/Content Security Policy/i.test(m.text())) cspViolations.push(`console: ${m.text()}`);
       if (m.type() === 'error' && !/status of 40[149]/.test(m.text())) problems.push(`console: ${m.text()}`);
     });
-    await page.goto(`${app.baseUrl}/`);
+    await page.addInitScript(() => {
+      document.addEventListener('securitypolicyviolation', (e) =>
+        console.error(`Content Security Policy violation: ${e.violatedDirective} ${e.blockedURI} at ${e.sourceFile}:${e.lineNumber}:${e.columnNumber}`),
+      );
+    });
+    const documentResponse = await page.goto(`${app.baseUrl}/`);
+    expect(documentResponse?.headers()['content-security-policy']).toContain("script-src 'self';");
     await signInAs(page, DEMO_USERS.detailer);
 
     // Set-up only (not what is under test): a fresh spool in the demo job.
@@ -150,6 +161,25 @@ describe('spool editor in the browser', () => {
     await page.getByTestId('editor-status').getByText(/Not a valid spool design: nodes/).waitFor();
     await page.getByRole('tab', { name: /Cut list/ }).click();
     expect(await cutListOnScreen(page)).toEqual(onScreen);
+    // The 3D view drew under the policy: a blank or failed WebGL canvas is one colour, a
+    // shaded pipe gives many. The screenshot is decoded in the page (img-src allows data:).
+    const shot = (await page.locator('canvas').first().screenshot()).toString('base64');
+    const colours = await page.evaluate(async (b64) => {
+      const img = new Image();
+      img.src = `data:image/png;base64,${b64}`;
+      await img.decode();
+      const c = document.createElement('canvas');
+      c.width = img.width;
+      c.height = img.height;
+      const g = c.getContext('2d')!;
+      g.drawImage(img, 0, 0);
+      const px = g.getImageData(0, 0, c.width, c.height).data;
+      const seen = new Set<number>();
+      for (let i = 0; i < px.length; i += 4 * 7) seen.add((px[i]! << 16) | (px[i + 1]! << 8) | px[i + 2]!);
+      return seen.size;
+    }, shot);
+    expect(colours).toBeGreaterThan(20);
+    expect(cspViolations).toEqual([]);
     expect(problems).toEqual([]);
     await signOut(page);
     await page.close();

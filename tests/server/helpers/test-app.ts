@@ -16,6 +16,8 @@ export function testConfig(url: string, env: Record<string, string> = {}): Serve
     BCRYPT_COST: '4',
     SIGN_IN_MAX_ATTEMPTS: '1000',
     COOKIE_SECURE: 'false',
+    // Tests that read the log pass their own logger (tests/server/logging.test.ts).
+    LOG_LEVEL: 'silent',
     ...env,
   });
 }
@@ -27,7 +29,7 @@ export function testApp(
   options: { env?: Record<string, string> } & Partial<Omit<AppOptions, 'dataSource' | 'config'>> = {},
 ): Express {
   const { env, ...rest } = options;
-  return createApp({ dataSource, config: testConfig(url, env), log: () => {}, ...rest });
+  return createApp({ dataSource, config: testConfig(url, env), ...rest });
 }
 
 /** A supertest agent signed in as `email` (keeps the session cookie). */
