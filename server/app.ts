@@ -15,6 +15,7 @@ import { writeAuditEvent, type AuditWriter } from './modules/audit/audit.service
 import { authRouter } from './modules/auth/auth.router';
 import { AuthService } from './modules/auth/auth.service';
 import { createPassport } from './modules/auth/passport';
+import { endExpiredSessions } from './modules/auth/session-lifetime.middleware';
 import { SignInThrottle } from './modules/auth/sign-in-rate-limit';
 import { healthRouter } from './modules/health/health.router';
 import { jobRouter } from './modules/jobs/job.router';
@@ -102,6 +103,7 @@ export function createApp(options: AppOptions): TacklineApp {
       },
     }),
   );
+  api.use(endExpiredSessions(config.sessionLifetimeMs));
   api.use(passport.initialize());
   api.use(passport.session());
   api.use((_req, res, next) => {

@@ -1,6 +1,6 @@
 import { Router, type Request, type Response } from 'express';
 import type passport from 'passport';
-import type {} from 'express-session';
+import './session-lifetime.middleware';
 import { signInSchema } from '../../../shared/schemas/auth.schema';
 import { AppError } from '../../common/app-error';
 import { requireAuth } from '../../common/auth.middleware';
@@ -44,6 +44,8 @@ export function authRouter(deps: {
     await deps.throttle.clear(keys.account);
     // req.logIn regenerates the session (passport 0.7), so a planted session id is useless.
     await new Promise<void>((resolve, reject) => req.logIn(actor, (err) => (err ? reject(err) : resolve())));
+    // The absolute lifetime counts from here (session-lifetime.middleware.ts).
+    req.session.signedInAt = Date.now();
     await deps.auth.recordSignIn(actor);
     res.json({ user: await deps.users.get(actor, actor.id) });
   });
