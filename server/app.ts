@@ -16,7 +16,7 @@ import { authRouter } from './modules/auth/auth.router';
 import { AuthService } from './modules/auth/auth.service';
 import { createPassport } from './modules/auth/passport';
 import { endExpiredSessions } from './modules/auth/session-lifetime.middleware';
-import { SignInThrottle } from './modules/auth/sign-in-rate-limit';
+import { SignInThrottle } from './modules/auth/sign-in-throttle';
 import { healthRouter } from './modules/health/health.router';
 import { jobRouter } from './modules/jobs/job.router';
 import { JobService } from './modules/jobs/job.service';

@@ -8,7 +8,7 @@ import { actorOf, type SessionActor } from '../../common/session-actor';
 import { validate } from '../../common/validate.middleware';
 import type { UserService } from '../users/user.service';
 import type { AuthService } from './auth.service';
-import { signInKeys, type SignInThrottle } from './sign-in-rate-limit';
+import { signInKeys, type SignInThrottle } from './sign-in-throttle';
 
 /** One answer for unknown e-mail, wrong password and deactivated account. */
 const SIGN_IN_FAILED = 'E-mail or password is incorrect';
