@@ -19,6 +19,8 @@ import { writeAuditEvent, type AuditWriter } from './modules/audit/audit.service
 import { authRouter } from './modules/auth/auth.router';
 import { AuthService } from './modules/auth/auth.service';
 import { createPassport } from './modules/auth/passport';
+import { endExpiredSessions } from './modules/auth/session-lifetime.middleware';
+import { SignInThrottle } from './modules/auth/sign-in-throttle';
 import { healthRouter } from './modules/health/health.router';
 import { jobRouter } from './modules/jobs/job.router';
 import { JobService } from './modules/jobs/job.service';
@@ -60,7 +62,7 @@ export function createApp(options: AppOptions): TacklineApp {
   const sheetRenderer = options.sheetRenderer ?? new PooledSheetRenderer(config.sheetRender);
   const audit = options.audit ?? writeAuditEvent;
 
-  const authService = new AuthService(ds, audit);
+  const authService = new AuthService(ds, audit, config.bcryptCost);
   const users = new UserService(ds, audit, config.bcryptCost);
   const jobs = new JobService(ds, audit);
   const spools = new SpoolService(ds, audit, jobs);
@@ -122,6 +124,7 @@ export function createApp(options: AppOptions): TacklineApp {
       },
     }),
   );
+  api.use(endExpiredSessions(config.sessionLifetimeMs));
   api.use(passport.initialize());
   api.use(passport.session());
   api.use((_req, res, next) => {
@@ -131,7 +134,13 @@ export function createApp(options: AppOptions): TacklineApp {
 
   api.use(
     '/auth',
-    authRouter({ passport, auth: authService, users, limits: config.signIn, cookieName: SESSION_COOKIE }),
+    authRouter({
+      passport,
+      auth: authService,
+      users,
+      throttle: new SignInThrottle(ds, config.signIn),
+      cookieName: SESSION_COOKIE,
+    }),
   );
   api.use('/users', userRouter(users));
   api.use('/audit-events', auditRouter(new AuditQueryService(ds)));

@@ -26,6 +26,8 @@ const envSchema = z.object({
   TRUST_PROXY: z.string().min(1).optional(),
   SIGN_IN_MAX_ATTEMPTS: z.coerce.number().int().min(1).default(10),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+  // Absolute session lifetime from sign-in, however active the session has been.
+  SESSION_LIFETIME_DAYS: z.coerce.number().positive().max(365).default(7),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(10),
   JSON_BODY_LIMIT: z.string().default('2mb'),
   LOG_LEVEL: z.enum(LOG_LEVELS).default('info'),
@@ -72,6 +74,8 @@ export interface ServerConfig {
   http: HttpTimeouts;
   /** Seconds between pruning expired sessions; false turns pruning off (tests). */
   sessionPruneSeconds: number | false;
+  /** A session ends this long (ms) after its sign-in, even while in use. */
+  sessionLifetimeMs: number;
   /** Render threads and the time, memory and queue limits of sheet rendering. */
   sheetRender: SheetRenderLimits;
 }
@@ -137,6 +141,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
       keepAliveTimeoutMs: e.HTTP_KEEP_ALIVE_TIMEOUT_MS,
     },
     sessionPruneSeconds: e.NODE_ENV === 'test' ? false : 15 * 60,
+    sessionLifetimeMs: Math.round(e.SESSION_LIFETIME_DAYS * 24 * 60 * 60 * 1000),
     sheetRender: {
       threads: e.SHEET_RENDER_THREADS ?? defaultSheetRenderLimits().threads,
       timeoutMs: e.SHEET_RENDER_TIMEOUT_MS,

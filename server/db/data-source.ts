@@ -8,6 +8,8 @@ import { SpoolEntity } from '../modules/spools/spool.entity';
 import { UserEntity } from '../modules/users/user.entity';
 import { InitialSchema1764626400000 } from './migrations/1764626400000-initial-schema';
 import { SpoolRework1764800000000 } from './migrations/1764800000000-spool-rework';
+import { SignInFailures1764900000000 } from './migrations/1764900000000-sign-in-failures';
+import { SignInFailureEntity } from '../modules/auth/sign-in-failure.entity';
 
 /** Every entity, listed (not globbed) so tsx and the bundler both find them. */
 export const ENTITIES = [
@@ -17,9 +19,10 @@ export const ENTITIES = [
   SpoolEntity,
   SpoolRevisionEntity,
   AuditEventEntity,
+  SignInFailureEntity,
 ];
 /** Every migration in order. Add new ones at the end. */
-export const MIGRATIONS = [InitialSchema1764626400000, SpoolRework1764800000000];
+export const MIGRATIONS = [InitialSchema1764626400000, SpoolRework1764800000000, SignInFailures1764900000000];
 
 /** A DataSource on `url`. Schema changes only through migrations, never synchronize. */
 export function createDataSource(url: string, options: { poolSize?: number } = {}): DataSource {

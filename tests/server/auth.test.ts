@@ -101,7 +101,7 @@ describe('POST /api/auth/sign-in', () => {
     expect(await snapshot(db.dataSource)).toBe(before);
   });
 
-  it('rate-limits repeated failed attempts with 429, even when the right password comes next', async () => {
+  it('slows an account down with 429 after its limit of failures, even for the right password, until Retry-After', async () => {
     const limited = testApp(db.dataSource, db.url, { env: { SIGN_IN_MAX_ATTEMPTS: '3' } });
     const email = shop.email('inspector');
     for (let i = 0; i < 3; i++) {
@@ -113,6 +113,7 @@ describe('POST /api/auth/sign-in', () => {
     const blocked = await request(limited).post('/api/auth/sign-in').send({ email, password: PASSWORD });
     expect(blocked.status).toBe(429);
     expect(blocked.body.error.code).toBe('too_many_attempts');
+    expect(blocked.headers['retry-after']).toBe('1');
     // another account from the same address is not locked by the first one's failures
     await request(limited)
       .post('/api/auth/sign-in')

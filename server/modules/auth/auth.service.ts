@@ -4,19 +4,32 @@ import type { Role } from '../../../shared/schemas/role.schema';
 import type { AuditWriter } from '../audit/audit.service';
 import { OrganisationEntity } from '../organisations/organisation.entity';
 import { UserEntity, type UserRow } from '../users/user.entity';
-import { burnPasswordCheck, verifyPassword } from './password';
+import { dummyPasswordHash, verifyPassword } from './password';
+
+/**
+ * bcrypt comparisons per sign-in attempt, whatever the e-mail: one e-mail may have an
+ * account in two shops, and an unknown e-mail or a one-shop account is padded with
+ * comparisons against a dummy hash of the same cost, so the answer's time tells nothing.
+ */
+export const SIGN_IN_PASSWORD_CHECKS = 2;
 
 /** Sign-in checks and loading the signed-in user for each request. */
 export class AuthService {
   constructor(
     private readonly ds: DataSource,
     private readonly audit: AuditWriter,
+    /** bcrypt cost of the dummy hash: the cost new passwords are hashed at. */
+    private readonly bcryptCost: number,
+    /** The bcrypt comparison; tests count its calls. */
+    private readonly verify: (password: string, hash: string) => Promise<boolean> = verifyPassword,
   ) {}
 
   /**
    * The active account whose password matches, or null. E-mails are unique per shop,
    * so one address may have accounts in two shops: each is checked, oldest first.
-   * Unknown e-mail, wrong password and inactive account all give null, in about the same time.
+   * Unknown e-mail, wrong password, inactive account and an e-mail in two shops all make
+   * the same number of bcrypt comparisons (`SIGN_IN_PASSWORD_CHECKS`; more only for an
+   * e-mail in three or more shops), so they take the same time.
    */
   async verifyCredentials(email: string, password: string): Promise<SessionActor | null> {
     const candidates = await this.ds
@@ -27,14 +40,15 @@ export class AuthService {
       .andWhere('u.active = true')
       .orderBy('u.createdAt', 'ASC')
       .getMany();
-    if (candidates.length === 0) {
-      await burnPasswordCheck(password);
-      return null;
+    const dummy = dummyPasswordHash(this.bcryptCost);
+    let match: UserRow | null = null;
+    // Every candidate is checked even after a match, then padded with dummy checks.
+    for (let i = 0; i < Math.max(SIGN_IN_PASSWORD_CHECKS, candidates.length); i++) {
+      const user = candidates[i];
+      const ok = await this.verify(password, user ? user.passwordHash : dummy);
+      if (ok && user && !match) match = user;
     }
-    for (const user of candidates) {
-      if (await verifyPassword(password, user.passwordHash)) return this.toActor(user);
-    }
-    return null;
+    return match ? this.toActor(match) : null;
   }
 
   /** Records the sign-in time and an audit event. */

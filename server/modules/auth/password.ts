@@ -10,11 +10,17 @@ export function verifyPassword(password: string, hash: string): Promise<boolean>
   return bcrypt.compare(password, hash);
 }
 
-// Compared against when no account matches, so an unknown e-mail costs as much time as
-// a wrong password and the two cannot be told apart by timing.
-const DUMMY_HASH = bcrypt.hashSync('tackline-no-such-user', 10);
+const dummyHashes = new Map<number, string>();
 
-/** Spends a bcrypt comparison's time without a real account. */
-export async function burnPasswordCheck(password: string): Promise<void> {
-  await bcrypt.compare(password, DUMMY_HASH);
+/**
+ * A hash of no account's password at `cost` (made once per cost), compared against in
+ * place of a real account so that every sign-in path spends the same bcrypt time.
+ */
+export function dummyPasswordHash(cost: number): string {
+  let hash = dummyHashes.get(cost);
+  if (!hash) {
+    hash = bcrypt.hashSync('tackline-no-such-user', cost);
+    dummyHashes.set(cost, hash);
+  }
+  return hash;
 }
