@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { renderSawList } from '../../../server/modules/sheets/pdf/saw-list';
 import { renderSpoolSheet } from '../../../server/modules/sheets/pdf/spool-sheet';
 import { computedSample, SAMPLE_FILES, testHeader } from './helpers/sheet-fixtures';
 import { textBoxes, type TextBox } from './helpers/text-boxes';
@@ -86,4 +87,31 @@ describe('sheet text layout', () => {
           truncations: [],
         });
       });
+
+  it.each(PAPERS)('no text overlaps or is cut off on the job saw list on %s', async (paper) => {
+    const out = await renderSawList({
+      shopName: 'Kestrel Pipe & Steel',
+      clientName: 'Harrow Fields Data Centre',
+      jobNumber: 'HF-B-001',
+      jobTitle: 'Condenser water, Hall B',
+      site: 'Hall B',
+      jobUrl: 'http://127.0.0.1:4717/jobs/1',
+      units: 'ft-in',
+      paper,
+      spools: SAMPLE_FILES.map((file, i) => ({
+        mark: `CW-S0${i + 1}`,
+        revisionLetter: 'A',
+        revisionState: 'issued' as const,
+        result: computedSample(file).result,
+      })),
+      skipped: [],
+      printedAt: new Date('2026-12-01T12:00:00Z'),
+    });
+    const boxes = await textBoxes(out.pdf);
+    expect(boxes.length).toBeGreaterThan(50);
+    expect({ overlaps: overlaps(boxes), truncations: truncations(boxes) }).toEqual({
+      overlaps: [],
+      truncations: [],
+    });
+  });
 });
