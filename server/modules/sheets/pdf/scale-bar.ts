@@ -1,6 +1,6 @@
 import { mm } from './page-setup';
 import { INK } from './sheet-style';
-import { drawText } from './text';
+import { drawText, measureWidth, MIN_TEXT_PT } from './text';
 
 /** Where a scale check bar was drawn, in PDF points (origin top-left): exposed so tests can measure it. */
 export interface ScaleBarGeometry {
@@ -43,8 +43,16 @@ export function drawScaleBar(
   yy += barH + size + 2;
   if (withInches) {
     bars.push(segmentedBar(doc, x, yy, 101.6, 25.4, barH, (i) => `${i}"`, size * 0.8));
-    drawText(doc, 'This bar is 4 in.', x + mm(104), yy - 1, { size: size * 0.85, color: INK.muted });
+    const caption = 'This bar is 4 in.';
+    const captionStyle = { size: size * 0.85, color: INK.muted };
     yy += barH + size + 2;
+    // Beside the bar when the page has room, else under its ticks (never past the page edge).
+    if (x + mm(104) + measureWidth(doc, caption, captionStyle) <= doc.page.width - mm(5)) {
+      drawText(doc, caption, x + mm(104), yy - barH - size - 3, captionStyle);
+    } else {
+      drawText(doc, caption, x, yy, captionStyle);
+      yy += Math.max(MIN_TEXT_PT, size * 0.85) * 1.2 + 2;
+    }
   }
   return { bars, height: yy - y };
 }

@@ -2,7 +2,7 @@ import type { FontRole } from './fonts';
 import type { FlowBlock, Placement } from './flow-layout';
 import type { Rect } from './page-setup';
 import { INK } from './sheet-style';
-import { drawText, measureWrapped } from './text';
+import { drawText, measureWidth, measureWrapped } from './text';
 
 export interface TableColumn {
   header: string;
@@ -37,22 +37,45 @@ export function tableBlock(spec: TableSpec, startRow = 0): FlowBlock {
       const size = spec.size;
       const titleH = size * 1.25 + 3;
       const rowH = size * 1.5;
-      const headerH = rowH;
       const footH = spec.footnote ? measureWrapped(doc, spec.footnote, area.w, { size: size * 0.85 }) + 3 : 0;
       const totalWeight = spec.columns.reduce((s, c) => s + c.weight, 0);
       const widths = spec.columns.map((c) => (c.weight / totalWeight) * area.w);
       const pad = 2.5;
       const lineH = size * 1.18;
+      const headerH0 = rowH;
+      // A cell wraps when its column says so or its text is wider than the cell: a value is
+      // never shortened on a cut sheet (a clipped mark or length could be misread).
+      const wraps = (c: TableColumn, i: number, value: string, font: FontRole): boolean =>
+        (c.wrap ?? false) || measureWidth(doc, value, { size, font }) > widths[i]! - 2 * pad;
+      const linesOf = (value: string, i: number, font: FontRole): number => {
+        const h = measureWrapped(doc, value, widths[i]! - 2 * pad, { size, font });
+        return Math.max(1, Math.round(h / doc.currentLineHeight()));
+      };
+      const cellFont = (c: TableColumn, row?: TableRow): FontRole => {
+        const bold = row?.emphasis === 'total' || row?.emphasis === 'group';
+        return bold ? (c.font === 'mono' ? 'mono-bold' : 'body-bold') : (c.font ?? 'body');
+      };
       // Row heights: one line, or as many as the longest wrapped cell needs.
       const rowHeight = (row: TableRow): number => {
         let lines = 1;
         spec.columns.forEach((c, i) => {
-          if (!c.wrap) return;
-          const h = measureWrapped(doc, row.cells[i] ?? '', widths[i]! - 2 * pad, { size, font: c.font });
-          lines = Math.max(lines, Math.round(h / doc.currentLineHeight()));
+          if (c.checkbox) return;
+          const value = row.cells[i] ?? '';
+          const font = cellFont(c, row);
+          if (!wraps(c, i, value, font)) return;
+          lines = Math.max(lines, linesOf(value, i, font));
         });
         return lines === 1 ? rowH : rowH + (lines - 1) * lineH;
       };
+      const headerLines = Math.max(
+        1,
+        ...spec.columns.map((c, i) =>
+          measureWidth(doc, c.header, { size, font: 'cond-semibold' }) > widths[i]! - 2 * pad
+            ? linesOf(c.header, i, 'cond-semibold')
+            : 1,
+        ),
+      );
+      const headerH = headerLines === 1 ? headerH0 : headerH0 + (headerLines - 1) * lineH;
       const remainingRows = spec.rows.length - startRow;
       const available = area.h - titleH - headerH;
       let fit = 0;
@@ -86,12 +109,16 @@ export function tableBlock(spec: TableSpec, startRow = 0): FlowBlock {
       doc.rect(area.x, y, area.w, headerH).fill(INK.header);
       let x = area.x;
       spec.columns.forEach((c, i) => {
-        drawText(doc, c.header, x + pad, y + (headerH - size) / 2, {
+        const wrapHeader =
+          measureWidth(doc, c.header, { size, font: 'cond-semibold' }) > widths[i]! - 2 * pad;
+        drawText(doc, c.header, x + pad, y + (headerH0 - size) / 2, {
           font: 'cond-semibold',
           size,
           color: INK.black,
           width: widths[i]! - 2 * pad,
           align: c.align ?? 'left',
+          wrap: wrapHeader,
+          lineGap: wrapHeader ? lineH - size * 1.2 : 0,
         });
         x += widths[i]!;
       });
@@ -105,8 +132,7 @@ export function tableBlock(spec: TableSpec, startRow = 0): FlowBlock {
         else if ((r - startRow) % 2 === 1) doc.rect(area.x, y, area.w, thisH).fill('#f7f7f7');
         x = area.x;
         spec.columns.forEach((c, i) => {
-          const bold = row.emphasis === 'total' || row.emphasis === 'group';
-          const font: FontRole = bold ? (c.font === 'mono' ? 'mono-bold' : 'body-bold') : (c.font ?? 'body');
+          const font = cellFont(c, row);
           if (c.checkbox) {
             if (!row.emphasis) {
               const b = size * 0.85;
@@ -119,14 +145,16 @@ export function tableBlock(spec: TableSpec, startRow = 0): FlowBlock {
             x += widths[i]!;
             return;
           }
-          drawText(doc, row.cells[i] ?? '', x + pad, y + (rowH - size) / 2, {
+          const value = row.cells[i] ?? '';
+          const wrap = wraps(c, i, value, font);
+          drawText(doc, value, x + pad, y + (rowH - size) / 2, {
             font,
             size,
             color: row.emphasis === 'warn' ? INK.warn : INK.text,
             width: widths[i]! - 2 * pad,
             align: c.align ?? 'left',
-            wrap: c.wrap ?? false,
-            lineGap: c.wrap ? lineH - size * 1.2 : 0,
+            wrap,
+            lineGap: wrap ? lineH - size * 1.2 : 0,
           });
           x += widths[i]!;
         });

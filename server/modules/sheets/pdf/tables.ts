@@ -142,13 +142,15 @@ export function bomBlock(result: SpoolResult, units: LengthUnits, size: number):
     title: 'Bill of materials',
     size,
     columns: [
-      { header: 'Item', weight: 0.4 },
-      { header: 'Size', weight: 1.1, font: 'body-bold', wrap: true },
-      { header: 'Description, material, standard', weight: 4.2, wrap: true },
+      // Narrow columns hold one short word each ("No.", "LOOSE", "bevel 37.5°"): wide enough
+      // for it on A4 and Letter, so it wraps between words, never inside one.
+      { header: 'No.', weight: 0.45 },
+      { header: 'Size', weight: 1.0, font: 'body-bold', wrap: true },
+      { header: 'Description, material, standard', weight: 3.9, wrap: true },
       { header: 'Sch / class', weight: 1.1, wrap: true },
-      { header: 'Ends', weight: 0.9, wrap: true },
+      { header: 'Ends', weight: 1.05, wrap: true },
       { header: 'Qty', weight: 1.4, align: 'right', font: 'body-bold', wrap: true },
-      { header: 'Loose', weight: 0.6, align: 'center' },
+      { header: 'Loose', weight: 0.85, align: 'center' },
     ],
     rows,
     footnote:

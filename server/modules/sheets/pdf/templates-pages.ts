@@ -5,7 +5,7 @@ import type { SheetDocument } from './sheet-document';
 import { SHORT_CAUTION } from './sheet-cautions';
 import { INK, typeSizes } from './sheet-style';
 import type { TemplateFigure, TemplatePoint } from './template-figures';
-import { drawText, measureWrapped } from './text';
+import { drawText, measureWidth, measureWrapped, MIN_TEXT_PT } from './text';
 
 /** What the template pages drew: per page, its scale bars (for checking the print scale). */
 export interface TemplatePagesReport {
@@ -98,11 +98,14 @@ export function drawTemplatePages(
 
       let ty = usable.y;
       for (const tile of onPage) {
+        // One line above the tile says which it is and what laps onto its left and top edges
+        // (kept out of the figure, where notes would print over ordinates).
         if (total > 1)
-          drawText(doc, `Tile ${tile.name} of ${total}`, usable.x, ty, {
+          drawText(doc, tileCaption(tile, total), usable.x, ty, {
             font: 'cond-bold',
             size: sizes.small,
             color: INK.black,
+            width: usable.w,
           });
         const box: Rect = { x: usable.x, y: ty + labelH, w: mm(tile.w), h: mm(tile.h) };
         drawTile(doc, box, figure, tile.x, tile.y, units, sizes.small);
@@ -157,6 +160,14 @@ export function tileFigure(
   return tiles;
 }
 
+/** "Tile B2 of 8 · joins B1 on the left · lay A2 over the top edge, up to the dashed line". */
+function tileCaption(tile: Tile, total: number): string {
+  const parts = [`Tile ${tile.name} of ${total}`];
+  if (tile.left) parts.push(`joins ${tile.left} on the left`);
+  if (tile.above) parts.push(`lay ${tile.above} over the top edge, up to the dashed line`);
+  return parts.join(' · ');
+}
+
 function drawJoinMarks(doc: PDFKit.PDFDocument, box: Rect, tile: Tile, size: number): void {
   const ov = mm(OVERLAP_MM);
   doc.save().lineWidth(0.5).strokeColor(INK.muted).dash(4, { space: 3 });
@@ -186,16 +197,7 @@ function drawJoinMarks(doc: PDFKit.PDFDocument, box: Rect, tile: Tile, size: num
     doc.font('cond-semibold').fontSize(size);
     drawText(doc, t, box.x + box.w - doc.widthOfString(t) - 3, yy, style);
   };
-  if (tile.left) rightText(`joins ${tile.left} on the left`, box.y - size - 4);
   if (tile.right) rightText(`Lay ${tile.right} over this end, up to the dashed line`, box.y + box.h + 2);
-  if (tile.above)
-    drawText(
-      doc,
-      `Lay ${tile.above} over this edge, up to the dashed line`,
-      box.x + 3,
-      box.y + ov + 2,
-      style,
-    );
   doc.save().lineWidth(0.6).strokeColor(INK.rule).rect(box.x, box.y, box.w, box.h).stroke().restore();
 }
 
@@ -226,6 +228,11 @@ function drawTile(
     x: area.x + mm(figure.originMm.x + p.x - ox),
     y: area.y + mm(figure.originMm.y + p.y - oy),
   });
+  // Text is drawn only where it fits whole inside the tile: the tile is clipped, and a figure
+  // cut in half at a tile edge could be misread (the neighbouring tile, which overlaps this one,
+  // carries it). Ordinates slide along their station line to stay inside.
+  const fits = (x0: number, y0: number, w: number, h: number) =>
+    x0 >= area.x + 1 && y0 >= area.y + 1 && x0 + w <= area.x + area.w - 1 && y0 + h <= area.y + area.h - 1;
   doc.save();
   doc.rect(area.x, area.y, area.w, area.h).clip();
 
@@ -243,11 +250,14 @@ function drawTile(
     doc.lineWidth(0.8).strokeColor(INK.black).moveTo(a.x, a.y).lineTo(b.x, b.y).stroke();
     // Over a station row the label goes above the station numbers.
     const lift = figure.stations.length > 0 ? 2 * size + 5 : size + 2;
-    drawText(doc, guide.label, Math.min(a.x, b.x) + 4, Math.min(a.y, b.y) - lift, {
-      font: 'cond-semibold',
-      size,
-      color: INK.black,
-    });
+    const gx = Math.max(Math.min(a.x, b.x), area.x) + 4;
+    const gy = Math.min(a.y, b.y) - lift;
+    if (fits(gx, gy, measureWidth(doc, guide.label, { font: 'cond-semibold', size }), size * 1.2))
+      drawText(doc, guide.label, gx, gy, {
+        font: 'cond-semibold',
+        size,
+        color: INK.black,
+      });
   }
   if (figure.wrapEndMm !== null) {
     const a = P({ x: figure.wrapEndMm, y: -6 });
@@ -260,33 +270,39 @@ function drawTile(
       .lineTo(b.x, b.y)
       .stroke()
       .undash();
-    drawText(doc, 'END OF WRAP: tape tab under station 0', a.x + 3, a.y + 2, {
-      font: 'cond-semibold',
-      size,
-      color: INK.muted,
-      width: mm(18),
-      wrap: true,
-    });
+    const endStyle = { font: 'cond-semibold' as const, size, color: INK.muted, width: mm(18), wrap: true };
+    const endText = 'END OF WRAP: tape tab under station 0';
+    if (fits(a.x + 3, a.y + 2, mm(18), measureWrapped(doc, endText, mm(18), endStyle)))
+      drawText(doc, endText, a.x + 3, a.y + 2, endStyle);
   }
   // Station lines and ordinates.
   for (const s of figure.stations) {
     const a = P({ x: s.x, y: 0 });
     const b = P({ x: s.x, y: s.y });
     doc.lineWidth(0.35).strokeColor(INK.muted).moveTo(a.x, a.y).lineTo(b.x, b.y).stroke();
-    drawText(doc, s.label, a.x - 10, a.y - size - 1.5, {
-      font: 'cond-bold',
-      size,
-      width: 20,
-      align: 'center',
-    });
-    doc.save();
-    doc.rotate(90, { origin: [b.x, b.y] });
-    drawText(doc, formatLength(s.ordinateMm, units), b.x + 3, b.y - size - 1, {
-      font: 'cond-semibold',
-      size: size * 0.95,
-      color: INK.dim,
-    });
-    doc.restore();
+    if (fits(a.x - 10, a.y - size - 1.5, 20, size * 1.2))
+      drawText(doc, s.label, a.x - 10, a.y - size - 1.5, {
+        font: 'cond-bold',
+        size,
+        width: 20,
+        align: 'center',
+      });
+    // The ordinate reads down the station line from the cut (turned 90°), right of the line.
+    const ordinate = formatLength(s.ordinateMm, units);
+    const ordW = measureWidth(doc, ordinate, { font: 'cond-semibold', size: size * 0.95 });
+    const ordH = Math.max(size * 0.95, MIN_TEXT_PT) * 1.2;
+    let start = b.y + 3;
+    if (start + ordW > area.y + area.h - 2) start = b.y - 3 - ordW; // past the tile's lower edge: read up to the cut
+    if (fits(b.x + 1, start, ordH, ordW)) {
+      doc.save();
+      doc.rotate(90, { origin: [b.x, start - 3] });
+      drawText(doc, ordinate, b.x + 3, start - 3 - size - 1, {
+        font: 'cond-semibold',
+        size: size * 0.95,
+        color: INK.dim,
+      });
+      doc.restore();
+    }
   }
   // The cut line.
   if (figure.outline.length > 1) {
@@ -298,8 +314,19 @@ function drawTile(
     }
     if (figure.closed) doc.closePath();
     doc.stroke();
-    const label = P(figure.outline[Math.floor(figure.outline.length / 4)]!);
-    drawText(doc, 'CUT LINE', label.x + 4, label.y + 3, { font: 'cond-bold', size, color: INK.black });
+    // Above the cut, between two stations: the ordinates hang below it.
+    const labelW = measureWidth(doc, 'CUT LINE', { font: 'cond-bold', size });
+    const gaps = figure.stations.map((st) => P({ x: st.x, y: 0 }).x).sort((m, n) => m - n);
+    for (const frac of [0.25, 0.4, 0.6, 0.75, 0.1, 0.9]) {
+      const label = P(figure.outline[Math.floor((figure.outline.length - 1) * frac)]!);
+      const lx = label.x + 4;
+      const ly = label.y - size * 1.2 - 3;
+      const clearOfStations = gaps.every((gx) => gx < lx - 2 || gx > lx + labelW + size + 2);
+      if (clearOfStations && fits(lx, ly, labelW, size * 1.2)) {
+        drawText(doc, 'CUT LINE', lx, ly, { font: 'cond-bold', size, color: INK.black });
+        break;
+      }
+    }
   }
   doc.restore();
 }

@@ -3,7 +3,7 @@ import { mm } from './page-setup';
 import { drawQrCode } from './qr-code';
 import type { RevisionHistoryEntry, RevisionState } from './sheet-header';
 import { INK, typeSizes } from './sheet-style';
-import { drawText } from './text';
+import { drawText, measureWidth, measureWrapped } from './text';
 
 /** What the title block strip prints; built by each sheet kind (spool sheet, saw list). */
 export interface TitleBlockFields {
@@ -176,24 +176,52 @@ export function drawTitleBlock(
       let yy = y + pad + t.small + 8;
       const hx = x + letterW;
       const hw = w - letterW;
-      const cols = [0, 0.12, 0.36, 0.62].map((f) => hx + f * hw);
-      label('Rev', cols[0]!, yy, 0.12 * hw);
-      label('State', cols[1]!, yy, 0.24 * hw);
-      label('Date', cols[2]!, yy, 0.26 * hw);
-      label('Note', cols[3]!, yy, 0.38 * hw);
+      // Columns as wide as their longest value (state words and dates are never shortened);
+      // the note takes the rest and wraps.
+      const tinyBold = { size: t.tiny, font: 'body-bold' as const };
+      const fitW = (values: string[], head: string): number =>
+        Math.max(
+          measureWidth(doc, head, { size: t.tiny, font: 'cond-semibold' }),
+          ...values.map((v) => measureWidth(doc, v, tinyBold)),
+        ) + 3;
+      const colW = [
+        fitW(
+          fields.history.map((e) => e.letter),
+          'Rev',
+        ),
+        fitW(
+          fields.history.map((e) => e.state),
+          'State',
+        ),
+        fitW(
+          fields.history.map((e) => formatSheetDate(e.issuedAt)),
+          'Date',
+        ),
+      ];
+      const noteW = Math.max(hw - colW[0]! - colW[1]! - colW[2]!, hw * 0.25);
+      const cols = [hx, hx + colW[0]!, hx + colW[0]! + colW[1]!, hx + colW[0]! + colW[1]! + colW[2]!];
+      label('Rev', cols[0]!, yy, colW[0]!);
+      label('State', cols[1]!, yy, colW[1]!);
+      label('Date', cols[2]!, yy, colW[2]!);
+      label('Note', cols[3]!, yy, noteW);
       yy += rowH;
-      const maxRows = Math.max(0, Math.floor((y + h - pad - yy) / rowH));
-      const rows = fields.history.slice(0, maxRows);
-      for (const entry of rows) {
+      const bottom = y + h - pad;
+      const rows: RevisionHistoryEntry[] = [];
+      for (const entry of fields.history) {
         const style = {
           size: t.tiny,
           font: entry.letter === fields.revisionLetter ? ('body-bold' as const) : ('body' as const),
         };
-        drawText(doc, entry.letter, cols[0]!, yy, { ...style, width: 0.12 * hw });
-        drawText(doc, entry.state, cols[1]!, yy, { ...style, width: 0.24 * hw - 2 });
-        drawText(doc, formatSheetDate(entry.issuedAt), cols[2]!, yy, { ...style, width: 0.26 * hw - 2 });
-        drawText(doc, entry.note || '—', cols[3]!, yy, { ...style, width: 0.38 * hw });
-        yy += rowH;
+        const noteH = Math.max(rowH, measureWrapped(doc, entry.note || '—', noteW, style) + 2.5);
+        // Leave room for the "+N older" line when entries remain.
+        const reserve = fields.history.length > rows.length + 1 ? rowH : 0;
+        if (yy + noteH > bottom - reserve) break;
+        rows.push(entry);
+        drawText(doc, entry.letter, cols[0]!, yy, { ...style, width: colW[0]! });
+        drawText(doc, entry.state, cols[1]!, yy, { ...style, width: colW[1]! });
+        drawText(doc, formatSheetDate(entry.issuedAt), cols[2]!, yy, { ...style, width: colW[2]! });
+        drawText(doc, entry.note || '—', cols[3]!, yy, { ...style, width: noteW, wrap: true });
+        yy += noteH;
       }
       if (fields.history.length > rows.length) {
         drawText(doc, `+${fields.history.length - rows.length} older`, cols[3]!, y + h - pad - t.tiny, {
