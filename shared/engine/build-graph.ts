@@ -3,6 +3,7 @@
  * leave it, the root, and a depth-first order. Reports tree problems as issues.
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
+import { nodeRef, runRef } from './component-refs';
 import type { SpoolRun } from '../schemas/spool-design-run.schema';
 import type { SpoolDesign } from '../schemas/spool-design.schema';
 import { addError, type IssueSink } from './issues';
@@ -45,13 +46,13 @@ export function buildGraph(design: SpoolDesign, issues: IssueSink): SpoolGraph {
       addError(
         issues,
         'unknown-node',
-        `Run ${run.id} refers to node "${bad}", which is not in the design`,
+        `${runRef(run.id)} refers to node "${bad}", which is not in the design`,
         run.id,
       );
       continue;
     }
     if (run.from === run.to) {
-      addError(issues, 'run-to-self', `Run ${run.id} starts and ends at node ${run.from}`, run.id);
+      addError(issues, 'run-to-self', `${runRef(run.id)} starts and ends at ${nodeRef(run.from)}`, run.id);
       continue;
     }
     const prior = parentRun.get(run.to);
@@ -59,7 +60,7 @@ export function buildGraph(design: SpoolDesign, issues: IssueSink): SpoolGraph {
       addError(
         issues,
         'cycle',
-        `Node ${run.to} is fed by two runs (${prior.id} and ${run.id}); runs must point away from the root, and a spool cannot close a loop`,
+        `${nodeRef(run.to)} is fed by two runs (${runRef(prior.id)} and ${runRef(run.id)}); runs must point away from the root, and a spool cannot close a loop`,
         run.id,
       );
       continue;
@@ -118,7 +119,7 @@ export function buildGraph(design: SpoolDesign, issues: IssueSink): SpoolGraph {
       addError(
         issues,
         'disconnected',
-        `Nodes not reached from root ${rootId}: ${unreached.join(', ')} (left out of the results)`,
+        `Components not reached from the root ${nodeRef(rootId)}: ${unreached.map(nodeRef).join(', ')} (left out of the results)`,
         unreached[0],
       );
     }

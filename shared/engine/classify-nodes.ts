@@ -4,6 +4,7 @@
  * Angles no component makes, and wrong numbers of runs, are errors here.
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
+import { nodeRef } from './component-refs';
 import type { SpoolRun } from '../schemas/spool-design-run.schema';
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import type { SpoolGraph } from './build-graph';
@@ -72,18 +73,6 @@ const EXPECTED: Record<SpoolNode['kind'], [number, number]> = {
   'socket-fitting': [2, 3],
 };
 
-const WHAT: Record<SpoolNode['kind'], string> = {
-  end: 'An open end',
-  elbow: 'An elbow',
-  return: 'A return',
-  tee: 'A tee',
-  'set-on-branch': 'A set-on branch (header in, header out, branch)',
-  'half-coupling': 'A half coupling (header in and out, optional branch)',
-  'branch-outlet': 'A branch outlet (header in and out, optional branch)',
-  reducer: 'A reducer',
-  'socket-fitting': 'A socket-weld fitting',
-};
-
 /** Classifies one node from its connections, reporting geometry errors. */
 export function classifyNode(
   node: SpoolNode,
@@ -97,7 +86,7 @@ export function classifyNode(
     addError(
       issues,
       'wrong-connection-count',
-      `${WHAT[node.kind]} at ${node.id} needs ${want} run(s); it has ${conns.length}`,
+      `${nodeRef(node.id)} needs ${want} run(s); it has ${conns.length}`,
       node.id,
     );
     return { kind: 'invalid' };
@@ -113,7 +102,7 @@ export function classifyNode(
         addError(
           issues,
           'angle-not-made',
-          `Return ${node.id}: its legs must be parallel and on the same side (they are ${fmt(between)}° apart)`,
+          `${nodeRef(node.id)}: its legs must be parallel and on the same side (they are ${fmt(between)}° apart)`,
           node.id,
         );
         return { kind: 'invalid' };
@@ -125,7 +114,7 @@ export function classifyNode(
         addError(
           issues,
           'angle-not-made',
-          `${WHAT[node.kind]} at ${node.id} must sit on a straight line; its runs turn ${fmt(bend)}°`,
+          `${nodeRef(node.id)} must sit on a straight line; its runs turn ${fmt(bend)}°`,
           node.id,
         );
         return { kind: 'invalid' };
@@ -155,7 +144,7 @@ export function classifyNode(
           addError(
             issues,
             'angle-not-made',
-            `Tee ${node.id}: the branch meets the run at ${fmt(branchAngleDeg)}°; tees are made at 90° only`,
+            `${nodeRef(node.id)}: the branch meets the run at ${fmt(branchAngleDeg)}°; tees are made at 90° only`,
             node.id,
           );
           return { kind: 'invalid' };
@@ -168,7 +157,7 @@ export function classifyNode(
   addError(
     issues,
     'angle-not-made',
-    `${WHAT[node.kind]} at ${node.id}: no two of its runs are in line, so no header or run passes through`,
+    `${nodeRef(node.id)}: no two of its runs are in line, so no header or run passes through`,
     node.id,
   );
   return { kind: 'invalid' };

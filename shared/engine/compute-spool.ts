@@ -10,6 +10,7 @@ import { buildBillOfMaterials } from './bill-of-materials';
 import { buildGraph } from './build-graph';
 import { classifyNode, connectionsOf, runDirections, type NodeRole } from './classify-nodes';
 import { componentResults, openEnds } from './component-results';
+import { resolveResultRefs } from './component-refs';
 import { buildCutList } from './cut-list';
 import { flangeOrientations } from './flange-orientation';
 import { flangePairChecks } from './flange-pairs';
@@ -187,7 +188,7 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
     addError(issues, 'no-root', 'No node could be placed');
   }
 
-  return {
+  const result: SpoolResult = {
     format: 'tackline.spool-result',
     version: 1,
     ok: !hasErrors(issues),
@@ -208,6 +209,9 @@ function computeValid(design: SpoolDesign, options: ComputeOptions): SpoolResult
     weights,
     issues,
   };
+  // Last step: marks exist now, so node and run tokens become shop words.
+  resolveResultRefs(result, { design, sizes });
+  return result;
 }
 
 function emptyResult(spec: ResolvedSpec, issues: Issue[]): SpoolResult {

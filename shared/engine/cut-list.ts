@@ -5,6 +5,7 @@
  * at or below; compound bevel above 22 mm).
  */
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
+import { nodeRef, runRef } from './component-refs';
 import { cachedPipeOdMm } from './standards-cache';
 import type { PipePiece } from './compute-result';
 import { endPrepFor } from './end-prep';
@@ -157,7 +158,7 @@ function checkBranchClearance(
       addError(
         issues,
         'overlapping-fittings',
-        `Branch ${through} sits ${round(p.pipeLengthMm)} mm from the end of the header pipe on run ${id}; it needs at least ${round(branchOd / 2)} mm (the branch's outside radius)`,
+        `${nodeRef(through)} sits ${round(p.pipeLengthMm)} mm from the end of the header pipe on ${runRef(id)}; it needs at least ${round(branchOd / 2)} mm (the branch's outside radius)`,
         through,
       );
     }
@@ -177,7 +178,7 @@ function checkLength(piece: PipePiece, pipe: RunPipe, issues: IssueSink): void {
     addError(
       issues,
       'piece-too-short',
-      `Piece ${piece.mark} (run ${piece.runIds.join(', ')}) would be ${round(cut)} mm, shorter than the ${min} mm minimum`,
+      `Piece ${piece.mark} would be ${round(cut)} mm, shorter than the ${min} mm minimum`,
       runId,
     );
   } else if (piece.odMm !== null && cut < piece.odMm) {

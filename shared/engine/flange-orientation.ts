@@ -5,6 +5,7 @@
  * same angle from the plane of the nearest bend, which is what a fitter sets on the bench.
  */
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
+import { nodeRef } from './component-refs';
 import type { FlangeOrientation, RotationCorrection } from './compute-result';
 import type { SpoolGraph } from './build-graph';
 import type { Connection, NodeRole } from './classify-nodes';
@@ -77,7 +78,7 @@ export function flangeOrientations(
     if (mustTwoHole && pitch !== null && !straddles) {
       correction = correctionFor(nodeId, -offset, a.detail.boltCircleMm);
       const mm = correction.atBoltCircleMm ?? 0;
-      const msg = `Flange ${nodeId} must be two-holed but its first hole is at ${r(rotationDeg)}° from the ${reference === 'plant-vertical' ? 'vertical' : 'north'}: turn it ${correctionTurnWords(correction)} looking at its face (${r(mm)} mm at the bolt circle)`;
+      const msg = `${nodeRef(nodeId)} must be two-holed but its first hole is at ${r(rotationDeg)}° from the ${reference === 'plant-vertical' ? 'vertical' : 'north'}: turn it ${correctionTurnWords(correction)} looking at its face (${r(mm)} mm at the bolt circle)`;
       if (mm > toleranceMm) addError(issues, 'flange-not-two-holed', msg, nodeId);
       else addWarning(issues, 'flange-not-two-holed', msg, nodeId);
     }

@@ -7,6 +7,7 @@
  * correction to apply to b.
  */
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
+import { nodeRef } from './component-refs';
 import type { FlangeOrientation, FlangePairCheck } from './compute-result';
 import type { SpoolGraph } from './build-graph';
 import { clockwiseAngleDeg } from './clock-angles';
@@ -118,7 +119,7 @@ export function flangePairChecks(
         addWarning(
           issues,
           'flange-rotation-mismatch',
-          `Flanges ${A.nodeId} and ${B.nodeId}: matching ${B.nodeId} to ${A.nodeId} along the spool leaves its holes ${r(Math.abs(errorDeg))}° (${r(errorMm!)} mm at the bolt circle) off the design; to line them up, turn ${B.nodeId} ${correctionTurnWords(correction!)} looking at its face from its designed position`,
+          `${nodeRef(A.nodeId)} and ${nodeRef(B.nodeId)}: matching ${nodeRef(B.nodeId)} to ${nodeRef(A.nodeId)} along the spool leaves its holes ${r(Math.abs(errorDeg))}° (${r(errorMm!)} mm at the bolt circle) off the design; to line them up, turn ${nodeRef(B.nodeId)} ${correctionTurnWords(correction!)} looking at its face from its designed position`,
           B.nodeId,
         );
       }

@@ -5,6 +5,7 @@
  * end its plant position.
  */
 import type { SpoolRun } from '../schemas/spool-design-run.schema';
+import { runRef } from './component-refs';
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import type { SpoolGraph } from './build-graph';
 import { addError, addWarning, type IssueSink } from './issues';
@@ -150,7 +151,7 @@ export function runLengths(
         addError(
           issues,
           'overlapping-fittings',
-          `Run ${run.id} has no pipe, but a ${cannotCouple.joint === 'set-on' ? 'branch connection' : cannotCouple.joint} joint needs pipe`,
+          `${runRef(run.id)} has no pipe, but a ${cannotCouple.joint === 'set-on' ? 'branch connection' : cannotCouple.joint} joint needs pipe`,
           run.id,
         );
         return mk((tF ?? 0) + (tT ?? 0), 0, 0, 0, null, false);
@@ -193,14 +194,14 @@ export function runLengths(
     addError(
       issues,
       'overlapping-fittings',
-      `Run ${run.id}: ${round(stated)} mm is ${round(-coupled)} mm less than the fittings take up (take-offs ${round(tF)} + ${round(tT)} mm${single ? ` + ${round(single)} mm root gap` : ''}); the fittings would overlap`,
+      `${runRef(run.id)}: ${round(stated)} mm is ${round(-coupled)} mm less than the fittings take up (take-offs ${round(tF)} + ${round(tT)} mm${single ? ` + ${round(single)} mm root gap` : ''}); the fittings would overlap`,
       run.id,
     );
   } else {
     addError(
       issues,
       'piece-too-short',
-      `Run ${run.id}: ${round(coupled + single)} mm between the fitting ends is more than one root gap but too short for a pipe piece with two welds`,
+      `${runRef(run.id)}: ${round(coupled + single)} mm between the fitting ends is more than one root gap but too short for a pipe piece with two welds`,
       run.id,
     );
   }
@@ -259,7 +260,7 @@ function checkLengthKind(run: SpoolRun, graph: SpoolGraph, issues: IssueSink): v
     addWarning(
       issues,
       'length-kind-mismatch',
-      `Run ${run.id} is dimensioned centre-to-face but ${faces === 0 ? 'neither end is' : 'both ends are'} a flange face`,
+      `${runRef(run.id)} is dimensioned centre-to-face but ${faces === 0 ? 'neither end is' : 'both ends are'} a flange face`,
       run.id,
     );
   }
@@ -267,7 +268,7 @@ function checkLengthKind(run: SpoolRun, graph: SpoolGraph, issues: IssueSink): v
     addWarning(
       issues,
       'length-kind-mismatch',
-      `Run ${run.id} is dimensioned face-to-face but only ${faces} of its ends is a flange face`,
+      `${runRef(run.id)} is dimensioned face-to-face but only ${faces} of its ends is a flange face`,
       run.id,
     );
   }

@@ -5,6 +5,7 @@
  * joint are errors.
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
+import { nodeRef, runRef } from './component-refs';
 import { compareNps, type Nps } from '../standards/nps';
 import type { SpoolGraph } from './build-graph';
 import type { Connection, NodeRole } from './classify-nodes';
@@ -39,7 +40,7 @@ export function resolveSizes(
           addError(
             issues,
             'size-mismatch',
-            `Run ${kid.id} is NPS ${stated} but ${describe(node)} ${node.id} gives it NPS ${expected}`,
+            `${runRef(kid.id)} is NPS ${stated} but ${nodeRef(node.id)} gives it NPS ${expected}`,
             kid.id,
           );
         }
@@ -49,17 +50,13 @@ export function resolveSizes(
         addError(
           issues,
           'size-unknown',
-          `Run ${kid.id} has no size: state its NPS (or the design's main size)`,
+          `${runRef(kid.id)} has no size: state its NPS (or the design's main size)`,
           kid.id,
         );
       sizes.set(kid.id, nps);
     }
   }
   return sizes;
-}
-
-function describe(node: SpoolNode): string {
-  return node.kind.replace(/-/g, ' ');
 }
 
 /**
@@ -93,7 +90,7 @@ function expectedSizes(
           addError(
             issues,
             'size-mismatch',
-            `Tee ${node.id}: the run feeding its branch is NPS ${parentNps}, the tee's branch is NPS ${branchNps}`,
+            `${nodeRef(node.id)}: the run feeding its branch is NPS ${parentNps}, the tee's branch is NPS ${branchNps}`,
             node.id,
           );
         }
@@ -110,7 +107,7 @@ function expectedSizes(
           addError(
             issues,
             'size-mismatch',
-            `${node.id}: the branch run is NPS ${parentNps}, the connection is NPS ${node.branchNps}`,
+            `${nodeRef(node.id)}: the branch run is NPS ${parentNps}, the connection is NPS ${node.branchNps}`,
             node.id,
           );
         }

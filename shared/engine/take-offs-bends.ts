@@ -3,6 +3,7 @@
  * cut from a 90° with take-off R·tan(θ/2)), mitred bends, and 180° returns.
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
+import { nodeRef } from './component-refs';
 import { npsInches } from '../standards/nps';
 import type { Connection } from './classify-nodes';
 import { cachedElbowDimensions, cachedScheduleLabel } from './standards-cache';
@@ -81,14 +82,14 @@ export function analyseElbow(
   );
   if (angleDeg < tol)
     return fail(
-      `Elbow ${node.id}: its runs are in a straight line (${round(angleDeg)}° of bend); remove the elbow or turn a run`,
+      `${nodeRef(node.id)}: its runs are in a straight line (${round(angleDeg)}° of bend); remove the elbow or turn a run`,
     );
   if (angleDeg > MAX_BEND_DEG + pullTol) {
     return fail(
-      `Elbow ${node.id}: a ${round(angleDeg)}° bend is more than one elbow makes (90° at most); use two elbows or a return`,
+      `${nodeRef(node.id)}: a ${round(angleDeg)}° bend is more than one elbow makes (90° at most); use two elbows or a return`,
     );
   }
-  if (!nps) return fail(`Elbow ${node.id}: size unknown`);
+  if (!nps) return fail(`${nodeRef(node.id)}: size unknown`);
   if (angleDeg < spec.minBendAngleDeg) {
     // Common practice, no source: a bend this small is taken up at a butt weld.
     addWarning(
@@ -144,7 +145,7 @@ export function analyseElbow(
       addError(
         ctx.issues,
         'overlapping-fittings',
-        `Mitred bend ${node.id}: ${welds} welds on radius ${round(R)} mm leave no room for the segments`,
+        `${nodeRef(node.id)}: ${welds} welds on radius ${round(R)} mm leave no room for the segments`,
         node.id,
       );
     }
@@ -171,7 +172,7 @@ export function analyseElbow(
                 type: 'butt',
                 nps,
                 count: welds - 2 >= 0 ? welds - 2 : 0,
-                joins: `mitre segments of ${node.id}`,
+                joins: `mitre segments of ${nodeRef(node.id)}`,
               },
             ]
           : [],
@@ -222,7 +223,7 @@ export function analyseElbow(
     addWarning(
       ctx.issues,
       'cut-elbow',
-      `Elbow ${node.id} is cut from a 90° ${rr} elbow to ${round(angleDeg)}°: mark and trim it before fit-up`,
+      `${nodeRef(node.id)} is cut from a 90° ${rr} elbow to ${round(angleDeg)}°: mark and trim it before fit-up`,
       node.id,
     );
   }
@@ -267,7 +268,7 @@ export function analyseReturn(
     addError(
       ctx.issues,
       'direction-mismatch',
-      `Return ${node.id}: its offset direction must not be along the legs`,
+      `${nodeRef(node.id)}: its offset direction must not be along the legs`,
       node.id,
     );
   }

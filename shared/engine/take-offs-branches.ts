@@ -4,6 +4,7 @@
  * outlets (height from the maker's catalogue). The header gets no take-off and no weld.
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
+import { nodeRef } from './component-refs';
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
 import { cachedPipeOdMm } from './standards-cache';
 import { compareNps, type Nps } from '../standards/nps';
@@ -50,14 +51,14 @@ export function analyseSetOn(
     addError(
       ctx.issues,
       'size-mismatch',
-      `Set-on branch ${node.id}: the branch (NPS ${br.nps}) is larger than its header (NPS ${header.nps})`,
+      `${nodeRef(node.id)}: the branch (NPS ${br.nps}) is larger than its header (NPS ${header.nps})`,
       node.id,
     );
   } else if (angleDeg < MIN_SET_ON_ANGLE_DEG) {
     addError(
       ctx.issues,
       'angle-not-made',
-      `Set-on branch ${node.id} meets its header at ${round(angleDeg)}°; below ${MIN_SET_ON_ANGLE_DEG}° the saddle cannot be fitted`,
+      `${nodeRef(node.id)} meets its header at ${round(angleDeg)}°; below ${MIN_SET_ON_ANGLE_DEG}° the saddle cannot be fitted`,
       node.id,
     );
   } else if (headerOd && branchOd) {
@@ -105,12 +106,11 @@ export function analyseSmallBore(
   const tol = ctx.angleToleranceDeg;
   const headerOd = header.dims?.odMm ?? odOf(header.nps);
   const R = headerOd !== null ? headerOd / 2 : null;
-  const what = node.kind === 'half-coupling' ? 'Half coupling' : 'Branch outlet';
   if (header.nps && compareNps(node.branchNps, header.nps) >= 0) {
     addError(
       ctx.issues,
       'size-mismatch',
-      `${what} ${node.id}: NPS ${node.branchNps} on an NPS ${header.nps} header; small-bore connections must be smaller than the header`,
+      `${nodeRef(node.id)}: NPS ${node.branchNps} on an NPS ${header.nps} header; small-bore connections must be smaller than the header`,
       node.id,
     );
   }
@@ -122,7 +122,7 @@ export function analyseSmallBore(
       addError(
         ctx.issues,
         'angle-not-made',
-        `${what} ${node.id}: its branch meets the header at ${round(angleDeg)}°; it is made square (90°) only`,
+        `${nodeRef(node.id)}: its branch meets the header at ${round(angleDeg)}°; it is made square (90°) only`,
         node.id,
       );
     }
@@ -134,7 +134,7 @@ export function analyseSmallBore(
         addError(
           ctx.issues,
           'direction-mismatch',
-          `${what} ${node.id}: stated orientation ${round(node.orientationDeg)}° but its branch run points at ${round(orientationDeg)}°`,
+          `${nodeRef(node.id)}: stated orientation ${round(node.orientationDeg)}° but its branch run points at ${round(orientationDeg)}°`,
           node.id,
         );
       }
@@ -146,7 +146,7 @@ export function analyseSmallBore(
     addError(
       ctx.issues,
       'orientation-missing',
-      `${what} ${node.id} has no branch run and no orientationDeg: state where around the header it sits`,
+      `${nodeRef(node.id)} has no branch run and no orientationDeg: state where around the header it sits`,
       node.id,
     );
   }
@@ -165,7 +165,7 @@ export function analyseSmallBore(
       addWarning(
         ctx.issues,
         'weight-incomplete',
-        `${what} ${node.id}: ${look.missing}; drawn without its length`,
+        `${nodeRef(node.id)}: ${look.missing}; drawn without its length`,
         node.id,
       );
     const f = look.ok ? (look.value.socketBottomToFaceMm ?? null) : null;
@@ -238,7 +238,7 @@ export function analyseSmallBore(
     },
     source,
     internalWelds: [
-      { type: 'branch', nps: node.branchNps, count: 1, joins: `${what.toLowerCase()} ${node.id} to header` },
+      { type: 'branch', nps: node.branchNps, count: 1, joins: `${nodeRef(node.id)} to header` },
     ],
     detail: {
       type: 'branch',

@@ -3,6 +3,7 @@
  * large end's axis) and socket-weld couplings (ASME B16.11).
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
+import { nodeRef } from './component-refs';
 import { reducerDimensions } from '../standards/butt-weld-fittings';
 import { compareNps } from '../standards/nps';
 import type { Connection } from './classify-nodes';
@@ -51,7 +52,7 @@ export function analyseReducer(
   if (!pa.nps || !pb.nps) return fallback;
   const cmp = compareNps(pa.nps, pb.nps);
   if (cmp === 0) {
-    addError(ctx.issues, 'size-mismatch', `Reducer ${node.id} has NPS ${pa.nps} on both ends`, node.id);
+    addError(ctx.issues, 'size-mismatch', `${nodeRef(node.id)} has NPS ${pa.nps} on both ends`, node.id);
     return fallback;
   }
   const [large, small] = cmp > 0 ? [a, b] : [b, a];
@@ -83,7 +84,7 @@ export function analyseReducer(
       addError(
         ctx.issues,
         'direction-mismatch',
-        `Eccentric reducer ${node.id}: its flat side cannot be "${flat}" on a run along that direction`,
+        `${nodeRef(node.id)}: its flat side cannot be "${flat}" on a run along that direction`,
         node.id,
       );
     } else if (odL.ok && odS.ok) {

@@ -4,6 +4,7 @@
  * the cut length between two sockets is C–C − (A₁ + g) − (A₂ + g).
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
+import { nodeRef, runRef } from './component-refs';
 import { socketWeldDimensions, type SocketFittingKind } from '../standards/socket-weld-fittings';
 import type { Connection, NodeRole } from './classify-nodes';
 import { addError } from './issues';
@@ -50,7 +51,7 @@ export function analyseSocketFitting(ctx: NodeContext, node: SocketNode, role: N
       addError(
         ctx.issues,
         'angle-not-made',
-        `Socket-weld fitting ${node.id}: its runs turn ${Math.round(role.angleDeg * 100) / 100}°; socket-weld elbows are 90° or 45° only`,
+        `${nodeRef(node.id)}: its runs turn ${Math.round(role.angleDeg * 100) / 100}°; socket-weld elbows are 90° or 45° only`,
         node.id,
       );
     }
@@ -63,7 +64,7 @@ export function analyseSocketFitting(ctx: NodeContext, node: SocketNode, role: N
       addError(
         ctx.issues,
         'size-mismatch',
-        `Socket-weld fitting ${node.id}: run ${c.run.id} is NPS ${p.nps}, the fitting is NPS ${nps}`,
+        `${nodeRef(node.id)}: ${runRef(c.run.id)} is NPS ${p.nps}, the fitting is NPS ${nps}`,
         node.id,
       );
     }

@@ -3,6 +3,7 @@
  * and socket-weld tees (ASME B16.11: centre to socket bottom plus the expansion gap).
  */
 import type { SpoolNode } from '../schemas/spool-design-node.schema';
+import { nodeRef } from './component-refs';
 import { teeDimensions } from '../standards/butt-weld-fittings';
 import type { Connection } from './classify-nodes';
 import { cachedScheduleLabel } from './standards-cache';
@@ -31,7 +32,7 @@ export function analyseTee(
     addError(
       ctx.issues,
       'size-mismatch',
-      `Tee ${node.id}: its run ends are NPS ${pa.nps} and NPS ${pb.nps}; a tee's run is one size`,
+      `${nodeRef(node.id)}: its run ends are NPS ${pa.nps} and NPS ${pb.nps}; a tee's run is one size`,
       node.id,
     );
   }

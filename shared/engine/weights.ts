@@ -4,6 +4,7 @@
  * no bolts, gaskets, weld metal or paint.
  */
 import type { Vec3 } from '../schemas/spool-design-primitives.schema';
+import { nodeRef } from './component-refs';
 import type { PipePiece, WeightItem, WeightResult } from './compute-result';
 import type { SpoolGraph } from './build-graph';
 import {
@@ -248,7 +249,7 @@ export function computeWeights(
       continue;
     const m = componentMass(a, wp, pipes);
     if (!m) {
-      notIncluded.push(`${a.description} (${nodeId})`);
+      notIncluded.push(`${a.description} (${nodeRef(nodeId)})`);
       continue;
     }
     items.push({

@@ -4,6 +4,7 @@
  * (common practice for estimating and progress).
  */
 import { npsInches } from '../standards/nps';
+import { nodeRef } from './component-refs';
 import type { WeldResult, WeldType } from './compute-result';
 import type { SpoolGraph } from './build-graph';
 import type { NodeAnalysis, NodeEnd } from './node-analysis';
@@ -36,8 +37,8 @@ export function buildWeldList(
   };
   const name = (nodeId: string) => {
     const n = graph.nodes.get(nodeId);
-    if (!n) return nodeId;
-    return `${spaced(n.kind === 'end' ? n.end.type : n.kind)} ${nodeId}`;
+    if (!n) return 'a node';
+    return nodeRef(nodeId);
   };
   const internals = (nodeId: string) => {
     const a = analyses.get(nodeId);
@@ -146,13 +147,4 @@ export function buildWeldList(
   }
   const diameterInches = Math.round(welds.reduce((s, w) => s + w.diameterInches, 0) * 1000) / 1000;
   return { welds, diameterInches };
-}
-
-const SPACED = new Map<string, string>();
-
-/** "weld neck flange" from "weld-neck-flange", memoised (a handful of kinds, many welds). */
-function spaced(kind: string): string {
-  let hit = SPACED.get(kind);
-  if (hit === undefined) SPACED.set(kind, (hit = kind.replace(/-/g, ' ')));
-  return hit;
 }
