@@ -2,6 +2,7 @@ import { useEffect, useEffectEvent, useRef } from 'react';
 import { useThree } from '@react-three/fiber';
 import { Vector3 } from 'three';
 import type { ViewPrefs, ViewPreset } from '../model/view-prefs';
+import { boundsKey, CameraFitPolicy, framingDistance } from './camera-fit';
 import type { SceneBounds } from './scene-bounds';
 
 /** Plant up, the axis keyboard orbits turn about. */
@@ -43,8 +44,7 @@ export function CameraRig({
   const get = useThree((s) => s.get);
   const controls = useThree((s) => s.controls) as unknown as Controls | null;
   const framedOnce = useRef(false);
-  /** The user moved the camera since the last fit. */
-  const moved = useRef(false);
+  const policy = useRef(new CameraFitPolicy());
 
   // Reads the latest bounds without making them a reason to re-frame.
   const frame = useEffectEvent(() => {
@@ -54,10 +54,7 @@ export function CameraRig({
     const b = bounds;
     const vfov = 'fov' in camera ? ((camera as { fov: number }).fov * Math.PI) / 180 : Math.PI / 4;
     const aspect = 'aspect' in camera ? (camera as { aspect: number }).aspect : 1;
-    // The narrower of the two angles decides (a tall, narrow canvas on a phone).
-    const fov = Math.min(vfov, 2 * Math.atan(Math.tan(vfov / 2) * aspect));
-    // A bounding sphere frames loosely; 0.85 of it fills the view without cropping a spool.
-    const distance = (b.radius / Math.sin(fov / 2)) * 0.85;
+    const distance = framingDistance(b, vfov, aspect);
     const dir = new Vector3(...PRESET_DIRECTIONS[preset]).normalize();
     const centre = new Vector3(...b.centre);
     camera.position.copy(centre.clone().add(dir.multiplyScalar(distance)));
@@ -67,7 +64,7 @@ export function CameraRig({
     controls.target.copy(centre);
     controls.update();
     if (hasModel) framedOnce.current = true;
-    moved.current = false;
+    policy.current.fitted(boundsKey(b));
     invalidate();
   });
 
@@ -78,24 +75,22 @@ export function CameraRig({
   useEffect(() => {
     const c = controls as unknown as { addEventListener?: (t: string, f: () => void) => void; removeEventListener?: (t: string, f: () => void) => void } | null;
     if (!c?.addEventListener) return;
-    const onStart = () => {
-      moved.current = true;
-    };
+    const onStart = () => policy.current.userMoved();
     c.addEventListener('start', onStart);
     return () => c.removeEventListener?.('start', onStart);
   }, [controls]);
 
   // The model grew or shrank: fit it again, unless the user has a view of their own.
-  const boundsKey = `${bounds.centre.map((v) => v.toFixed(3)).join(',')}|${bounds.radius.toFixed(3)}`;
+  const key = boundsKey(bounds);
   useEffect(() => {
-    if (!moved.current) frame();
-  }, [boundsKey]);
+    if (policy.current.shouldRefit(key)) frame();
+  }, [key]);
 
   // A keyboard step: orbit about plant up through the target, tilt, zoom.
   const applyStep = useEffectEvent(() => {
     const { camera, invalidate } = get();
     if (!controls || step.nonce === 0) return;
-    moved.current = true;
+    policy.current.userMoved();
     const offset = camera.position.clone().sub(controls.target);
     offset.applyAxisAngle(UP, (step.azimuthDeg * Math.PI) / 180);
     if (step.elevationDeg !== 0) {
