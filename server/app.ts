@@ -20,6 +20,7 @@ import { authRouter } from './modules/auth/auth.router';
 import { AuthService } from './modules/auth/auth.service';
 import { createPassport } from './modules/auth/passport';
 import { endExpiredSessions } from './modules/auth/session-lifetime.middleware';
+import { Reauthenticator } from './modules/auth/reauthenticate';
 import { SignInThrottle } from './modules/auth/sign-in-throttle';
 import { healthRouter } from './modules/health/health.router';
 import { jobRouter } from './modules/jobs/job.router';
@@ -64,6 +65,8 @@ export function createApp(options: AppOptions): TacklineApp {
 
   const authService = new AuthService(ds, audit, config.bcryptCost);
   const users = new UserService(ds, audit, config.bcryptCost);
+  // One throttle for sign-in and re-authentication: both are password guesses at one account.
+  const signInThrottle = new SignInThrottle(ds, config.signIn);
   const jobs = new JobService(ds, audit);
   const spools = new SpoolService(ds, audit, jobs);
   const revisions = new RevisionService(ds, audit, spools);
@@ -138,11 +141,11 @@ export function createApp(options: AppOptions): TacklineApp {
       passport,
       auth: authService,
       users,
-      throttle: new SignInThrottle(ds, config.signIn),
+      throttle: signInThrottle,
       cookieName: SESSION_COOKIE,
     }),
   );
-  api.use('/users', userRouter(users));
+  api.use('/users', userRouter(users, new Reauthenticator(ds, signInThrottle)));
   api.use('/audit-events', auditRouter(new AuditQueryService(ds)));
   api.use('/jobs', jobRouter(jobs));
   api.use('/jobs/:jobId/spools', jobSpoolRouter(spools));

@@ -5,6 +5,7 @@ export const errorCodeSchema = z.enum([
   'invalid_request',
   'unauthenticated',
   'forbidden',
+  'reauthentication_failed',
   'not_found',
   'duplicate',
   'stale_version',

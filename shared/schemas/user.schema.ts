@@ -28,6 +28,13 @@ export const newPasswordSchema = textSchema()
   .min(10, 'Use at least 10 characters')
   .refine((p) => utf8Length(p) <= 72, 'Use at most 72 bytes');
 
+/**
+ * The acting user's own password, sent again with every user-administration write so a
+ * session left open (or stolen) cannot create accounts, change roles or reset passwords.
+ * Capped in length so a huge string never reaches bcrypt (which reads at most 72 bytes).
+ */
+export const currentPasswordSchema = textSchema().min(1, 'Enter your password').max(200);
+
 /** A user as the API returns it. Never carries the password hash. */
 export const userSchema = z.object({
   id: idSchema,
@@ -51,6 +58,7 @@ export const userCreateSchema = z
     displayName: displayNameSchema,
     role: roleSchema,
     password: newPasswordSchema,
+    currentPassword: currentPasswordSchema,
   })
   .strict();
 /** Parsed `POST /api/users` body. */
@@ -63,13 +71,16 @@ export const userUpdateSchema = z
     role: roleSchema.optional(),
     active: z.boolean().optional(),
     version: z.number().int().min(1).optional(),
+    currentPassword: currentPasswordSchema,
   })
   .strict();
 /** Parsed `PATCH /api/users/:id` body. */
 export type UserUpdate = z.infer<typeof userUpdateSchema>;
 
 /** `POST /api/users/:id/reset-password` body (admin). */
-export const passwordResetSchema = z.object({ password: newPasswordSchema }).strict();
+export const passwordResetSchema = z
+  .object({ password: newPasswordSchema, currentPassword: currentPasswordSchema })
+  .strict();
 /** Parsed password reset body. */
 export type PasswordReset = z.infer<typeof passwordResetSchema>;
 

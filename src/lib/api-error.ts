@@ -3,6 +3,7 @@ export type ApiErrorCode =
   | 'invalid_request'
   | 'unauthenticated'
   | 'forbidden'
+  | 'reauthentication_failed'
   | 'not_found'
   | 'stale_version'
   | 'job_archived'

@@ -3,7 +3,7 @@ import { startAppServer, type RunningApp } from './helpers/app-server';
 import { launchBrowser, type TestBrowser } from './helpers/browser';
 import { saveScreenshot } from './helpers/screenshots';
 import type { Page } from 'playwright-core';
-import { DEMO_ORGANISATIONS } from '../../server/db/seed/demo-data';
+import { DEMO_ORGANISATIONS, DEMO_PASSWORD } from '../../server/db/seed/demo-data';
 import { DEMO_USERS, signInAs, signOut } from './helpers/sign-in';
 
 // The demo job as the seed defines it, so the test follows the demo data rather than copying it.
@@ -271,6 +271,11 @@ describe('jobs and spools in the browser', () => {
     await addUser.getByRole('button', { name: 'Add user' }).click();
     await addUser.getByText('Use at least 10 characters').waitFor();
     await addUser.getByLabel('First password').fill('bevel-and-land-2026');
+    // Account changes ask for the admin's own password again; a wrong one changes nothing.
+    await addUser.getByLabel('Your password').fill('not-the-admin-password');
+    await addUser.getByRole('button', { name: 'Add user' }).click();
+    await addUser.getByText('That is not your password').waitFor();
+    await addUser.getByLabel('Your password').fill(DEMO_PASSWORD);
     await addUser.getByRole('button', { name: 'Add user' }).click();
     await addUser.waitFor({ state: 'hidden' });
     const tamsin = page.getByRole('row').filter({ hasText: 'Tamsin Oakridge' });
@@ -279,11 +284,14 @@ describe('jobs and spools in the browser', () => {
     // Role changes and deactivation are confirmed first, then show in the row.
     await tamsin.getByLabel('Role of Tamsin Oakridge').selectOption('inspector');
     const confirmRole = page.getByRole('dialog', { name: 'Make Tamsin Oakridge inspector?' });
+    await confirmRole.getByLabel('Your password').fill(DEMO_PASSWORD);
     await confirmRole.getByRole('button', { name: 'Change role' }).click();
     await confirmRole.waitFor({ state: 'hidden' });
     await expect(tamsin.getByLabel('Role of Tamsin Oakridge').inputValue()).resolves.toBe('inspector');
     await tamsin.getByRole('button', { name: 'Deactivate' }).click();
-    await page.getByRole('dialog', { name: 'Deactivate Tamsin Oakridge?' }).getByRole('button', { name: 'Deactivate' }).click();
+    const confirmOff = page.getByRole('dialog', { name: 'Deactivate Tamsin Oakridge?' });
+    await confirmOff.getByLabel('Your password').fill(DEMO_PASSWORD);
+    await confirmOff.getByRole('button', { name: 'Deactivate' }).click();
     await tamsin.getByText('Deactivated').waitFor();
     await tamsin.getByRole('button', { name: 'Reactivate' }).waitFor();
 

@@ -129,7 +129,13 @@ describe('bad input', () => {
       () =>
         admin
           .post('/api/users')
-          .send({ email: 'x@bad.example', displayName: 'X', role: 'owner', password: 'long-enough-1' }),
+          .send({
+            email: 'x@bad.example',
+            displayName: 'X',
+            role: 'owner',
+            password: 'long-enough-1',
+            currentPassword: PASSWORD,
+          }),
       400,
       'invalid_request',
     );
@@ -137,7 +143,13 @@ describe('bad input', () => {
       () =>
         admin
           .post('/api/users')
-          .send({ email: 'x@bad.example', displayName: 'X', role: 'viewer', password: 'short' }),
+          .send({
+            email: 'x@bad.example',
+            displayName: 'X',
+            role: 'viewer',
+            password: 'short',
+            currentPassword: PASSWORD,
+          }),
       400,
       'invalid_request',
     );

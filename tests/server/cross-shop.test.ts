@@ -91,14 +91,13 @@ describe("another shop's records", () => {
       },
     });
     expect(res.status).toBe(201);
-    const user = await fenwickAdmin
-      .post('/api/users')
-      .send({
-        email: kestrel.email('viewer'),
-        displayName: 'Same address',
-        role: 'viewer',
-        password: 'another-password',
-      });
+    const user = await fenwickAdmin.post('/api/users').send({
+      email: kestrel.email('viewer'),
+      displayName: 'Same address',
+      role: 'viewer',
+      password: 'another-password',
+      currentPassword: PASSWORD,
+    });
     expect(user.status).toBe(201);
   });
 });

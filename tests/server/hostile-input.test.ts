@@ -103,6 +103,7 @@ describe('NUL and lone surrogates: 400 naming the field', () => {
           displayName: bad,
           role: 'viewer',
           password: 'a-long-password',
+          currentPassword: PASSWORD,
         }),
       );
       expect(user.error?.details?.issues?.[0]?.path).toEqual(['displayName']);

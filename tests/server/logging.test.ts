@@ -60,6 +60,7 @@ describe('server log', () => {
         displayName: 'New User',
         role: 'viewer',
         password: newPassword,
+        currentPassword: PASSWORD,
       });
     expect(res.status).toBe(500);
     expect(res.body.error.code).toBe('internal_error');

@@ -93,8 +93,13 @@ describe('optimistic locking', () => {
 
   it('user PATCH with a stale version gets 409', async () => {
     const user = await createUser(db.dataSource, shop, 'viewer');
-    await admin.patch(`/api/users/${user.id}`).send({ displayName: 'One', version: 1 }).expect(200);
-    const res = await admin.patch(`/api/users/${user.id}`).send({ displayName: 'Two', version: 1 });
+    await admin
+      .patch(`/api/users/${user.id}`)
+      .send({ displayName: 'One', version: 1, currentPassword: PASSWORD })
+      .expect(200);
+    const res = await admin
+      .patch(`/api/users/${user.id}`)
+      .send({ displayName: 'Two', version: 1, currentPassword: PASSWORD });
     expect(res.status).toBe(409);
     expect(res.body.error.details.current).toMatchObject({ displayName: 'One', version: 2 });
   });

@@ -96,7 +96,13 @@ describe('a crash in the middle of a multi-row write', () => {
       'user.create',
       'post',
       () => '/api/users',
-      () => ({ email: 'tx@tx.example', displayName: 'Tx', role: 'viewer', password: 'long-password-1' }),
+      () => ({
+        email: 'tx@tx.example',
+        displayName: 'Tx',
+        role: 'viewer',
+        password: 'long-password-1',
+        currentPassword: PASSWORD,
+      }),
     ],
   ] as const)('%s leaves nothing behind when its audit write fails', async (action, method, path, body) => {
     const job = await createJob(db.dataSource, shop);

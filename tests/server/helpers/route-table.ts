@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import type { Role } from '../../../shared/schemas/role.schema';
 import type { SpoolStatus } from '../../../shared/schemas/spool-status.schema';
 import { SpoolEntity } from '../../../server/modules/spools/spool.entity';
-import { createJob, createSpool, createUser, SPEC, type Shop } from './fixtures';
+import { createJob, createSpool, createUser, PASSWORD, SPEC, type Shop } from './fixtures';
 
 /** One API route, with what a call needs: its records (fresh per call) and its body. */
 export interface RouteCase {
@@ -56,6 +56,7 @@ export const ROUTES: RouteCase[] = [
         displayName: 'New Person',
         role: 'viewer',
         password: 'a-long-password',
+        currentPassword: PASSWORD,
       },
     }),
   },
@@ -71,7 +72,10 @@ export const ROUTES: RouteCase[] = [
     allowed: ['admin'],
     prepare: async (ds, shop) => {
       const user = await createUser(ds, shop, 'viewer');
-      return { path: `/api/users/${user.id}`, body: { displayName: 'Renamed', role: 'inspector' } };
+      return {
+        path: `/api/users/${user.id}`,
+        body: { displayName: 'Renamed', role: 'inspector', currentPassword: PASSWORD },
+      };
     },
   },
   {
@@ -80,7 +84,10 @@ export const ROUTES: RouteCase[] = [
     allowed: ['admin'],
     prepare: async (ds, shop) => {
       const user = await createUser(ds, shop, 'viewer');
-      return { path: `/api/users/${user.id}/reset-password`, body: { password: 'another-long-password' } };
+      return {
+        path: `/api/users/${user.id}/reset-password`,
+        body: { password: 'another-long-password', currentPassword: PASSWORD },
+      };
     },
   },
   {

@@ -9,8 +9,9 @@ import { SelectField, TextField } from '../../../components/ui/Field';
 import { ApiError, issuesOf } from '../../../lib/api-error';
 import { applyServerIssues } from '../../../lib/form-errors';
 import { roleDuties, roleLabels } from '../../auth/permissions';
+import { CURRENT_PASSWORD_HINT, CURRENT_PASSWORD_LABEL, currentPasswordError } from './reauthentication';
 
-const FIELDS = ['email', 'displayName', 'role', 'password'] as const;
+const FIELDS = ['email', 'displayName', 'role', 'password', 'currentPassword'] as const;
 export const roleOptions = ROLES.map((r) => ({ value: r, label: `${roleLabels[r]} — ${roleDuties[r]}` }));
 
 interface UserFormProps {
@@ -29,16 +30,19 @@ export function UserForm({ busy, error, onSubmit, onCancel }: UserFormProps) {
     formState: { errors },
   } = useForm({
     resolver: zodResolver(userCreateSchema),
-    defaultValues: { email: '', displayName: '', role: 'fabricator' as Role, password: '' },
+    defaultValues: { email: '', displayName: '', role: 'fabricator' as Role, password: '', currentPassword: '' },
   });
   useEffect(() => {
     if (error) applyServerIssues(error, setError, FIELDS);
     if (error instanceof ApiError && error.code === 'duplicate') {
       setError('email', { type: 'server', message: 'Someone in the shop already signs in with this e-mail.' });
     }
+    const wrong = currentPasswordError(error);
+    if (wrong) setError('currentPassword', { type: 'server', message: wrong });
   }, [error, setError]);
   const placed = issuesOf(error).some((i) => (FIELDS as readonly string[]).includes(i.path.join('.')));
-  const showGeneral = Boolean(error) && !placed && !(error instanceof ApiError && error.code === 'duplicate');
+  const showGeneral =
+    Boolean(error) && !placed && !currentPasswordError(error) && !(error instanceof ApiError && error.code === 'duplicate');
 
   return (
     <form noValidate onSubmit={handleSubmit(onSubmit)} className="flex flex-col gap-4">
@@ -52,6 +56,14 @@ export function UserForm({ busy, error, onSubmit, onCancel }: UserFormProps) {
         hint="At least 10 characters. Hand it over in person; they can be given a new one any time."
         error={errors.password?.message}
         {...register('password')}
+      />
+      <TextField
+        label={CURRENT_PASSWORD_LABEL}
+        type="password"
+        autoComplete="current-password"
+        hint={CURRENT_PASSWORD_HINT}
+        error={errors.currentPassword?.message}
+        {...register('currentPassword')}
       />
       {showGeneral ? <InlineError error={error} /> : null}
       <div className="flex justify-end gap-2 border-t border-steel-200 pt-4">

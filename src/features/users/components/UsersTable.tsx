@@ -7,7 +7,9 @@ import { StatusBadge } from '../../../components/ui/StatusBadge';
 import { Table, type SortOrder } from '../../../components/ui/Table';
 import { formatDateTime } from '../../../lib/format-date';
 import { useUpdateUser } from '../api/update-user';
+import { TextField } from '../../../components/ui/Field';
 import { ResetPasswordDialog } from './ResetPasswordDialog';
+import { CURRENT_PASSWORD_HINT, CURRENT_PASSWORD_LABEL, currentPasswordError } from './reauthentication';
 import { ROLES } from '../../../../shared/schemas/role.schema';
 import { roleLabels } from '../../auth/permissions';
 
@@ -25,16 +27,33 @@ interface UsersTableProps {
 export function UsersTable({ users, currentUserId, sort, onSort, busy }: UsersTableProps) {
   const update = useUpdateUser();
   const pendingId = update.isPending ? update.variables?.id : undefined;
-  // Role changes and deactivation change what someone can do at once: confirm them first.
+  // Role changes and (re)activation change what someone can do at once: confirm them first,
+  // with the admin's own password (the server refuses any account change without it).
   const [pending, setPending] = useState<{ user: User; role?: Role; active?: boolean } | null>(null);
+  const [currentPassword, setCurrentPassword] = useState('');
+  const [emptyPassword, setEmptyPassword] = useState(false);
+  const ask = (next: { user: User; role?: Role; active?: boolean }) => {
+    update.reset();
+    setCurrentPassword('');
+    setEmptyPassword(false);
+    setPending(next);
+  };
   const confirm = () => {
     if (!pending) return;
+    if (!currentPassword) {
+      setEmptyPassword(true);
+      return;
+    }
     const { user, role, active } = pending;
     update.mutate(
-      { id: user.id, body: { ...(role ? { role } : {}), ...(active !== undefined ? { active } : {}), version: user.version } },
+      {
+        id: user.id,
+        body: { ...(role ? { role } : {}), ...(active !== undefined ? { active } : {}), version: user.version, currentPassword },
+      },
       { onSuccess: () => setPending(null) },
     );
   };
+  const wrongPassword = currentPasswordError(update.error);
   return (
     <>
       <Table
@@ -67,7 +86,7 @@ export function UsersTable({ users, currentUserId, sort, onSort, busy }: UsersTa
                 value={u.role}
                 disabled={u.id === currentUserId || pendingId === u.id}
                 title={u.id === currentUserId ? 'You cannot change your own role' : undefined}
-                onChange={(e) => setPending({ user: u, role: e.target.value as Role })}
+                onChange={(e) => ask({ user: u, role: e.target.value as Role })}
                 className="min-h-11 rounded-md border border-steel-300 bg-white px-2 text-sm disabled:bg-steel-100"
               >
                 {roleOptions.map((o) => (
@@ -94,7 +113,7 @@ export function UsersTable({ users, currentUserId, sort, onSort, busy }: UsersTa
                   <Button
                     variant="ghost"
                     busy={pendingId === u.id}
-                    onClick={() => (u.active ? setPending({ user: u, active: false }) : update.mutate({ id: u.id, body: { active: true, version: u.version } }))}
+                    onClick={() => ask({ user: u, active: !u.active })}
                   >
                     {u.active ? 'Deactivate' : 'Reactivate'}
                   </Button>
@@ -109,21 +128,41 @@ export function UsersTable({ users, currentUserId, sort, onSort, busy }: UsersTa
         title={
           pending?.role
             ? `Make ${pending.user.displayName} ${roleLabels[pending.role].toLowerCase()}?`
-            : `Deactivate ${pending?.user.displayName ?? ''}?`
+            : pending?.active
+              ? `Reactivate ${pending.user.displayName}?`
+              : `Deactivate ${pending?.user.displayName ?? ''}?`
         }
-        confirmLabel={pending?.role ? 'Change role' : 'Deactivate'}
-        tone={pending?.role ? 'primary' : 'danger'}
+        confirmLabel={pending?.role ? 'Change role' : pending?.active ? 'Reactivate' : 'Deactivate'}
+        tone={pending?.role || pending?.active ? 'primary' : 'danger'}
         busy={update.isPending}
-        error={pending ? update.error : null}
+        error={pending && !wrongPassword ? update.error : null}
         onCancel={() => {
           setPending(null);
           update.reset();
         }}
         onConfirm={confirm}
       >
-        {pending?.role
-          ? 'What they can see and do changes from their next request.'
-          : 'They can no longer sign in. Their name stays on every record they made; you can reactivate them later.'}
+        <p>
+          {pending?.role
+            ? 'What they can see and do changes from their next request.'
+            : pending?.active
+              ? 'They can sign in again with their last password.'
+              : 'They can no longer sign in. Their name stays on every record they made; you can reactivate them later.'}
+        </p>
+        <div className="mt-3">
+          <TextField
+            label={CURRENT_PASSWORD_LABEL}
+            type="password"
+            autoComplete="current-password"
+            hint={CURRENT_PASSWORD_HINT}
+            value={currentPassword}
+            onChange={(e) => {
+              setCurrentPassword(e.target.value);
+              setEmptyPassword(false);
+            }}
+            error={emptyPassword ? 'Enter your password' : (wrongPassword ?? undefined)}
+          />
+        </div>
       </ConfirmDialog>
       {update.error && !pending ? (
         <p role="alert" className="mt-2 rounded-md bg-danger-50 px-3 py-2 text-sm text-danger-700">
