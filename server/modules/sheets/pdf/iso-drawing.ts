@@ -229,12 +229,73 @@ export function drawIsometric(
       { x: p.x - labelW / 2, y: p.y + 10 },
       { x: p.x - labelW / 2, y: p.y - 10 - sizes.small },
     ];
-    const chosen =
-      spots[placer.place(spots.map((q) => ({ x: q.x, y: q.y, w: labelW, h: sizes.small + 2 })))]!;
+    const near = spots.length;
+    // On a straight run the CoG lies on the pipe, and every spot beside the mark is on the
+    // pipe's line too: further spots, joined to the mark by a leader.
+    for (const reach of [22, 40]) {
+      for (let k = 0; k < 8; k += 1) {
+        const a = (k * Math.PI) / 4 + Math.PI / 8;
+        const cx = p.x + Math.cos(a) * reach;
+        const cy = p.y + Math.sin(a) * reach;
+        spots.push({ x: cx < p.x ? cx - labelW : cx, y: cy - (sizes.small + 2) / 2 });
+      }
+    }
+    // The placer keeps labels off labels; the pipe lines themselves are checked here.
+    const lines = result.runs.map((r) => [view.project(r.start), view.project(r.end)] as const);
+    const boxes = spots.map((q) => ({ x: q.x, y: q.y, w: labelW, h: sizes.small + 2 }));
+    const clear = boxes
+      .map((b, i) => ({ b, i }))
+      .filter(({ b }) => !lines.some(([a, c]) => segmentMeetsRect(a, c, b, 4)));
+    const pool = clear.length > 0 ? clear : boxes.map((b, i) => ({ b, i }));
+    const index = pool[placer.place(pool.map(({ b }) => b))]!.i;
+    const chosen = spots[index]!;
     const lx = chosen.x;
     const ly = chosen.y;
+    if (index >= near) {
+      const end = { x: lx < p.x ? lx + labelW : lx, y: ly + (sizes.small + 2) / 2 };
+      doc.save().lineWidth(0.5).strokeColor(INK.warn).moveTo(p.x, p.y).lineTo(end.x, end.y).stroke().restore();
+    }
     drawText(doc, cogText, lx, ly, { font: 'cond-bold', size: sizes.small, color: INK.warn, width: labelW });
   }
   doc.restore();
   return printed;
+}
+
+/** Whether segment a–b passes within `pad` of rectangle `r` (page coordinates). */
+export function segmentMeetsRect(
+  a: { x: number; y: number },
+  b: { x: number; y: number },
+  r: { x: number; y: number; w: number; h: number },
+  pad: number,
+): boolean {
+  const x0 = r.x - pad;
+  const y0 = r.y - pad;
+  const x1 = r.x + r.w + pad;
+  const y1 = r.y + r.h + pad;
+  // Liang–Barsky clipping: the segment meets the box if some part of it survives the clip.
+  let t0 = 0;
+  let t1 = 1;
+  const dx = b.x - a.x;
+  const dy = b.y - a.y;
+  const edges: Array<[number, number]> = [
+    [-dx, a.x - x0],
+    [dx, x1 - a.x],
+    [-dy, a.y - y0],
+    [dy, y1 - a.y],
+  ];
+  for (const [p, q] of edges) {
+    if (p === 0) {
+      if (q < 0) return false;
+      continue;
+    }
+    const t = q / p;
+    if (p < 0) {
+      if (t > t1) return false;
+      if (t > t0) t0 = t;
+    } else {
+      if (t < t0) return false;
+      if (t < t1) t1 = t;
+    }
+  }
+  return t0 <= t1;
 }
