@@ -52,7 +52,12 @@ export function drawIsometric(
   // Leave room round the spool for dimensions (inner ring) and overall dimensions (outer ring).
   // Run dimensions sit 20–50 pt off the pipe; overall dimensions a ring beyond everything.
   const ring = 62;
-  const view = fitIsoViewport(points, area, ring + sizes.dimension * 2 + 10);
+  // The footer (cautions, scale note, overall sizes) owns the bottom of the area: the spool
+  // and its dimension rings are fitted above it, so no extension line crosses a footnote.
+  const cautionH = measureWrapped(doc, SHORT_CAUTION, area.w - 8, { size: sizes.small });
+  const footerH = cautionH + 3 + 2 * (sizes.small + 3) + 4;
+  const drawingArea = { ...area, h: Math.max(area.h / 2, area.h - footerH) };
+  const view = fitIsoViewport(points, drawingArea, ring + sizes.dimension * 2 + 10);
   const placer = new LabelPlacer(area);
   const marks = shopMarks(result);
   const centroid = pageCentroid(view, points);
@@ -64,7 +69,6 @@ export function drawIsometric(
   const arrowBox = drawNorthArrow(doc, { x: area.x + 56, y: area.y + 44 }, sizes);
   placer.reserve(arrowBox);
   // Footer lines under the drawing (bottom up): cautions, scale note, overall sizes.
-  const cautionH = measureWrapped(doc, SHORT_CAUTION, area.w - 8, { size: sizes.small });
   let footY = area.y + area.h - cautionH - 3;
   drawText(doc, SHORT_CAUTION, area.x + 4, footY, {
     size: sizes.small,
