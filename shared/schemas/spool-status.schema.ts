@@ -44,16 +44,7 @@ export function allowedSpoolStatusTargets(role: Role, from: SpoolStatus): SpoolS
 export const SPOOL_STATUS_ROLES: readonly Role[] = ['admin', 'fabricator', 'inspector'];
 
 /** The shop stages in the order a spool moves through them (`on-hold` stands outside). */
-const STAGE_SEQUENCE: readonly SpoolStatus[] = [
-  'drafting',
-  'issued',
-  'cut',
-  'fitted',
-  'welded',
-  'inspected',
-  'released',
-  'shipped',
-];
+const STAGE_SEQUENCE: readonly SpoolStatus[] = spoolStatusSchema.options.filter((s) => s !== 'on-hold');
 
 /** The stage a revision change undoes (see `ShopStageUndone` in shared/engine/revision-diff). */
 export type StageUndone = 'cut' | 'fit' | 'weld' | 'none';
